@@ -1,0 +1,305 @@
+/**
+ * Stock plan: pack profile cuts into stock bars (one-dimensional cutting stock). Lengths in mm.
+ *
+ * Model
+ * - usable length = stockLength − endTrim (endTrim is the total squared off the bar, both ends together);
+ * - every cut consumes its length plus one kerf, except that a bar's last cut needs no saw cut when it
+ *   runs to the end of the usable length: a bar holds cuts c₁…cₙ when Σcᵢ + (n − 1)·kerf ≤ usable.
+ *   Equivalently each cut has size c + kerf in a bar of capacity usable + kerf, which is how the
+ *   packing below sees it;
+ * - offcut = usable − Σcᵢ − n·kerf (never below 0); reusable when offcut ≥ minReusableOffcut;
+ * - lowerBound = ceil(Σ(c + kerf) / (usable + kerf)), which is ceil(total length / usable) without kerf;
+ * - wasteLength = everything bought that is neither a cut nor a reusable offcut (end trim, kerf, short offcuts).
+ *
+ * Method: first-fit-decreasing (FFD) and best-fit-decreasing baselines; when they miss the lower
+ * bound, exact branch and bound for small sets, and column generation (revised simplex over cutting
+ * patterns with a bounded-knapsack pricing step) followed by rounding for larger ones. The better
+ * plan wins, so the result is never worse than FFD. Column generation and the leftover search run
+ * under fixed work limits (counted steps, not clock time), so the same input always gives the same plan.
+ */
+
+import { LENGTH_TOLERANCE, boundedKnapsack, columnGenerationPlan } from './cuttingPatterns';
+import { packIntoBars } from './binPackingSearch';
+
+export { boundedKnapsack } from './cuttingPatterns';
+
+export interface StockCut {
+  id: string;
+  /** mm */
+  length: number;
+  label?: string;
+}
+
+export interface StockPlanInput {
+  cuts: StockCut[];
+  /** mm, length of one stock bar as bought */
+  stockLength: number;
+  /** mm, saw blade width lost per cut */
+  kerf: number;
+  /** mm, total trimmed from a bar before cutting (both ends together) */
+  endTrim: number;
+  /** mm, an offcut at least this long is kept for reuse */
+  minReusableOffcut: number;
+}
+
+export interface StockBar {
+  index: number;
+  cuts: StockCut[];
+  /** mm of the usable length consumed by cuts and kerfs */
+  usedLength: number;
+  /** mm left over at the end of the usable length */
+  offcut: number;
+  reusable: boolean;
+}
+
+export interface StockPlan {
+  bars: StockBar[];
+  barCount: number;
+  lowerBound: number;
+  firstFitDecreasingBarCount: number;
+  /** mm, sum of placed cut lengths */
+  totalCutLength: number;
+  /** mm, bought length that is neither a placed cut nor a reusable offcut */
+  wasteLength: number;
+  method: string;
+  unplaceable: StockCut[];
+}
+
+/** Exact search is used up to this many cuts. */
+const EXACT_SEARCH_MAX_CUTS = 30;
+/** Search nodes allowed for each bar count tried by the exact search. */
+const EXACT_SEARCH_NODE_LIMIT = 100_000;
+/** Column generation runs up to this many distinct lengths (its cost grows with the square of it). */
+const COLUMN_GENERATION_MAX_TYPES = 40;
+/** Search nodes allowed to fill one bar in the minimum-slack heuristic. */
+const MINIMUM_SLACK_NODE_LIMIT = 2_000;
+
+interface PackingProblem {
+  usable: number;
+  capacity: number;
+  kerf: number;
+  placeable: StockCut[];
+  unplaceable: StockCut[];
+}
+
+function preparePacking(input: StockPlanInput): PackingProblem {
+  const usable = input.stockLength - input.endTrim;
+  const kerf = Math.max(0, input.kerf);
+  const placeable: StockCut[] = [];
+  const unplaceable: StockCut[] = [];
+  for (const cut of input.cuts) {
+    const fits = Number.isFinite(cut.length) && cut.length > 0 && usable > 0 && cut.length <= usable + LENGTH_TOLERANCE;
+    (fits ? placeable : unplaceable).push(cut);
+  }
+  return { usable, capacity: usable + kerf, kerf, placeable, unplaceable };
+}
+
+function byLengthDescending(a: StockCut, b: StockCut): number {
+  return b.length - a.length || (a.id < b.id ? -1 : a.id > b.id ? 1 : 0);
+}
+
+function toStockBars(groups: StockCut[][], problem: PackingProblem, minReusableOffcut: number): StockBar[] {
+  return groups.map((cuts, index) => {
+    const sorted = [...cuts].sort(byLengthDescending);
+    const consumed = sorted.reduce((sum, cut) => sum + cut.length + problem.kerf, 0);
+    const usedLength = Math.min(problem.usable, consumed);
+    const offcut = Math.max(0, problem.usable - consumed);
+    return {
+      index,
+      cuts: sorted,
+      usedLength,
+      offcut,
+      reusable: offcut > LENGTH_TOLERANCE && offcut >= minReusableOffcut - LENGTH_TOLERANCE,
+    };
+  });
+}
+
+function fitDecreasing(problem: PackingProblem, rule: 'first' | 'best'): StockCut[][] {
+  const groups: StockCut[][] = [];
+  const loads: number[] = [];
+  for (const cut of [...problem.placeable].sort(byLengthDescending)) {
+    const size = cut.length + problem.kerf;
+    let chosen = -1;
+    for (let bar = 0; bar < loads.length; bar++) {
+      if (loads[bar] + size > problem.capacity + LENGTH_TOLERANCE) continue;
+      if (rule === 'first') {
+        chosen = bar;
+        break;
+      }
+      if (chosen < 0 || loads[bar] > loads[chosen]) chosen = bar;
+    }
+    if (chosen < 0) {
+      groups.push([]);
+      loads.push(0);
+      chosen = loads.length - 1;
+    }
+    groups[chosen].push(cut);
+    loads[chosen] += size;
+  }
+  return groups;
+}
+
+/** First-fit-decreasing packing of the placeable cuts into bars (mm in, bars out); the baseline every plan must match or beat. */
+export function firstFitDecreasing(input: StockPlanInput): StockBar[] {
+  const problem = preparePacking(input);
+  return toStockBars(fitDecreasing(problem, 'first'), problem, input.minReusableOffcut);
+}
+
+/** Lower bound on the bar count: ceil(Σ(cut + kerf) / (usable + kerf)) over the placeable cuts (lengths in mm). */
+export function stockLowerBound(input: StockPlanInput): number {
+  const problem = preparePacking(input);
+  return lowerBoundOf(problem);
+}
+
+function lowerBoundOf(problem: PackingProblem): number {
+  if (problem.placeable.length === 0) return 0;
+  const total = problem.placeable.reduce((sum, cut) => sum + cut.length + problem.kerf, 0);
+  return Math.max(1, Math.ceil(total / problem.capacity - 1e-9));
+}
+
+// ---------------------------------------------------------------------------------------------
+// Exact search for small sets
+
+
+function exactSearch(problem: PackingProblem, lowerBound: number, upperBound: number): StockCut[][] | null {
+  const sorted = [...problem.placeable].sort(byLengthDescending);
+  const sizes = sorted.map((cut) => cut.length + problem.kerf);
+  for (let barCount = lowerBound; barCount < upperBound; barCount++) {
+    const { bins, complete } = packIntoBars(sizes, problem.capacity, barCount, EXACT_SEARCH_NODE_LIMIT);
+    if (bins) {
+      const groups: StockCut[][] = Array.from({ length: barCount }, () => []);
+      bins.forEach((bar, item) => groups[bar].push(sorted[item]));
+      return groups.filter((group) => group.length > 0);
+    }
+    if (!complete) return null; // out of effort: the heuristics' answer stands
+  }
+  return null;
+}
+
+/** Packs a set by first fit decreasing, then by exact search when it is small and FFD misses the bound. */
+function packSmallSet(problem: PackingProblem, enough = 0): StockCut[][] {
+  const firstFit = fitDecreasing(problem, 'first');
+  const bound = Math.max(lowerBoundOf(problem), enough);
+  if (firstFit.length <= bound || problem.placeable.length > EXACT_SEARCH_MAX_CUTS) return firstFit;
+  return exactSearch(problem, bound, firstFit.length) ?? firstFit;
+}
+
+// ---------------------------------------------------------------------------------------------
+// Column generation over cutting patterns
+
+interface CuttingTypes {
+  /** distinct lengths, longest first */
+  lengths: number[];
+  sizes: number[];
+  demand: number[];
+  cutsByType: StockCut[][];
+}
+
+function groupByLength(problem: PackingProblem): CuttingTypes {
+  const sorted = [...problem.placeable].sort(byLengthDescending);
+  const lengths: number[] = [];
+  const cutsByType: StockCut[][] = [];
+  for (const cut of sorted) {
+    const last = lengths.length - 1;
+    if (last >= 0 && Math.abs(lengths[last] - cut.length) <= LENGTH_TOLERANCE) cutsByType[last].push(cut);
+    else {
+      lengths.push(cut.length);
+      cutsByType.push([cut]);
+    }
+  }
+  return {
+    lengths,
+    sizes: lengths.map((_, type) => Math.max(...cutsByType[type].map((cut) => cut.length)) + problem.kerf),
+    demand: cutsByType.map((cuts) => cuts.length),
+    cutsByType,
+  };
+}
+
+/** Turns patterns into bars of real cuts; cuts the patterns leave over are packed by first fit decreasing. */
+function patternsToGroups(patterns: number[][], types: CuttingTypes, problem: PackingProblem, enoughBars = 0): StockCut[][] {
+  const queues = types.cutsByType.map((cuts) => [...cuts]);
+  const groups = patterns.map((pattern) => {
+    const group: StockCut[] = [];
+    pattern.forEach((count, type) => {
+      for (let k = 0; k < count; k++) group.push(queues[type].pop()!);
+    });
+    return group;
+  });
+  const leftover = queues.flat();
+  if (leftover.length > 0) groups.push(...packSmallSet({ ...problem, placeable: leftover }, enoughBars - groups.length));
+  return groups;
+}
+
+/**
+ * Minimum bin slack (Gupta and Ho): fill one bar at a time with the longest remaining cut plus the
+ * subset of the rest that leaves the least slack (a bounded knapsack on lengths, node-limited).
+ */
+function minimumSlackPlan(types: CuttingTypes, capacity: number): number[][] {
+  const remaining = types.demand.slice();
+  const patterns: number[][] = [];
+  let left = remaining.reduce((sum, count) => sum + count, 0);
+  while (left > 0) {
+    const first = remaining.findIndex((count) => count > 0);
+    remaining[first] -= 1;
+    const room = capacity - types.sizes[first];
+    const fill = boundedKnapsack(types.sizes, types.sizes, remaining, room, MINIMUM_SLACK_NODE_LIMIT);
+    const pattern = fill.counts;
+    pattern[first] += 1;
+    pattern.forEach((count, type) => {
+      if (type !== first) remaining[type] -= count;
+      left -= count;
+    });
+    patterns.push(pattern);
+  }
+  return patterns;
+}
+
+// ---------------------------------------------------------------------------------------------
+
+/**
+ * Plans which cuts (mm) go on which stock bars (mm) with kerf and end trim (mm). Never uses more bars
+ * than first-fit-decreasing; cuts longer than the usable length are returned in `unplaceable`.
+ */
+export function planStock(input: StockPlanInput): StockPlan {
+  if (!(input.stockLength > 0)) throw new Error('The stock length must be greater than 0 mm.');
+  if (!(input.kerf >= 0) || !(input.endTrim >= 0)) throw new Error('Kerf and end trim cannot be negative.');
+  const problem = preparePacking(input);
+  const lowerBound = lowerBoundOf(problem);
+  const firstFit = fitDecreasing(problem, 'first');
+  let best = { groups: firstFit, method: 'first-fit-decreasing' };
+  const consider = (groups: StockCut[][] | null, method: string) => {
+    if (groups && groups.length < best.groups.length) best = { groups, method };
+  };
+
+  if (best.groups.length > lowerBound) consider(fitDecreasing(problem, 'best'), 'best-fit-decreasing');
+  if (best.groups.length > lowerBound && problem.placeable.length <= EXACT_SEARCH_MAX_CUTS) {
+    consider(exactSearch(problem, lowerBound, best.groups.length), 'branch-and-bound');
+  }
+  let target = lowerBound;
+  if (best.groups.length > target) {
+    const types = groupByLength(problem);
+    if (types.lengths.length <= COLUMN_GENERATION_MAX_TYPES) {
+      const planned = columnGenerationPlan(types, problem.capacity, best.groups.length, EXACT_SEARCH_MAX_CUTS);
+      // No plan beats the rounded-up LP optimum (an estimate if pricing was cut short), so the searches stop there.
+      target = Math.max(target, Math.ceil(planned.lpObjective - 1e-6));
+      consider(patternsToGroups(planned.patterns, types, problem, target), 'column-generation');
+    }
+    if (best.groups.length > target) {
+      consider(patternsToGroups(minimumSlackPlan(types, problem.capacity), types, problem), 'minimum-bin-slack');
+    }
+  }
+
+  const bars = toStockBars(best.groups, problem, input.minReusableOffcut);
+  const totalCutLength = problem.placeable.reduce((sum, cut) => sum + cut.length, 0);
+  const reusableLength = bars.reduce((sum, bar) => sum + (bar.reusable ? bar.offcut : 0), 0);
+  return {
+    bars,
+    barCount: bars.length,
+    lowerBound,
+    firstFitDecreasingBarCount: firstFit.length,
+    totalCutLength,
+    wasteLength: Math.max(0, bars.length * input.stockLength - totalCutLength - reusableLength),
+    method: best.method,
+    unplaceable: problem.unplaceable,
+  };
+}
