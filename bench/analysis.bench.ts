@@ -1,0 +1,83 @@
+/**
+ * Analysis speed on generated frames (quality.md): median analysis time at 500, 2,000 and 8,000
+ * profiles, the per-profile scaling ratio 500 → 8,000, and the interference grid against the
+ * all-pairs check at 2,000 profiles (same findings, speed-up). Wall time is the bar; CPU time of
+ * this process is shown beside it because the shared machine is often busy.
+ */
+import { analyzeDesign, createAnalysisContext } from '../src/domain/analyze';
+import { interferenceFindings, interferenceFindingsAllPairs } from '../src/domain/checks/interferenceFindings';
+import { largeFrame } from './largeFrame';
+import type { BenchRow } from './types';
+
+const BENCH = 'analysis';
+
+function median(values: number[]): number {
+  const s = [...values].sort((a, b) => a - b);
+  const m = s.length >> 1;
+  return s.length % 2 ? s[m] : (s[m - 1] + s[m]) / 2;
+}
+
+function measure(fn: () => void, runs: number, warmup: number): { wall: number; cpu: number } {
+  for (let i = 0; i < warmup; i++) fn();
+  const wall: number[] = [];
+  const cpu: number[] = [];
+  for (let i = 0; i < runs; i++) {
+    const c0 = process.cpuUsage();
+    const t0 = performance.now();
+    fn();
+    wall.push(performance.now() - t0);
+    const c = process.cpuUsage(c0);
+    cpu.push((c.user + c.system) / 1000);
+  }
+  return { wall: median(wall), cpu: median(cpu) };
+}
+
+export async function run(): Promise<BenchRow[]> {
+  const rows: BenchRow[] = [];
+  const perProfile: Record<number, { wall: number; cpu: number }> = {};
+  for (const size of [500, 2000, 8000]) {
+    const design = largeFrame({ profiles: size, overlapEvery: 25 });
+    const runs = size >= 8000 ? 9 : 21;
+    const t = measure(() => analyzeDesign(design, undefined, { timings: false }), runs, size >= 8000 ? 2 : 5);
+    const n = design.profiles.length;
+    perProfile[size] = { wall: t.wall / n, cpu: t.cpu / n };
+    if (size === 2000) {
+      const joints = design.joints.length;
+      const hardware = analyzeDesign(design).bom.filter((b) => b.category === 'connector' || b.category === 'fastener').reduce((s, b) => s + b.quantity, 0);
+      rows.push({ benchmark: BENCH, metric: `workload 2,000: profiles / joints / connectors+screws / panels`, value: n, unit: `${joints} j, ${hardware} hw, ${design.panels.length} panels` });
+    }
+    rows.push({
+      benchmark: BENCH,
+      metric: `median analyzeDesign, ${n} profiles (wall)`,
+      value: t.wall,
+      unit: 'ms',
+      ...(size === 2000 ? { bar: '< 50 ms', pass: t.wall < 50 } : {}),
+    });
+    rows.push({ benchmark: BENCH, metric: `median analyzeDesign, ${n} profiles (process CPU)`, value: t.cpu, unit: 'ms', ...(size === 2000 ? { bar: '< 50 ms', pass: t.cpu < 50 } : {}) });
+    if (size === 2000) {
+      // Stage breakdown from the analysis' own timings, median over runs.
+      const stages: Record<string, number[]> = {};
+      for (let i = 0; i < 9; i++) {
+        for (const [k, v] of Object.entries(analyzeDesign(design).timingsMs ?? {})) (stages[k] ??= []).push(v);
+      }
+      for (const [k, v] of Object.entries(stages)) rows.push({ benchmark: BENCH, metric: `  stage ${k}, 2,000 profiles`, value: median(v), unit: 'ms' });
+    }
+  }
+  const wallRatio = perProfile[8000].wall / perProfile[500].wall;
+  const cpuRatio = perProfile[8000].cpu / perProfile[500].cpu;
+  rows.push({ benchmark: BENCH, metric: 'time per profile, 8,000 vs 500 (wall)', value: wallRatio, unit: 'x', bar: '<= 1.5x', pass: wallRatio <= 1.5 });
+  rows.push({ benchmark: BENCH, metric: 'time per profile, 8,000 vs 500 (process CPU)', value: cpuRatio, unit: 'x', bar: '<= 1.5x', pass: cpuRatio <= 1.5 });
+
+  const design = largeFrame({ profiles: 2000, overlapEvery: 25 });
+  const ctx = createAnalysisContext(design);
+  const gridFindings = interferenceFindings(ctx);
+  const allPairsFindings = interferenceFindingsAllPairs(ctx);
+  const same = JSON.stringify(gridFindings) === JSON.stringify(allPairsFindings);
+  const grid = measure(() => interferenceFindings(ctx), 31, 5);
+  const allPairs = measure(() => interferenceFindingsAllPairs(ctx), 7, 1);
+  rows.push({ benchmark: 'interference', metric: 'grid, 2,000 profiles + panels (wall)', value: grid.wall, unit: 'ms' });
+  rows.push({ benchmark: 'interference', metric: 'all pairs, 2,000 profiles + panels (wall)', value: allPairs.wall, unit: 'ms' });
+  rows.push({ benchmark: 'interference', metric: 'speed-up grid vs all pairs', value: allPairs.wall / grid.wall, unit: 'x', bar: '>= 20x', pass: allPairs.wall / grid.wall >= 20 });
+  rows.push({ benchmark: 'interference', metric: `same findings (${gridFindings.length} overlaps)`, value: same ? 1 : 0, unit: 'bool', bar: '= 1', pass: same });
+  return rows;
+}

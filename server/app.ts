@@ -1,0 +1,85 @@
+import compression from 'compression';
+import express, { type Express } from 'express';
+import morgan from 'morgan';
+import type { AppConfig } from './config';
+import type { Database } from './db/database';
+import { consoleLogger, type Logger } from './logger';
+import { serveClient } from './middleware/clientStatic';
+import { csrfGuard } from './middleware/csrfGuard';
+import { apiNotFound, errorHandler } from './middleware/errorHandler';
+import { securityHeaders } from './middleware/securityHeaders';
+import { analysisRouter } from './modules/analysis/router';
+import { createPassport } from './modules/auth/passport';
+import { createPasswords, DEFAULT_PASSWORD_COST } from './modules/auth/passwords';
+import { authRouter } from './modules/auth/router';
+import { createAuthService } from './modules/auth/service';
+import { createSessionMiddleware, type SessionStore } from './modules/auth/sessionMiddleware';
+import { DEFAULT_SIGN_IN_RATE_LIMIT, signInRateLimiter, type SignInRateLimit } from './modules/auth/signInRateLimit';
+import { designsRouter } from './modules/designs/router';
+import { createDesignsService } from './modules/designs/service';
+import { healthRouter } from './modules/health/router';
+import { usersRouter } from './modules/users/router';
+import { createUsersService } from './modules/users/service';
+import { APP_VERSION } from './version';
+
+/** Outgoing mail; a local fake stands in until the mail module lands. */
+export interface Mailer {
+  send(message: { to: string; subject: string; text: string }): Promise<void>;
+}
+
+export interface AppDependencies {
+  config: AppConfig;
+  db: Database;
+  logger?: Logger;
+  rateLimit?: SignInRateLimit;
+  /** bcrypt cost for new password hashes (tests lower it). */
+  passwordCost?: number;
+  mailer?: Mailer;
+}
+
+const sessionStores = new WeakMap<Express, SessionStore>();
+
+/** Builds the whole HTTP application without listening, so tests can drive it on a temporary database. */
+export function createApp(deps: AppDependencies): Express {
+  const { config, db } = deps;
+  const logger = deps.logger ?? consoleLogger;
+  const production = config.nodeEnv === 'production';
+  const passwords = createPasswords(deps.passwordCost ?? DEFAULT_PASSWORD_COST);
+  const auth = createAuthService(db, passwords);
+  const passport = createPassport(auth);
+  const { middleware: sessions, store } = createSessionMiddleware(db, config.sessionSecret);
+
+  const app = express();
+  sessionStores.set(app, store);
+  app.disable('x-powered-by');
+  app.set('trust proxy', config.trustProxy);
+  app.set('query parser', 'simple');
+
+  app.use(securityHeaders({ production, behindTls: config.trustProxy !== false }));
+  app.use(compression());
+  if (config.logRequests) app.use(morgan(production ? 'combined' : 'dev'));
+
+  app.use('/api', express.json({ limit: '6mb' }));
+  app.use('/api', (_req, res, next) => {
+    res.setHeader('Cache-Control', 'no-store');
+    next();
+  });
+  app.use('/api/health', healthRouter(db, APP_VERSION, logger));
+  app.use('/api', csrfGuard, sessions, passport.initialize(), passport.session());
+
+  app.use('/api/auth', authRouter({ auth, passport, signInLimiter: signInRateLimiter(deps.rateLimit ?? DEFAULT_SIGN_IN_RATE_LIMIT) }));
+  app.use('/api/users', usersRouter(createUsersService(db, passwords)));
+  app.use('/api/designs', designsRouter(createDesignsService(db)));
+  app.use('/api/analysis', analysisRouter());
+  app.use('/api', apiNotFound);
+
+  if (production) serveClient(app, config.clientDist, logger);
+
+  app.use(errorHandler(logger));
+  return app;
+}
+
+/** Stops the app's background timers (expired-session sweeps) before the database closes. */
+export function stopBackgroundWork(app: Express): void {
+  sessionStores.get(app)?.stopExpiringSessions();
+}

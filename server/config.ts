@@ -1,0 +1,113 @@
+import { randomBytes } from 'node:crypto';
+import { mkdirSync } from 'node:fs';
+import { dirname, resolve } from 'node:path';
+import { z } from 'zod';
+
+/** Settings read once from the environment at start-up; everything else receives this object. */
+export interface AppConfig {
+  nodeEnv: 'development' | 'production' | 'test';
+  port: number;
+  host: string;
+  /** Absolute path of the SQLite file (its directory exists). */
+  databasePath: string;
+  sessionSecret: string;
+  /** Folder of the built client served in production. */
+  clientDist: string;
+  /** Express "trust proxy" value: false, true, a hop count, or addresses/names. */
+  trustProxy: boolean | number | string;
+  logRequests: boolean;
+  /** Seed the demo shop when the database has no users yet. */
+  seedDemo: boolean;
+}
+
+const booleanText = z
+  .enum(['true', 'false', '1', '0', 'yes', 'no', ''], {
+    error: 'Use true or false',
+  })
+  .transform((text) => text === 'true' || text === '1' || text === 'yes');
+
+const environmentSchema = z
+  .object({
+    NODE_ENV: z
+      .enum(['development', 'production', 'test'], { error: 'Use development, production or test' })
+      .default('development'),
+    PORT: z.coerce
+      .number({ error: 'Use a whole number between 1 and 65535' })
+      .int('Use a whole number between 1 and 65535')
+      .min(1, 'Use a whole number between 1 and 65535')
+      .max(65535, 'Use a whole number between 1 and 65535')
+      .default(3000),
+    HOST: z.string().min(1, 'Give a host name or address, e.g. 0.0.0.0').default('0.0.0.0'),
+    DATABASE_PATH: z.string().min(1, 'Give a file path for the SQLite database').default('data/slotwise.sqlite'),
+    SESSION_SECRET: z.string().optional(),
+    CLIENT_DIST: z.string().min(1, 'Give the folder of the built client').default('dist'),
+    TRUST_PROXY: z.string().optional(),
+    LOG_REQUESTS: booleanText.optional(),
+    SEED_DEMO: booleanText.optional(),
+  })
+  .superRefine((env, ctx) => {
+    if (env.NODE_ENV !== 'production') return;
+    if (!env.SESSION_SECRET) {
+      ctx.addIssue({ code: 'custom', path: ['SESSION_SECRET'], message: 'Required in production: set a random string of at least 32 characters' });
+    } else if (env.SESSION_SECRET.length < 32) {
+      ctx.addIssue({ code: 'custom', path: ['SESSION_SECRET'], message: 'Use at least 32 characters in production' });
+    }
+  });
+
+/** Thrown when the environment is unusable; the message lists every problem by variable name. */
+export class ConfigError extends Error {
+  constructor(message: string) {
+    super(message);
+    this.name = 'ConfigError';
+  }
+}
+
+function parseTrustProxy(text: string | undefined): AppConfig['trustProxy'] {
+  if (text === undefined || text === '' || text === 'false' || text === '0') return false;
+  if (text === 'true') return true;
+  if (/^\d+$/.test(text)) return Number(text);
+  return text;
+}
+
+/**
+ * Reads and checks the environment. Creates the database directory. In development and tests
+ * a missing SESSION_SECRET is replaced by a random one (sessions then end at restart) with a warning.
+ */
+export function loadConfig(
+  environment: NodeJS.ProcessEnv = process.env,
+  warn: (message: string) => void = (message) => console.warn(message),
+): AppConfig {
+  const parsed = environmentSchema.safeParse(environment);
+  if (!parsed.success) {
+    const lines = parsed.error.issues.map((issue) => `  ${issue.path.join('.') || '(environment)'}: ${issue.message}`);
+    throw new ConfigError(`Slotwise cannot start: the environment has problems.\n${lines.join('\n')}`);
+  }
+  const env = parsed.data;
+
+  let sessionSecret = env.SESSION_SECRET;
+  if (!sessionSecret) {
+    sessionSecret = randomBytes(32).toString('hex');
+    warn('SESSION_SECRET is not set: using a random one, so sign-ins end when the server restarts.');
+  }
+
+  const databasePath = resolve(env.DATABASE_PATH);
+  try {
+    mkdirSync(dirname(databasePath), { recursive: true });
+  } catch (error) {
+    throw new ConfigError(
+      `Slotwise cannot start: the folder for DATABASE_PATH (${dirname(databasePath)}) cannot be created: ${(error as Error).message}`,
+    );
+  }
+
+  return {
+    nodeEnv: env.NODE_ENV,
+    port: env.PORT,
+    host: env.HOST,
+    databasePath,
+    sessionSecret,
+    clientDist: resolve(env.CLIENT_DIST),
+    trustProxy: parseTrustProxy(env.TRUST_PROXY),
+    logRequests: env.LOG_REQUESTS ?? env.NODE_ENV !== 'test',
+    seedDemo: env.SEED_DEMO ?? true,
+  };
+}

@@ -1,0 +1,15 @@
+import type { QueryInterface } from 'sequelize';
+import type { RunnableMigration } from 'umzug';
+import * as createUsers from './0001-create-users';
+import * as createSessions from './0002-create-sessions';
+import * as createDesigns from './0003-create-designs';
+
+/**
+ * Every migration, oldest first. Listed by import rather than found by glob so the same list works
+ * under tsx, Vitest and any bundler. Add new files at the end; never edit one that has shipped.
+ */
+export const migrations: RunnableMigration<QueryInterface>[] = [
+  { name: '0001-create-users', ...createUsers },
+  { name: '0002-create-sessions', ...createSessions },
+  { name: '0003-create-designs', ...createDesigns },
+];

@@ -1,0 +1,52 @@
+// Starts the Slotwise server: config, database, migrations, first-run demo seed, listen, clean shutdown.
+import type { Server } from 'node:http';
+import { createApp, stopBackgroundWork } from './app';
+import { ConfigError, loadConfig } from './config';
+import { openDatabase } from './db/database';
+import { runMigrations } from './db/migrate';
+import { seedDemo } from './db/seed';
+import { consoleLogger as logger } from './logger';
+
+async function start(): Promise<void> {
+  const config = loadConfig(process.env, (message) => logger.warn(message));
+  const db = await openDatabase(config.databasePath);
+  const applied = await runMigrations(db);
+  if (applied.length) logger.info(`Database migrated: ${applied.join(', ')}`);
+
+  if (config.seedDemo && (await db.models.User.count()) === 0) {
+    const report = await seedDemo(db);
+    logger.info(`First run: seeded the demo shop (${report.usersCreated} accounts, ${report.designsCreated} designs from ${report.designOrigin}).`);
+  }
+
+  const app = createApp({ config, db, logger });
+  const server: Server = app.listen(config.port, config.host, () => {
+    logger.info(`Slotwise (${config.nodeEnv}) listening on http://${config.host}:${config.port}`);
+  });
+  server.on('error', (error) => {
+    logger.error('The server could not start', error);
+    process.exit(1);
+  });
+
+  let stopping = false;
+  const stop = (signal: string) => {
+    if (stopping) return;
+    stopping = true;
+    logger.info(`${signal}: finishing open requests, then closing the database.`);
+    const force = setTimeout(() => process.exit(1), 10_000);
+    force.unref();
+    server.close(async () => {
+      stopBackgroundWork(app);
+      await db.close().catch((error) => logger.error('Closing the database failed', error));
+      process.exit(0);
+    });
+    server.closeIdleConnections();
+  };
+  process.on('SIGTERM', () => stop('SIGTERM'));
+  process.on('SIGINT', () => stop('SIGINT'));
+}
+
+start().catch((error: unknown) => {
+  if (error instanceof ConfigError) logger.error(error.message);
+  else logger.error('Slotwise could not start', error);
+  process.exit(1);
+});

@@ -1,0 +1,62 @@
+import type { Database } from '../../db/database';
+import type { UserModel } from '../../db/models/user';
+import { AppError } from '../../middleware/appError';
+import type { Passwords } from './passwords';
+import { destroySessionsOfUser } from './sessionRevocation';
+
+export function createAuthService(db: Database, passwords: Passwords) {
+  const { User } = db.models;
+
+  return {
+    /**
+     * The active user with this email and password, or null. Always runs one bcrypt comparison,
+     * also for unknown emails, so the answer time does not tell whether an account exists.
+     */
+    async verifyCredentials(email: string, password: string): Promise<UserModel | null> {
+      const user = await User.findOne({ where: { email: email.trim().toLowerCase() } });
+      const matches = await passwords.verify(password, user?.passwordHash ?? (await passwords.dummyHash()));
+      return user && matches && user.active ? user : null;
+    },
+
+    /** The signed-in user for a session, or null once the account is gone or deactivated. */
+    async findActiveUser(id: number): Promise<UserModel | null> {
+      const user = await User.findByPk(id);
+      return user && user.active ? user : null;
+    },
+
+    async updateProfile(user: UserModel, changes: { displayName?: string; preferences?: { units: 'mm' | 'in' } }): Promise<UserModel> {
+      return db.write(async (transaction) => {
+        const fresh = await User.findByPk(user.id, { transaction, rejectOnEmpty: true });
+        if (changes.displayName !== undefined) fresh.displayName = changes.displayName;
+        if (changes.preferences !== undefined) {
+          const current = typeof fresh.preferences === 'string' ? JSON.parse(fresh.preferences) : fresh.preferences;
+          if (current?.units !== changes.preferences.units) fresh.preferences = { ...current, ...changes.preferences };
+        }
+        if (fresh.changed()) await fresh.save({ transaction });
+        return fresh;
+      });
+    },
+
+    /** Changes the password and signs the user out everywhere else. */
+    async changePassword(user: UserModel, currentPassword: string, newPassword: string, currentSessionId: string): Promise<void> {
+      const matches = await passwords.verify(currentPassword, user.passwordHash);
+      if (!matches) {
+        throw new AppError(400, 'wrong_password', 'Your current password is not correct.', {
+          fields: { currentPassword: 'This is not your current password' },
+        });
+      }
+      if (currentPassword === newPassword) {
+        throw new AppError(400, 'invalid_request', 'Choose a new password that differs from the current one.', {
+          fields: { newPassword: 'Choose a password that differs from the current one' },
+        });
+      }
+      const passwordHash = await passwords.hash(newPassword);
+      await db.write(async (transaction) => {
+        await User.update({ passwordHash }, { where: { id: user.id }, transaction });
+        await destroySessionsOfUser(db, user.id, { exceptSessionId: currentSessionId, transaction });
+      });
+    },
+  };
+}
+
+export type AuthService = ReturnType<typeof createAuthService>;

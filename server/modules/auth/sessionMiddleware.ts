@@ -1,0 +1,37 @@
+import session from 'express-session';
+import type { RequestHandler } from 'express';
+import connectSessionSequelize from 'connect-session-sequelize';
+import type { Database } from '../../db/database';
+
+export const SESSION_COOKIE_NAME = 'slotwise.sid';
+const SESSION_LIFETIME_MS = 7 * 24 * 60 * 60 * 1000;
+
+const SequelizeStore = connectSessionSequelize(session.Store);
+export type SessionStore = InstanceType<typeof SequelizeStore>;
+
+/**
+ * Sessions stored in SQLite (table from migration 0002). Cookie: httpOnly, SameSite=Lax, and
+ * Secure whenever the request arrived over TLS (directly or via a trusted proxy).
+ */
+export function createSessionMiddleware(db: Database, secret: string): { middleware: RequestHandler; store: SessionStore } {
+  const store = new SequelizeStore({
+    db: db.sequelize,
+    table: 'Session',
+    checkExpirationInterval: 15 * 60 * 1000,
+    // Sessions do not roll, so a touch would rewrite the same expiry on every request: skip that write.
+    disableTouch: true,
+  } as ConstructorParameters<typeof SequelizeStore>[0]);
+  const middleware = session({
+    name: SESSION_COOKIE_NAME,
+    secret,
+    store,
+    resave: false,
+    saveUninitialized: false,
+    cookie: { httpOnly: true, sameSite: 'lax', secure: 'auto', maxAge: SESSION_LIFETIME_MS, path: '/' },
+  });
+  return { middleware, store };
+}
+
+export function sessionCookieClearOptions(secure: boolean) {
+  return { httpOnly: true, sameSite: 'lax' as const, secure, path: '/' };
+}

@@ -1,0 +1,182 @@
+import { QueryTypes } from 'sequelize';
+import type { DesignDocument } from '../../../src/domain/design/schema';
+import type { Database } from '../../db/database';
+import type { UserModel } from '../../db/models/user';
+import { AppError, notFound } from '../../middleware/appError';
+import {
+  presentRevisionMeta,
+  thumbnailUrl,
+  presentSummary,
+  type DesignSummary,
+  type Revision,
+  type RevisionMeta,
+  type RevisionRow,
+  type StoredRevision,
+  type SummaryRow,
+} from './present';
+
+const SUMMARY_SELECT = `
+  SELECT d.id AS id, d.name AS name, d.system_id AS systemId, d.latest_revision AS latestRevision,
+         d.updated_at AS updatedAt, u.id AS updatedById, u.display_name AS updatedByName,
+         (r.thumbnail IS NOT NULL) AS hasThumbnail,
+         CASE WHEN json_valid(r.document) THEN json_array_length(r.document, '$.profiles') END AS profileCount
+    FROM designs d
+    JOIN design_revisions r ON r.design_id = d.id AND r.number = d.latest_revision
+    JOIN users u ON u.id = r.created_by
+   WHERE d.archived_at IS NULL`;
+
+const REVISION_SELECT = `
+  SELECT r.design_id AS designId, r.number AS number, r.created_at AS createdAt, u.id AS createdById,
+         u.display_name AS createdByName, r.message AS message, (r.thumbnail IS NOT NULL) AS hasThumbnail`;
+
+export interface NewRevision {
+  document: DesignDocument;
+  thumbnail?: Buffer;
+  message?: string;
+}
+
+export function createDesignsService(db: Database) {
+  const { Design, DesignRevision } = db.models;
+  const select = <T extends object>(sql: string, replacements: Record<string, unknown> = {}) =>
+    db.sequelize.query<T>(sql, { replacements, type: QueryTypes.SELECT });
+
+  async function summary(id: number): Promise<DesignSummary> {
+    const [row] = await select<SummaryRow>(`${SUMMARY_SELECT} AND d.id = :id`, { id });
+    if (!row) throw notFound('That design');
+    return presentSummary(row);
+  }
+
+  async function revision(designId: number, number: number): Promise<StoredRevision> {
+    const [row] = await select<RevisionRow>(
+      `${REVISION_SELECT}, r.document AS document
+         FROM design_revisions r JOIN designs d ON d.id = r.design_id JOIN users u ON u.id = r.created_by
+        WHERE r.design_id = :designId AND r.number = :number AND d.archived_at IS NULL`,
+      { designId, number },
+    );
+    if (!row) throw notFound('That revision');
+    return { meta: presentRevisionMeta(row), documentJson: row.document ?? 'null' };
+  }
+
+  /** The answer to a save, built from what was just written rather than read back. */
+  function savedRevision(designId: number, number: number, author: UserModel, input: NewRevision, createdAt: Date): Revision {
+    return {
+      number,
+      createdAt: createdAt.toISOString(),
+      createdBy: { id: author.id, displayName: author.displayName },
+      message: input.message ?? null,
+      thumbnailUrl: input.thumbnail ? thumbnailUrl(designId, number) : null,
+      document: input.document,
+    };
+  }
+
+  return {
+    async list(): Promise<DesignSummary[]> {
+      const rows = await select<SummaryRow>(`${SUMMARY_SELECT} ORDER BY d.updated_at DESC, d.id DESC`);
+      return rows.map(presentSummary);
+    },
+
+    async getLatest(id: number): Promise<{ design: DesignSummary; revision: StoredRevision }> {
+      const design = await summary(id);
+      return { design, revision: await revision(id, design.latestRevision) };
+    },
+
+    /** Creates the design and its revision 1 in one transaction. */
+    async create(author: UserModel, document: DesignDocument, extras: Omit<NewRevision, 'document'> = {}): Promise<{ design: DesignSummary; revision: Revision }> {
+      const input: NewRevision = { ...extras, document };
+      const { id, createdAt } = await db.write(async (transaction) => {
+        const design = await Design.create(
+          { name: document.name, systemId: document.systemId, createdBy: author.id, latestRevision: 1 },
+          { transaction },
+        );
+        const row = await DesignRevision.create(
+          {
+            designId: design.id,
+            number: 1,
+            document: JSON.stringify(document),
+            thumbnail: extras.thumbnail ?? null,
+            message: extras.message ?? null,
+            createdBy: author.id,
+          },
+          { transaction },
+        );
+        return { id: design.id, createdAt: row.createdAt };
+      });
+      return { design: await summary(id), revision: savedRevision(id, 1, author, input, createdAt) };
+    },
+
+    /**
+     * Saves a new revision if `baseRevision` is still the latest; otherwise refuses with 409 and the
+     * latest number, so the client can merge or reload without losing either side's work.
+     */
+    async saveRevision(designId: number, author: UserModel, baseRevision: number, input: NewRevision): Promise<Revision> {
+      const { number, createdAt } = await db.write(async (transaction) => {
+        const design = await Design.findByPk(designId, { transaction });
+        if (!design || design.archivedAt) throw notFound('That design');
+        if (design.latestRevision !== baseRevision) {
+          throw new AppError(
+            409,
+            'stale_revision',
+            `This design was saved by someone else since revision ${baseRevision}; the latest is revision ${design.latestRevision}. Reload it to see their changes before saving again.`,
+            { details: { latestRevision: design.latestRevision } },
+          );
+        }
+        const next = design.latestRevision + 1;
+        const row = await DesignRevision.create(
+          {
+            designId,
+            number: next,
+            document: JSON.stringify(input.document),
+            thumbnail: input.thumbnail ?? null,
+            message: input.message ?? null,
+            createdBy: author.id,
+          },
+          { transaction },
+        );
+        design.latestRevision = next;
+        design.name = input.document.name;
+        design.systemId = input.document.systemId;
+        await design.save({ transaction });
+        return { number: next, createdAt: row.createdAt };
+      });
+      return savedRevision(designId, number, author, input, createdAt);
+    },
+
+    async listRevisions(designId: number): Promise<RevisionMeta[]> {
+      await summary(designId);
+      const rows = await select<RevisionRow>(
+        `${REVISION_SELECT} FROM design_revisions r JOIN users u ON u.id = r.created_by
+          WHERE r.design_id = :designId ORDER BY r.number DESC`,
+        { designId },
+      );
+      return rows.map(presentRevisionMeta);
+    },
+
+    getRevision: revision,
+
+    async getThumbnail(designId: number, number: number): Promise<Buffer> {
+      const row = await DesignRevision.findOne({
+        where: { designId, number },
+        attributes: ['thumbnail'],
+        include: [],
+      });
+      const design = await Design.findByPk(designId, { attributes: ['id', 'archivedAt'] });
+      if (!row || !row.thumbnail || !design || design.archivedAt) throw notFound('That thumbnail');
+      return row.thumbnail;
+    },
+
+    /** Hides the design (its revisions are kept). Only an owner or the design's creator may. */
+    async archive(designId: number, actor: UserModel): Promise<void> {
+      await db.write(async (transaction) => {
+        const design = await Design.findByPk(designId, { transaction });
+        if (!design || design.archivedAt) throw notFound('That design');
+        if (actor.role !== 'owner' && design.createdBy !== actor.id) {
+          throw new AppError(403, 'forbidden', 'Only the shop owner or the designer who created this design can delete it.');
+        }
+        design.archivedAt = new Date();
+        await design.save({ transaction });
+      });
+    },
+  };
+}
+
+export type DesignsService = ReturnType<typeof createDesignsService>;

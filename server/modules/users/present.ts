@@ -1,0 +1,25 @@
+import type { UserModel } from '../../db/models/user';
+
+/** The User shape of the HTTP contract. Never includes the password hash. */
+export interface UserJson {
+  id: number;
+  email: string;
+  displayName: string;
+  role: UserModel['role'];
+  active: boolean;
+  preferences: { units: 'mm' | 'in' };
+  createdAt: string;
+}
+
+export function presentUser(user: UserModel): UserJson {
+  const preferences = typeof user.preferences === 'string' ? JSON.parse(user.preferences) : user.preferences;
+  return {
+    id: user.id,
+    email: user.email,
+    displayName: user.displayName,
+    role: user.role,
+    active: Boolean(user.active),
+    preferences: { units: preferences?.units === 'in' ? 'in' : 'mm' },
+    createdAt: new Date(user.createdAt).toISOString(),
+  };
+}

@@ -1,0 +1,15 @@
+import { Outlet } from 'react-router';
+import { useCurrentUser } from '@/features/auth/api/getCurrentUser';
+import { AppShell } from './AppShell';
+
+/** Route element for signed-in pages (sits inside RequireRole, so the user is known). */
+export function SignedInLayout({ compact = false }: { compact?: boolean }) {
+  const { data: user } = useCurrentUser();
+  if (!user) return null;
+  return (
+    <AppShell user={user} compact={compact}>
+      <Outlet />
+    </AppShell>
+  );
+}
+

@@ -1,0 +1,12 @@
+export { Button, type ButtonProps } from './Button';
+export { Field, controlClasses, describedBy } from './Field';
+export { TextField } from './TextField';
+export { SelectField, type SelectOption } from './SelectField';
+export { Dialog, DialogActions } from './Dialog';
+export { ConfirmDialog } from './ConfirmDialog';
+export { Skeleton, PageSkeleton } from './Skeleton';
+export { EmptyState } from './EmptyState';
+export { PageHeader } from './PageHeader';
+export { ErrorNotice } from './ErrorNotice';
+export { PageFrame } from './PageFrame';
+export { SlotwiseMark } from './SlotwiseMark';

@@ -1,0 +1,97 @@
+/**
+ * analyzeDesign: every check and output for a design, as plain JSON-serialisable data.
+ * Per-profile geometry, catalogue maps and the spatial index are built once and shared.
+ * Units: mm, kg, N, MPa; prices in the demo price list's currency.
+ */
+import type { DesignAnalysis, Finding, Severity } from './analysisTypes';
+import { defaultCatalogue } from './catalogue';
+import type { Catalogue } from './catalogue/types';
+import { indexCatalogue } from './checks/catalogueIndex';
+import { buildAnalysisContext, type AnalysisContext } from './checks/context';
+import { interferenceFindings } from './checks/interferenceFindings';
+import { jointFindings } from './checks/jointFindings';
+import { panelFitFindings } from './checks/panelFitFindings';
+import { sequenceFindings } from './checks/sequenceFindings';
+import { structureAnalysis } from './checks/structureFindings';
+import type { DesignDocument } from './design/schema';
+import { billOfMaterials } from './outputs/bom';
+import { costSummary } from './outputs/cost';
+import { cutList } from './outputs/cutList';
+import { hardwareSummary } from './outputs/hardware';
+import { massSummary } from './outputs/mass';
+import { panelCutItems, panelSheets } from './outputs/panelSheets';
+import { stockPlans } from './outputs/stockPlans';
+import { toolList } from './outputs/tools';
+
+export type { DesignAnalysis, Finding } from './analysisTypes';
+
+export interface AnalyzeOptions {
+  /** Record how long each stage took in `timingsMs` (default true). */
+  timings?: boolean;
+}
+
+const SEVERITY_ORDER: Record<Severity, number> = { error: 0, warning: 1, note: 2 };
+
+const now = (): number => (typeof performance !== 'undefined' ? performance.now() : Date.now());
+
+/** Builds the shared analysis context (geometry, maps, spatial index) for a design. */
+export function createAnalysisContext(design: DesignDocument, catalogue: Catalogue = defaultCatalogue): AnalysisContext {
+  return buildAnalysisContext(design, indexCatalogue(catalogue));
+}
+
+export function analyzeDesign(design: DesignDocument, catalogue: Catalogue = defaultCatalogue, options: AnalyzeOptions = {}): DesignAnalysis {
+  const timings: Record<string, number> = {};
+  let mark = now();
+  const lap = (name: string) => {
+    const t = now();
+    timings[name] = Math.round((t - mark) * 1000) / 1000;
+    mark = t;
+  };
+  const ctx = createAnalysisContext(design, catalogue);
+  lap('context');
+
+  const findings: Finding[] = [];
+  findings.push(...jointFindings(ctx));
+  lap('joints');
+  findings.push(...panelFitFindings(ctx));
+  lap('panelFit');
+  findings.push(...interferenceFindings(ctx));
+  lap('interference');
+  findings.push(...sequenceFindings(ctx));
+  lap('sequence');
+
+  const hardware = hardwareSummary(ctx);
+  const sheets = panelSheets(ctx);
+  const bom = billOfMaterials(ctx, hardware, sheets);
+  lap('bom');
+  const cuts = cutList(ctx);
+  lap('cutList');
+  const plans = stockPlans(ctx);
+  lap('stockPlan');
+  const tools = toolList(ctx, hardware);
+  const mass = massSummary(ctx, hardware, sheets);
+  const cost = costSummary(ctx, bom, sheets);
+  lap('toolsMassCost');
+  const structure = structureAnalysis(ctx, { total: mass.total, centreOfMass: mass.centreOfMass });
+  findings.push(...structure.findings);
+  lap('structure');
+
+  findings.sort((a, b) => SEVERITY_ORDER[a.severity] - SEVERITY_ORDER[b.severity] || (a.id < b.id ? -1 : a.id > b.id ? 1 : 0));
+  const counts = { error: 0, warning: 0, note: 0 };
+  for (const f of findings) counts[f.severity] += 1;
+
+  return {
+    findings,
+    counts,
+    bom,
+    cutList: cuts.items,
+    cutGroups: cuts.groups,
+    stockPlans: plans,
+    panelCuts: panelCutItems(sheets),
+    tools,
+    mass,
+    cost,
+    structure: structure.results,
+    ...(options.timings === false ? {} : { timingsMs: timings }),
+  };
+}

@@ -1,0 +1,253 @@
+/**
+ * Everything the checks and outputs need about a design, computed once per analysis:
+ * per-profile geometry, catalogue records resolved by map, joints and end accessories by profile
+ * end, and a spatial index over profile boxes shared by every check.
+ */
+import type { Accessory, DesignDocument, Joint, JointMember, Panel, Profile, ProfileEnd } from '../design/schema';
+import type { Connector, PanelMaterial, ProfileSystem, ProfileVariant } from '../catalogue/types';
+import type { Alloy } from '../catalogue/materials';
+import type { Box } from '../geometry/box';
+import { panelBox, panelAxes } from '../geometry/panelGeometry';
+import { pointAlongProfile, profileBoundingBox, sectionAxes, type SectionAxes } from '../geometry/profileGeometry';
+import { UniformGrid } from '../geometry/spatialGrid';
+import type { Vec3 } from '../geometry/vectors';
+import type { CatalogueIndex } from './catalogueIndex';
+
+/** Two parts closer than this (mm) count as touching. Common practice for a drawn model, no source. */
+export const CONTACT_TOLERANCE_MM = 0.5;
+/** Overlap (mm) above which two solid parts collide (brief: 0.2 mm). */
+export const INTERFERENCE_TOLERANCE_MM = 0.2;
+/** Fallback section size when a variant is unknown, mm. */
+const UNKNOWN_SECTION_MM = 40;
+
+export interface ProfileInfo {
+  index: number;
+  profile: Profile;
+  variant: ProfileVariant | undefined;
+  system: ProfileSystem | undefined;
+  width: number;
+  height: number;
+  axes: SectionAxes;
+  box: Box;
+  startPoint: Vec3;
+  endPoint: Vec3;
+  /** Joints with any member on this profile. */
+  joints: Joint[];
+  /** Joints with a member at the start / end (a span member within 1 mm of an end counts). */
+  startJoints: Joint[];
+  endJoints: Joint[];
+  /** Accessories fitted to the start / end. */
+  startAccessories: Accessory[];
+  endAccessories: Accessory[];
+}
+
+/** Shared empty list: most ends have no accessories, so do not allocate one per end. */
+const NONE: never[] = [];
+
+export function jointsAt(info: ProfileInfo, end: ProfileEnd): Joint[] {
+  return end === 'start' ? info.startJoints : info.endJoints;
+}
+
+export function accessoriesAt(info: ProfileInfo, end: ProfileEnd): Accessory[] {
+  return end === 'start' ? info.startAccessories : info.endAccessories;
+}
+
+/** True when some joint holds both profiles. */
+export function areJoined(ctx: AnalysisContext, a: string, b: string): boolean {
+  const info = ctx.profileById.get(a);
+  if (!info) return false;
+  for (const j of info.joints) for (const m of j.members) if (m.profileId === b) return true;
+  return false;
+}
+
+/** Every id in the document (profiles, joints, panels, accessories, sub-assemblies), built on first use. */
+export function allDesignIds(ctx: AnalysisContext): Set<string> {
+  let ids = ctx.memo.get('allIds') as Set<string> | undefined;
+  if (!ids) {
+    const d = ctx.design;
+    ids = new Set<string>();
+    for (const list of [d.profiles, d.joints, d.panels, d.accessories, d.subAssemblies] as { id: string }[][]) for (const x of list) ids.add(x.id);
+    ctx.memo.set('allIds', ids);
+  }
+  return ids;
+}
+
+export interface PanelInfo {
+  index: number;
+  panel: Panel;
+  material: PanelMaterial | undefined;
+  /** Bounding profiles found in the design (captured panels). */
+  bounding: ProfileInfo[];
+  /** Slot opening and engagement of the bounding profiles (smallest), mm; null when not captured. */
+  slotOpening: number | null;
+  engagement: number;
+  /** Sheet to cut, mm: captured = opening + 2 × engagement − clearance. */
+  sheetWidth: number;
+  sheetHeight: number;
+  /** The solid for interference: the visible part of the sheet. */
+  box: Box;
+}
+
+export interface AnalysisContext {
+  design: DesignDocument;
+  catalogue: CatalogueIndex;
+  alloy: Alloy | undefined;
+  profiles: ProfileInfo[];
+  profileById: Map<string, ProfileInfo>;
+  panels: PanelInfo[];
+  panelById: Map<string, PanelInfo>;
+  jointById: Map<string, Joint>;
+  /** Spatial index over `profiles[i].box`. */
+  profileGrid: UniformGrid;
+  /** Memo for results several checks and outputs share, keyed by name and part id. */
+  memo: Map<string, unknown>;
+}
+
+export function buildAnalysisContext(design: DesignDocument, catalogue: CatalogueIndex): AnalysisContext {
+  const profiles: ProfileInfo[] = [];
+  const profileById = new Map<string, ProfileInfo>();
+  for (let i = 0; i < design.profiles.length; i++) {
+    const profile = design.profiles[i];
+    const variant = catalogue.variants.get(profile.variantId);
+    const system = variant ? catalogue.systems.get(variant.systemId) : undefined;
+    const width = variant?.width ?? UNKNOWN_SECTION_MM;
+    const height = variant?.height ?? UNKNOWN_SECTION_MM;
+    const axes = sectionAxes(profile.direction, profile.rollDeg);
+    const info: ProfileInfo = {
+      index: i,
+      profile,
+      variant,
+      system,
+      width,
+      height,
+      axes,
+      box: profileBoundingBox(profile, width, height, axes),
+      startPoint: [profile.start[0], profile.start[1], profile.start[2]],
+      endPoint: pointAlongProfile(profile, profile.length),
+      joints: NONE,
+      startJoints: NONE,
+      endJoints: NONE,
+      startAccessories: NONE,
+      endAccessories: NONE,
+    };
+    profiles.push(info);
+    profileById.set(profile.id, info);
+  }
+
+  const jointById = new Map<string, Joint>();
+  for (const joint of design.joints) {
+    jointById.set(joint.id, joint);
+    for (let k = 0; k < joint.members.length; k++) {
+      const m = joint.members[k];
+      const info = profileById.get(m.profileId);
+      if (!info) continue;
+      const end = memberEnd(m, info);
+      if (end === 'start') info.startJoints = append(info.startJoints, joint);
+      else if (end === 'end') info.endJoints = append(info.endJoints, joint);
+      if (info.joints[info.joints.length - 1] !== joint) info.joints = append(info.joints, joint);
+    }
+  }
+
+  for (const acc of design.accessories) {
+    if (!acc.profileId || !acc.end) continue;
+    const info = profileById.get(acc.profileId);
+    if (!info) continue;
+    if (acc.end === 'start') info.startAccessories = append(info.startAccessories, acc);
+    else info.endAccessories = append(info.endAccessories, acc);
+  }
+
+  const panels: PanelInfo[] = [];
+  const panelById = new Map<string, PanelInfo>();
+  for (let i = 0; i < design.panels.length; i++) {
+    const info = panelInfo(i, design, catalogue, profileById);
+    panels.push(info);
+    panelById.set(info.panel.id, info);
+  }
+  const boxes = new Array<Box>(profiles.length);
+  for (let i = 0; i < profiles.length; i++) boxes[i] = profiles[i].box;
+
+  return {
+    design,
+    catalogue,
+    alloy: catalogue.alloys.get(design.settings.alloyId),
+    profiles,
+    profileById,
+    panels,
+    panelById,
+    jointById,
+    profileGrid: new UniformGrid(boxes, { margin: CONTACT_TOLERANCE_MM }),
+    memo: new Map(),
+  };
+}
+
+/** Appends without mutating the shared empty list. */
+function append<T>(list: T[], item: T): T[] {
+  if (list === NONE) return [item];
+  list.push(item);
+  return list;
+}
+
+function panelInfo(index: number, design: DesignDocument, catalogue: CatalogueIndex, profileById: Map<string, ProfileInfo>): PanelInfo {
+  const panel = design.panels[index];
+  const material = catalogue.panelMaterials.get(panel.materialId);
+  const bounding: ProfileInfo[] = [];
+  for (const id of panel.boundedBy ?? []) {
+    const p = profileById.get(id);
+    if (p) bounding.push(p);
+  }
+  let slotOpening: number | null = null;
+  let engagement = 0;
+  if (panel.mounting === 'captured') {
+    const systems = bounding.map((b) => b.system).filter((s): s is ProfileSystem => !!s);
+    const fallback = catalogue.systems.get(design.systemId);
+    const used = systems.length > 0 ? systems : fallback ? [fallback] : [];
+    if (used.length > 0) {
+      slotOpening = Math.min(...used.map((s) => s.slotOpening));
+      engagement = Math.min(...used.map((s) => s.slotEngagement));
+    }
+  }
+  const clearance = panel.mounting === 'captured' ? design.settings.panelClearance : 0;
+  const sheetWidth = panel.rect.width + 2 * engagement - clearance;
+  const sheetHeight = panel.rect.height + 2 * engagement - clearance;
+  return {
+    index,
+    panel,
+    material,
+    bounding,
+    slotOpening,
+    engagement,
+    sheetWidth,
+    sheetHeight,
+    box: panelBox(panel.rect.center, panel.rect.normal, panel.rect.width, panel.rect.height, panel.thickness),
+  };
+}
+
+/** Tolerance (mm) for a "span" member that is really at a profile end. */
+const END_MATCH_MM = 1;
+
+/** The profile end a member sits at, counting a span position within 1 mm of an end. */
+export function memberEnd(member: JointMember, info: ProfileInfo | undefined): ProfileEnd | null {
+  if (member.at !== 'span') return member.at;
+  if (!info) return null;
+  const along = member.along ?? 0;
+  if (along <= END_MATCH_MM) return 'start';
+  if (along >= info.profile.length - END_MATCH_MM) return 'end';
+  return null;
+}
+
+/** World position of a joint member: the profile end, or the point `along` from its start. */
+export function memberPoint(info: ProfileInfo, member: JointMember): Vec3 {
+  if (member.at === 'start') return info.startPoint;
+  if (member.at === 'end') return info.endPoint;
+  return pointAlongProfile(info.profile, member.along ?? 0);
+}
+
+/** Distance from the profile's start to a joint member, mm. */
+export function memberAlong(info: ProfileInfo, member: JointMember): number {
+  if (member.at === 'start') return 0;
+  if (member.at === 'end') return info.profile.length;
+  return member.along ?? 0;
+}
+
+export { panelAxes };
+export type { Connector };

@@ -1,0 +1,53 @@
+/** Wording shared by the checks: part names, profile ends, numbers with units. */
+import type { ProfileEnd } from '../design/schema';
+import { dominantAxis } from '../geometry/vectors';
+import type { ProfileInfo } from './context';
+
+/** "12.5 mm", "8 mm": at most one decimal, no trailing zero. */
+export function mm(value: number): string {
+  return `${formatNumber(value)} mm`;
+}
+
+/** "1,234.5": thousands separated, at most `decimals` decimals (no locale lookup: it is slow at scale). */
+export function formatNumber(value: number, decimals = 1): string {
+  const f = 10 ** decimals;
+  const rounded = Math.round(value * f) / f;
+  if (rounded === 0) return '0';
+  const negative = rounded < 0;
+  const [whole, fraction] = Math.abs(rounded).toFixed(decimals).split('.');
+  const grouped = whole.replace(/\B(?=(\d{3})+(?!\d))/g, ',');
+  const trimmed = fraction ? fraction.replace(/0+$/, '') : '';
+  return `${negative ? '-' : ''}${grouped}${trimmed ? `.${trimmed}` : ''}`;
+}
+
+export function profileName(info: ProfileInfo | undefined, id: string): string {
+  const label = info?.profile.label;
+  return label ? `profile ${id} (${label})` : `profile ${id}`;
+}
+
+const END_WORDS: Record<0 | 1 | 2, [string, string]> = {
+  0: ['left', 'right'],
+  1: ['bottom', 'top'],
+  2: ['back', 'front'],
+};
+
+/** "right", "top", "front"… : the end named by where it points in the model. */
+export function endWord(info: ProfileInfo, end: ProfileEnd): string {
+  const d = info.profile.direction;
+  const axis = dominantAxis(d);
+  const endIsHigher = d[axis] > 0 ? end === 'end' : end === 'start';
+  return END_WORDS[axis][endIsHigher ? 1 : 0];
+}
+
+/** "The right end of profile P7" */
+export function endPhrase(info: ProfileInfo, end: ProfileEnd): string {
+  return `the ${endWord(info, end)} end of ${profileName(info, info.profile.id)}`;
+}
+
+export function capitalise(text: string): string {
+  return text.charAt(0).toUpperCase() + text.slice(1);
+}
+
+export function findingId(check: string, reason: string, partIds: readonly string[]): string {
+  return `${check}:${reason}:${partIds.join('+')}`;
+}

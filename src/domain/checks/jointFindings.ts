@@ -1,0 +1,338 @@
+/**
+ * Joint check: every profile end is joined or free with an end cap (or a foot or caster);
+ * each connector fits its members' systems and meets them; the machining a connector needs is on
+ * the profile; no two connectors claim one slot position; access holes are not covered; fastener
+ * and T-nut counts are sane.
+ */
+import type { Finding } from '../analysisTypes';
+import type { Joint, Machining, ProfileEnd } from '../design/schema';
+import type { Connector, ConnectorMachining } from '../catalogue/types';
+import { sectionHalfExtentAlong } from '../geometry/profileGeometry';
+import { scale } from '../geometry/vectors';
+import { CONTACT_TOLERANCE_MM, accessoriesAt, areJoined, jointsAt, memberEnd, memberPoint, type AnalysisContext, type ProfileInfo } from './context';
+import { capitalise, endPhrase, findingId, mm, profileName } from './describe';
+import { distancePointToBox, faceFacing, pointOffFace, profilesAtPoint, projectAlong } from './geometryQueries';
+import { addEndCapFix, addMachiningFix } from './fixes';
+
+const CHECK = 'joints';
+/** A hole within this distance (mm) of where the connector needs it counts as present. Common practice, no source. */
+export const MACHINING_POSITION_TOLERANCE_MM = 2;
+/** Members of a joint must lie within this distance (mm) of each other. */
+const MEMBERS_MEET_TOLERANCE_MM = 1;
+/** More connectors than this on one joint is almost certainly a typing mistake (four faces). */
+const MAX_CONNECTORS_PER_JOINT = 4;
+/** Lift (mm) of the probe point off a face when asking whether something covers a hole. */
+const COVER_PROBE_MM = 1;
+
+const END_CLOSERS = new Set(['end-cap', 'leveling-foot', 'caster']);
+const SLOT_CONNECTOR_KINDS = new Set(['corner-bracket', 'gusset-plate', 'concealed-connector']);
+
+export function jointFindings(ctx: AnalysisContext): Finding[] {
+  const findings: Finding[] = [];
+  for (const joint of ctx.design.joints) checkJoint(ctx, joint, findings);
+  checkProfileEnds(ctx, findings);
+  checkSlotClaims(ctx, findings);
+  checkAccessHolesUncovered(ctx, findings);
+  return findings;
+}
+
+function checkJoint(ctx: AnalysisContext, joint: Joint, out: Finding[]): void {
+  const members = joint.members.map((m) => ctx.profileById.get(m.profileId));
+  const memberIds = joint.members.map((m) => m.profileId);
+  const missing = joint.members.filter((_, i) => !members[i]).map((m) => m.profileId);
+  if (missing.length > 0) {
+    out.push({
+      id: findingId(CHECK, 'missing-member', [joint.id, ...missing]),
+      check: CHECK,
+      severity: 'error',
+      partIds: [joint.id, ...missing],
+      message: `Joint ${joint.id} refers to ${missing.length === 1 ? 'profile' : 'profiles'} ${missing.join(', ')}, which ${missing.length === 1 ? 'is' : 'are'} not in the design.`,
+    });
+    return;
+  }
+  const infos = members as ProfileInfo[];
+  const connector = ctx.catalogue.connectors.get(joint.connectorId);
+  if (!connector) {
+    out.push({
+      id: findingId(CHECK, 'unknown-connector', [joint.id]),
+      check: CHECK,
+      severity: 'error',
+      partIds: [joint.id, ...memberIds],
+      message: `Joint ${joint.id} uses connector "${joint.connectorId}", which is not in the catalogue.`,
+    });
+    return;
+  }
+  if (connector.kind !== joint.kind) {
+    out.push({
+      id: findingId(CHECK, 'kind-mismatch', [joint.id]),
+      check: CHECK,
+      severity: 'warning',
+      partIds: [joint.id, ...memberIds],
+      message: `Joint ${joint.id} is drawn as a ${joint.kind.replace(/-/g, ' ')} but its connector is a ${connector.name}.`,
+    });
+  }
+  for (const info of infos) {
+    const systemId = info.variant?.systemId;
+    if (systemId && !(connector.systemIds as string[]).includes(systemId)) {
+      out.push({
+        id: findingId(CHECK, 'system-mismatch', [joint.id, info.profile.id]),
+        check: CHECK,
+        severity: 'error',
+        partIds: [joint.id, info.profile.id],
+        message: `The ${connector.name} in joint ${joint.id} does not fit ${profileName(info, info.profile.id)}, which is ${info.system?.name ?? systemId}. Use a connector made for that system.`,
+      });
+    }
+  }
+  checkMembersMeet(joint, connector, infos, out);
+  checkMachining(joint, connector, infos, out);
+  checkCounts(ctx, joint, connector, infos, out);
+}
+
+function checkMembersMeet(joint: Joint, connector: Connector, infos: ProfileInfo[], out: Finding[]): void {
+  if (joint.kind === 'hinge' || infos.length < 2) return;
+  const p0 = memberPoint(infos[0], joint.members[0]);
+  let gap: number;
+  if (joint.kind === 'corner-cube') {
+    // The cube sits between the ends: each end lies within one section size of the others.
+    const reach = Math.max(...infos.map((i) => Math.max(i.width, i.height)));
+    gap = Math.max(...infos.slice(1).map((info, k) => distancePointToBox(memberPoint(info, joint.members[k + 1]), infos[0].box))) - reach;
+  } else {
+    gap = distancePointToBox(p0, infos[1].box);
+  }
+  if (gap > MEMBERS_MEET_TOLERANCE_MM) {
+    out.push({
+      id: findingId(CHECK, 'members-apart', [joint.id]),
+      check: CHECK,
+      severity: 'error',
+      partIds: [joint.id, ...infos.map((i) => i.profile.id)],
+      message: `Joint ${joint.id} (${connector.name}) joins ${infos.map((i) => i.profile.id).join(' and ')}, but they are ${mm(gap)} apart. Move the profiles together or remove the joint.`,
+      data: { gapMm: round(gap) },
+    });
+  }
+}
+
+function checkMachining(joint: Joint, connector: Connector, infos: ProfileInfo[], out: Finding[]): void {
+  for (const need of connector.machining) {
+    if (need.on === 'joined') {
+      const end = memberEnd(joint.members[0], infos[0]);
+      if (!end) continue;
+      requireMachining(joint, connector, need, infos[0], end, need.offsetFromEnd, out);
+    } else if (need.on === 'met') {
+      if (!infos[1]) continue;
+      const along = projectAlong(infos[1], memberPoint(infos[0], joint.members[0]));
+      const fromEnd: ProfileEnd = along <= infos[1].profile.length / 2 ? 'start' : 'end';
+      const offset = fromEnd === 'start' ? along : infos[1].profile.length - along;
+      requireMachining(joint, connector, need, infos[1], fromEnd, offset, out);
+    } else {
+      joint.members.forEach((m, i) => {
+        const end = memberEnd(m, infos[i]);
+        if (end) requireMachining(joint, connector, need, infos[i], end, need.offsetFromEnd, out);
+      });
+    }
+  }
+}
+
+function machiningAlong(info: ProfileInfo, m: Machining): number {
+  return m.fromEnd === 'start' ? m.offset : info.profile.length - m.offset;
+}
+
+function requireMachining(
+  joint: Joint,
+  connector: Connector,
+  need: ConnectorMachining,
+  info: ProfileInfo,
+  fromEnd: ProfileEnd,
+  offset: number,
+  out: Finding[],
+): void {
+  const wantAlong = fromEnd === 'start' ? offset : info.profile.length - offset;
+  const present = info.profile.machining.some(
+    (m) =>
+      m.kind === need.kind &&
+      (m.jointId === joint.id || Math.abs(machiningAlong(info, m) - wantAlong) <= MACHINING_POSITION_TOLERANCE_MM),
+  );
+  if (present) return;
+  const what = MACHINING_WORDS[need.kind];
+  const where = need.kind === 'end-tap' ? `in ${endPhrase(info, fromEnd)}` : `${mm(offset)} from ${endPhrase(info, fromEnd)}`;
+  const fix = addMachiningFix(joint, `Add the ${what}`);
+  out.push({
+    id: findingId(CHECK, `missing-${need.kind}`, [info.profile.id, joint.id]),
+    check: CHECK,
+    severity: 'error',
+    partIds: [info.profile.id, joint.id],
+    message: `${capitalise(profileName(info, info.profile.id))} needs ${need.kind === 'end-tap' ? 'an' : 'an'} ${what} (Ø ${mm(need.diameter)}${need.tapSize ? `, ${need.tapSize} thread` : ''}) ${where} for the ${connector.name} in joint ${joint.id}; the cut list does not have it.`,
+    ...(fix ? { fix } : {}),
+    data: { offsetMm: round(offset), diameterMm: need.diameter },
+  });
+}
+
+const MACHINING_WORDS: Record<string, string> = {
+  'access-counterbore': 'access counterbore',
+  'access-hole': 'access hole',
+  'end-tap': 'end tap',
+  drill: 'drilled hole',
+};
+
+function checkCounts(ctx: AnalysisContext, joint: Joint, connector: Connector, infos: ProfileInfo[], out: Finding[]): void {
+  if (joint.quantity > MAX_CONNECTORS_PER_JOINT) {
+    out.push({
+      id: findingId(CHECK, 'too-many-connectors', [joint.id]),
+      check: CHECK,
+      severity: 'warning',
+      partIds: [joint.id],
+      message: `Joint ${joint.id} lists ${joint.quantity} ${connector.name}s; a profile has only four faces. Check the quantity.`,
+    });
+  }
+  const unknownScrews = connector.fasteners.filter((f) => !ctx.catalogue.fasteners.has(f.fastenerId));
+  if (unknownScrews.length > 0) {
+    out.push({
+      id: findingId(CHECK, 'unknown-fastener', [joint.id]),
+      check: CHECK,
+      severity: 'warning',
+      partIds: [joint.id],
+      message: `The ${connector.name} in joint ${joint.id} lists screws the catalogue does not have (${unknownScrews.map((f) => f.fastenerId).join(', ')}); the bill of materials leaves them out.`,
+    });
+  }
+  if (connector.tNutCount > 0) {
+    const systemId = (infos[1] ?? infos[0]).variant?.systemId;
+    if (systemId && !ctx.catalogue.tNutsBySystemKind.has(`${systemId}|${joint.tNut}`)) {
+      out.push({
+        id: findingId(CHECK, 'no-tnut', [joint.id]),
+        check: CHECK,
+        severity: 'warning',
+        partIds: [joint.id],
+        message: `The catalogue has no ${joint.tNut} T-nut for ${systemId}, so joint ${joint.id}'s T-nuts are not in the bill of materials.`,
+      });
+    }
+  }
+}
+
+function checkProfileEnds(ctx: AnalysisContext, out: Finding[]): void {
+  for (const info of ctx.profiles) {
+    for (const end of ['start', 'end'] as const) {
+      if (jointsAt(info, end).length > 0) continue;
+      const closers = accessoriesAt(info, end).filter((a) => END_CLOSERS.has(a.kind));
+      if (closers.length > 0) {
+        // A cap, foot or caster says the designer meant the end to be free.
+        checkThreadedEnd(info, end, closers, out);
+        continue;
+      }
+      const point = end === 'start' ? info.startPoint : info.endPoint;
+      const touching = profilesAtPoint(ctx, point, CONTACT_TOLERANCE_MM, info.index).filter(
+        (other) => !areJoined(ctx, info.profile.id, other.profile.id),
+      );
+      if (touching.length > 0) {
+        const other = touching[0];
+        out.push({
+          id: findingId(CHECK, 'touching-unjoined', [info.profile.id, end, other.profile.id]),
+          check: CHECK,
+          severity: 'error',
+          partIds: [info.profile.id, other.profile.id],
+          message: `${capitalise(endPhrase(info, end))} rests against ${profileName(other, other.profile.id)}, but no joint holds them together. Add a joint there.`,
+        });
+        continue;
+      }
+      const fix = addEndCapFix(ctx, info, end);
+      out.push({
+        id: findingId(CHECK, 'open-end', [info.profile.id, end]),
+        check: CHECK,
+        severity: 'warning',
+        partIds: [info.profile.id],
+        message: `${capitalise(endPhrase(info, end))} is not joined to anything and has no end cap.`,
+        ...(fix ? { fix } : {}),
+      });
+    }
+  }
+}
+
+/** Feet and casters thread into the centre bore: the end must be tapped. */
+function checkThreadedEnd(info: ProfileInfo, end: ProfileEnd, closers: { id: string; kind: string }[], out: Finding[]): void {
+  const threaded = closers.find((a) => a.kind === 'leveling-foot' || a.kind === 'caster');
+  if (!threaded) return;
+  if (info.profile.machining.some((m) => m.kind === 'end-tap' && m.fromEnd === end)) return;
+  const word = threaded.kind === 'caster' ? 'caster' : 'leveling foot';
+  out.push({
+    id: findingId(CHECK, 'untapped-foot', [info.profile.id, end]),
+    check: CHECK,
+    severity: 'error',
+    partIds: [info.profile.id, threaded.id],
+    message: `The ${word} ${threaded.id} screws into ${endPhrase(info, end)}, but that end is not tapped${info.system ? ` (${info.system.endTapSize})` : ''}. Add an end tap to the cut list.`,
+  });
+}
+
+interface SlotClaim {
+  joint: Joint;
+  connector: Connector;
+  lo: number;
+  hi: number;
+  /** The connector's own body (concealed connectors) rather than a bracket's possible legs. */
+  exact: boolean;
+}
+
+function checkSlotClaims(ctx: AnalysisContext, out: Finding[]): void {
+  const claims = new Map<string, SlotClaim[]>();
+  for (const joint of ctx.design.joints) {
+    if (!SLOT_CONNECTOR_KINDS.has(joint.kind) || joint.members.length !== 2) continue;
+    const connector = ctx.catalogue.connectors.get(joint.connectorId);
+    const joined = ctx.profileById.get(joint.members[0].profileId);
+    const met = ctx.profileById.get(joint.members[1].profileId);
+    if (!connector || !joined || !met) continue;
+    const end = memberEnd(joint.members[0], joined);
+    if (!end) continue;
+    // The joined profile leaves the met profile along its own axis, away from the joined end.
+    const away = end === 'start' ? joined.profile.direction : scale(joined.profile.direction, -1);
+    const { face, cosine } = faceFacing(met, away);
+    if (cosine < 0.7) continue;
+    const centre = projectAlong(met, memberPoint(joined, joint.members[0]));
+    const exact = joint.kind === 'concealed-connector';
+    const footprint = sectionHalfExtentAlong(joined.axes, joined.width, joined.height, met.profile.direction);
+    const half = exact ? connector.occupiedSlotLength / 2 : footprint + connector.occupiedSlotLength;
+    const key = `${met.profile.id}|${face}`;
+    const list = claims.get(key) ?? [];
+    list.push({ joint, connector, lo: Math.max(0, centre - half), hi: Math.min(met.profile.length, centre + half), exact });
+    claims.set(key, list);
+  }
+  for (const [key, list] of claims) {
+    if (list.length < 2) continue;
+    list.sort((a, b) => a.lo - b.lo);
+    const [metId, faceText] = key.split('|');
+    let reach = list[0];
+    for (let i = 1; i < list.length; i++) {
+      const c = list[i];
+      if (c.lo < reach.hi - 0.5) {
+        const both = [reach.joint.id, c.joint.id].sort();
+        out.push({
+          id: findingId(CHECK, 'slot-claimed-twice', [metId, faceText, ...both]),
+          check: CHECK,
+          severity: reach.exact && c.exact ? 'error' : 'warning',
+          partIds: [metId, ...both],
+          message: `Joints ${both[0]} and ${both[1]} both need the slot on face ${faceText} of profile ${metId} between ${mm(Math.max(c.lo, reach.lo))} and ${mm(Math.min(c.hi, reach.hi))} from its start. Move one joint or put its connector on another face.`,
+        });
+      }
+      if (c.hi > reach.hi) reach = c;
+    }
+  }
+}
+
+function checkAccessHolesUncovered(ctx: AnalysisContext, out: Finding[]): void {
+  for (const info of ctx.profiles) {
+    for (const m of info.profile.machining) {
+      if (m.kind !== 'access-counterbore' && m.kind !== 'access-hole') continue;
+      const probe = pointOffFace(info, m.face, machiningAlong(info, m), COVER_PROBE_MM);
+      const covering = profilesAtPoint(ctx, probe, 0, info.index);
+      if (covering.length === 0) continue;
+      const other = covering[0];
+      out.push({
+        id: findingId(CHECK, 'access-covered', [info.profile.id, m.id]),
+        check: CHECK,
+        severity: 'error',
+        partIds: [info.profile.id, other.profile.id],
+        message: `The ${MACHINING_WORDS[m.kind]} ${m.id} on face ${m.face} of ${profileName(info, info.profile.id)} is covered by ${profileName(other, other.profile.id)}, so the hex key cannot reach the screw. Put the hole on a free face.`,
+      });
+    }
+  }
+}
+
+function round(v: number): number {
+  return Math.round(v * 100) / 100;
+}

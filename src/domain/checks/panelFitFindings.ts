@@ -1,0 +1,197 @@
+/**
+ * Panel fit: a captured panel's thickness against the slot opening (too thick: error; much
+ * thinner: a gasket or retainer strip, with its length), its drawn opening against the frame,
+ * its plane against the slots, and the corner notches connectors in the slot call for.
+ */
+import type { Finding } from '../analysisTypes';
+import { panelAxes } from '../geometry/panelGeometry';
+import { sectionHalfExtentAlong } from '../geometry/profileGeometry';
+import { dominantAxis } from '../geometry/vectors';
+import type { AnalysisContext, PanelInfo } from './context';
+import { findingId, formatNumber, mm } from './describe';
+import { addGasketFix, setPanelThicknessFix } from './fixes';
+
+const CHECK = 'panel-fit';
+/** Thinner than this share of the slot opening rattles: needs a gasket or retainer strip. Common practice, no source. */
+export const THIN_PANEL_RATIO = 0.6;
+/** Drawn opening and frame opening may differ by this much, mm. */
+const OPENING_TOLERANCE_MM = 1;
+/** Connector kinds that sit in a slot at a frame corner, where a captured panel needs a notch. */
+const NOTCHING_KINDS = new Set(['corner-bracket', 'concealed-connector']);
+
+export function panelFitFindings(ctx: AnalysisContext): Finding[] {
+  const out: Finding[] = [];
+  for (const info of ctx.panels) {
+    const { panel } = info;
+    if (!info.material) {
+      out.push({
+        id: findingId(CHECK, 'unknown-material', [panel.id]),
+        check: CHECK,
+        severity: 'error',
+        partIds: [panel.id],
+        message: `Panel ${panel.id} uses material "${panel.materialId}", which is not in the catalogue.`,
+      });
+    }
+    if (panel.mounting !== 'captured') continue;
+    if (info.bounding.length !== 4) {
+      out.push({
+        id: findingId(CHECK, 'no-frame', [panel.id]),
+        check: CHECK,
+        severity: 'error',
+        partIds: [panel.id],
+        message: `Panel ${panel.id} is captured in slots but does not name the four profiles around it. Pick its frame or mount it on a face.`,
+      });
+      continue;
+    }
+    checkThickness(ctx, info, out);
+    checkOpening(info, out);
+    const notch = cornerNotches(ctx, info);
+    if (notch.corners > 0) {
+      out.push({
+        id: findingId(CHECK, 'corner-notch', [panel.id]),
+        check: CHECK,
+        severity: 'note',
+        partIds: [panel.id, ...notch.jointIds],
+        message: `Panel ${panel.id} needs a ${mm(notch.size)} square notch at ${notch.corners} ${notch.corners === 1 ? 'corner' : 'corners'}, where connectors sit in the slot (joints ${notch.jointIds.join(', ')}). Cut size ${formatNumber(info.sheetWidth)} × ${formatNumber(info.sheetHeight)} mm.`,
+        data: { notchMm: notch.size, corners: notch.corners, sheetWidthMm: round(info.sheetWidth), sheetHeightMm: round(info.sheetHeight) },
+      });
+    }
+  }
+  return out;
+}
+
+function checkThickness(ctx: AnalysisContext, info: PanelInfo, out: Finding[]): void {
+  const { panel, slotOpening } = info;
+  if (slotOpening === null) return;
+  const materialName = info.material?.name.toLowerCase() ?? panel.materialId;
+  const systemName = info.bounding[0].system?.name ?? ctx.design.systemId;
+  if (panel.thickness > slotOpening) {
+    const fits = (info.material?.thicknesses ?? []).filter((t) => t <= slotOpening).sort((a, b) => b - a)[0];
+    const fix = fits !== undefined ? setPanelThicknessFix(panel.id, fits) : undefined;
+    out.push({
+      id: findingId(CHECK, 'too-thick', [panel.id]),
+      check: CHECK,
+      severity: 'error',
+      partIds: [panel.id, ...info.bounding.map((b) => b.profile.id)],
+      message: `${formatNumber(panel.thickness)} mm ${materialName} is thicker than the ${formatNumber(slotOpening)} mm slot opening of the ${systemName} profiles around panel ${panel.id}; it will not go into the slot.${fits !== undefined ? ` Use ${formatNumber(fits)} mm sheet, or mount the panel on a face.` : ' Mount it on a face instead.'}`,
+      ...(fix ? { fix } : {}),
+      data: { thicknessMm: panel.thickness, slotOpeningMm: slotOpening },
+    });
+    return;
+  }
+  if (panel.thickness < THIN_PANEL_RATIO * slotOpening) {
+    const gasketLength = Math.round(2 * (info.sheetWidth + info.sheetHeight));
+    const hasGasket = ctx.design.accessories.some((a) => a.panelId === panel.id && a.kind === 'gasket');
+    if (hasGasket) return;
+    const fix = addGasketFix(ctx, info, gasketLength);
+    out.push({
+      id: findingId(CHECK, 'too-thin', [panel.id]),
+      check: CHECK,
+      severity: 'warning',
+      partIds: [panel.id],
+      message: `${formatNumber(panel.thickness)} mm ${materialName} is much thinner than the ${formatNumber(slotOpening)} mm slot and will rattle: panel ${panel.id} needs a gasket or retainer strip, ${formatNumber(gasketLength / 1000, 2)} m for its four edges.`,
+      ...(fix ? { fix } : {}),
+      data: { thicknessMm: panel.thickness, slotOpeningMm: slotOpening, gasketLengthMm: gasketLength },
+    });
+  }
+}
+
+/** Clear opening between the inner faces of the bounding profiles, and whether the panel is in their slot plane. */
+export function frameOpening(info: PanelInfo): { width: number; height: number; offPlane: number } | null {
+  const { n, w, h } = panelAxes(info.panel.rect.normal);
+  const c = info.panel.rect.center;
+  const low: [number, number] = [-Infinity, -Infinity];
+  const high: [number, number] = [Infinity, Infinity];
+  let offPlane = 0;
+  for (const b of info.bounding) {
+    const along = dominantAxis(b.profile.direction);
+    if (along === n) return null;
+    // A profile running along the width axis bounds the height, and the other way round.
+    const across = along === w ? h : w;
+    const slot = along === w ? 1 : 0;
+    const unit: [number, number, number] = [0, 0, 0];
+    unit[across] = 1;
+    const half = sectionHalfExtentAlong(b.axes, b.width, b.height, unit);
+    const axisCoord = b.startPoint[across];
+    if (axisCoord >= c[across]) high[slot] = Math.min(high[slot], axisCoord - half);
+    else low[slot] = Math.max(low[slot], axisCoord + half);
+    offPlane = Math.max(offPlane, Math.abs(b.startPoint[n] - c[n]));
+  }
+  if (!Number.isFinite(low[0] + high[0] + low[1] + high[1])) return null;
+  return { width: high[0] - low[0], height: high[1] - low[1], offPlane };
+}
+
+function checkOpening(info: PanelInfo, out: Finding[]): void {
+  const opening = frameOpening(info);
+  const { panel } = info;
+  const ids = [panel.id, ...info.bounding.map((b) => b.profile.id)];
+  if (!opening) {
+    out.push({
+      id: findingId(CHECK, 'frame-not-rectangle', [panel.id]),
+      check: CHECK,
+      severity: 'error',
+      partIds: ids,
+      message: `The four profiles named around panel ${panel.id} do not form a rectangle in the panel's plane.`,
+    });
+    return;
+  }
+  if (info.slotOpening !== null && opening.offPlane > info.slotOpening / 2) {
+    out.push({
+      id: findingId(CHECK, 'off-slot-plane', [panel.id]),
+      check: CHECK,
+      severity: 'error',
+      partIds: ids,
+      message: `Panel ${panel.id} is ${mm(opening.offPlane)} out of line with the slots of its frame; a captured panel sits in the slot centre.`,
+      data: { offsetMm: round(opening.offPlane) },
+    });
+  }
+  const dw = Math.abs(opening.width - panel.rect.width);
+  const dh = Math.abs(opening.height - panel.rect.height);
+  if (dw > OPENING_TOLERANCE_MM || dh > OPENING_TOLERANCE_MM) {
+    out.push({
+      id: findingId(CHECK, 'opening-mismatch', [panel.id]),
+      check: CHECK,
+      severity: 'warning',
+      partIds: ids,
+      message: `Panel ${panel.id} is drawn ${formatNumber(panel.rect.width)} × ${formatNumber(panel.rect.height)} mm, but its frame's clear opening is ${formatNumber(opening.width)} × ${formatNumber(opening.height)} mm. Resize the panel to the opening.`,
+      data: { openingWidthMm: round(opening.width), openingHeightMm: round(opening.height) },
+    });
+  }
+}
+
+/** Corners of a captured panel where a connector sits in the slot, and the notch that clears it, mm. */
+export function cornerNotches(ctx: AnalysisContext, info: PanelInfo): { size: number; corners: number; jointIds: string[] } {
+  const key = `cornerNotches|${info.panel.id}`;
+  const cached = ctx.memo.get(key) as { size: number; corners: number; jointIds: string[] } | undefined;
+  if (cached) return cached;
+  const result = computeCornerNotches(ctx, info);
+  ctx.memo.set(key, result);
+  return result;
+}
+
+function computeCornerNotches(ctx: AnalysisContext, info: PanelInfo): { size: number; corners: number; jointIds: string[] } {
+  if (info.panel.mounting !== 'captured' || info.bounding.length !== 4) return { size: 0, corners: 0, jointIds: [] };
+  const frame = new Set(info.bounding.map((b) => b.profile.id));
+  const jointIds: string[] = [];
+  const seenCorners = new Set<string>();
+  let size = 0;
+  for (const b of info.bounding) {
+    for (const joint of b.joints) {
+      if (!NOTCHING_KINDS.has(joint.kind) || joint.members.length < 2) continue;
+      const a = joint.members[0].profileId;
+      const c = joint.members[1].profileId;
+      if (!frame.has(a) || !frame.has(c) || seenCorners.has(joint.id)) continue;
+      const connector = ctx.catalogue.connectors.get(joint.connectorId);
+      if (!connector || connector.occupiedSlotLength <= 0) continue;
+      seenCorners.add(joint.id);
+      jointIds.push(joint.id);
+      // The notch clears the connector's length in the slot beyond the engagement depth.
+      size = Math.max(size, Math.round(connector.occupiedSlotLength * 10) / 10);
+    }
+  }
+  return { size, corners: Math.min(jointIds.length, 4), jointIds: jointIds.sort() };
+}
+
+function round(v: number): number {
+  return Math.round(v * 100) / 100;
+}

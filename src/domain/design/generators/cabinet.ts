@@ -1,0 +1,136 @@
+/**
+ * A cabinet built from two side frames (sub-assemblies built lying on their side), joined by
+ * cross members: the left side stands first, the cross members, shelves and back panel go onto
+ * it, and the right side slides in along −X to close everything.
+ */
+import { z } from 'zod';
+import type { Catalogue } from '../../catalogue/types';
+import { createIdAllocator } from '../ids';
+import type { AssemblyStep, SubAssembly, Vec3 } from '../schema';
+import { buildFrame, capturedSheet, type BuiltFrame } from './frameBuilder';
+import { baseParamsShape, checkCapturedMaterial, checkFrameSize, checkMaterial, panelMaterialId, sizesFor } from './params';
+import type { GeneratorDefinition } from './types';
+
+export const cabinetParamsSchema = z
+  .object({
+    ...baseParamsShape,
+    shelves: z.number().int('Shelves must be a whole number').min(0, 'Shelves cannot be negative').max(8, 'A cabinet has at most 8 inner shelves').default(1),
+    /** Captured wall and top material; left out, whichever of ACM, HDPE, ABS fits the slot most snugly. */
+    panelMaterialId: panelMaterialId.optional(),
+    /** Captured shelf material; left out, the first of plywood, HDPE, ACM that fits the slot. */
+    shelfMaterialId: panelMaterialId.optional(),
+    doors: z.boolean().default(true),
+    doorMaterialId: panelMaterialId.default('acm'),
+    doorThickness: z.number().positive('The door thickness must be greater than 0 mm').max(20, 'A door sheet is at most 20 mm thick').default(4),
+  })
+  .superRefine((p, ctx) => {
+    const s = checkFrameSize(p, ctx, p.shelves + 2);
+    for (const key of ['panelMaterialId', 'shelfMaterialId', 'doorMaterialId'] as const) checkMaterial(p[key], key, ctx);
+    for (const key of ['panelMaterialId', 'shelfMaterialId'] as const) checkCapturedMaterial(p[key], key, s, ctx);
+    if (!s) return;
+    const gap = (p.height - s.railHeight) / (p.shelves + 1);
+    if (gap < 3 * s.railHeight) {
+      ctx.addIssue({ code: 'custom', path: ['shelves'], message: `Too many shelves for this height: shelves would be ${Math.round(gap)} mm apart; allow at least ${3 * s.railHeight} mm` });
+    }
+  });
+export type CabinetParams = z.infer<typeof cabinetParamsSchema>;
+
+function cabinetSteps(frame: BuiltFrame, names: string[], subs: { left: SubAssembly; right: SubAssembly }): AssemblyStep[] {
+  const ids = createIdAllocator(frame.design);
+  const steps: AssemblyStep[] = [];
+  const step = (title: string, partIds: string[], extra: Partial<AssemblyStep> = {}) => {
+    const parts = partIds.filter(Boolean);
+    if (parts.length) steps.push({ id: ids.next('step'), title, partIds: parts, ...extra });
+  };
+  const jointsOf = (railId: string) => frame.jointsOfRail.get(railId) ?? [];
+  for (const side of ['left', 'right'] as const) {
+    const sub = side === 'left' ? subs.left : subs.right;
+    const [front, back] = side === 'left' ? [frame.posts.frontLeft, frame.posts.backLeft] : [frame.posts.frontRight, frame.posts.backRight];
+    const label = side === 'left' ? 'Left' : 'Right';
+    step(`${label} side: lay out the two uprights`, [front, back], { subAssemblyId: sub.id, insertionDirection: [0, 1, 0] });
+    frame.rails.forEach((r, k) => {
+      if (k > 0) {
+        const wall = frame.walls[k - 1]?.[side];
+        if (wall) step(`${label} side: slide in the panel below the ${names[k].toLowerCase()} rail`, [wall], { subAssemblyId: sub.id, insertionDirection: [0, -1, 0] });
+      }
+      step(`${label} side: ${names[k].toLowerCase()} rail`, [r[side], ...jointsOf(r[side])], { subAssemblyId: sub.id, insertionDirection: [0, -1, 0] });
+    });
+  }
+  step('Stand the left side up', [], {});
+  const crossMembers = frame.rails.flatMap((r) => [r.back, r.front]);
+  // Each cross member's first joint meets the left uprights (rails run from left to right).
+  step('Join the cross members to the left side', [...crossMembers, ...crossMembers.map((id) => jointsOf(id)[0])], {
+    insertionDirection: [-1, 0, 0],
+    notes: 'Support the cross members until the right side is on.',
+  });
+  const backPanels = frame.walls.map((b) => b.back).filter((x): x is string => !!x);
+  const shelves = frame.shelves.filter((x): x is string => !!x);
+  step('Slide the shelves and the back panel in from the open right side', [...shelves, ...backPanels], {
+    insertionDirection: [-1, 0, 0],
+    notes: 'They must be in before the right side closes their slots.',
+  });
+  step('Bring the right side in and fasten it', crossMembers.map((id) => jointsOf(id)[1]), {
+    subAssemblyId: subs.right.id,
+    insertionDirection: [-1, 0, 0],
+    notes: 'Two people: keep the side square while it slides onto the panels.',
+  });
+  const doorParts = frame.design.accessories.filter((a) => a.panelId && frame.doors.includes(a.panelId)).map((a) => a.id);
+  if (frame.doors.length) step('Hang the doors', [...frame.doors, ...doorParts], { insertionDirection: [0, 0, 1] });
+  const feet = frame.design.accessories.filter((a) => a.kind === 'leveling-foot' || a.kind === 'caster').map((a) => a.id);
+  step('Screw in the feet and level the cabinet', feet, { insertionDirection: [0, 1, 0], notes: 'Tip the cabinet with a helper; never work under a raised frame.' });
+  step('Press on the end caps', frame.design.accessories.filter((a) => a.kind === 'end-cap').map((a) => a.id), { insertionDirection: [0, -1, 0] });
+  return steps.filter((s) => s.partIds.length > 0);
+}
+
+export const cabinetGenerator: GeneratorDefinition<typeof cabinetParamsSchema> = {
+  id: 'cabinet',
+  name: 'Cabinet from two side frames',
+  description: 'Two side frames built flat, joined by cross members; shelves, back panel and doors.',
+  paramsSchema: cabinetParamsSchema,
+  defaults: { systemId: 'metric-30', width: 800, depth: 500, height: 1000, feet: 'leveling-foot', shelves: 1, doors: true, doorMaterialId: 'acm', doorThickness: 4 },
+  generate(p: CabinetParams, catalogue: Catalogue) {
+    const s = sizesFor(p, catalogue)!;
+    const half = s.railHeight / 2;
+    const gap = (p.height - s.railHeight) / (p.shelves + 1);
+    const fit = (id: string | undefined) => capturedSheet(catalogue, s.system, id, ['plywood', 'hdpe']);
+    const walls = capturedSheet(catalogue, s.system, p.panelMaterialId, ['acm', 'hdpe', 'abs']);
+    const count = p.shelves + 2;
+    const names = Array.from({ length: count }, (_, k) => (k === 0 ? 'Bottom' : k === count - 1 ? 'Top' : `Shelf ${k}`));
+    const levels = names.map((name, k) => ({
+      y: Math.round((half + gap * k) * 1000) / 1000,
+      name,
+      shelf: k === count - 1 ? { ...walls, role: 'panel' as const, label: 'Top panel' } : fit(p.shelfMaterialId),
+    }));
+    const frame = buildFrame(
+      {
+        name: p.name ?? 'Cabinet',
+        systemId: p.systemId,
+        railVariantId: p.variantId,
+        width: p.width,
+        depth: p.depth,
+        postHeight: p.height,
+        levels,
+        walls: { faces: ['back', 'left', 'right'], panel: walls },
+        ...(p.doors ? { doors: { materialId: p.doorMaterialId, thickness: p.doorThickness } } : {}),
+        feet: p.feet,
+        tags: ['cabinet'],
+      },
+      catalogue,
+    );
+    const ids = createIdAllocator(frame.design);
+    const sideOf = (side: 'left' | 'right', joinDirection: Vec3): SubAssembly => {
+      const posts = side === 'left' ? [frame.posts.frontLeft, frame.posts.backLeft] : [frame.posts.frontRight, frame.posts.backRight];
+      return {
+        id: ids.next('sub'),
+        name: side === 'left' ? 'Left side frame' : 'Right side frame',
+        profileIds: [...posts, ...frame.rails.map((r) => r[side])],
+        panelIds: frame.walls.map((b) => b[side]).filter((x): x is string => !!x),
+        buildOrientation: 'on-side',
+        joinDirection,
+      };
+    };
+    const subs = { left: sideOf('left', [1, 0, 0]), right: sideOf('right', [-1, 0, 0]) };
+    const design = { ...frame.design, subAssemblies: [subs.left, subs.right] };
+    return { ...design, steps: cabinetSteps({ ...frame, design }, names, subs) };
+  },
+};

@@ -1,0 +1,69 @@
+/**
+ * Forward migrations of the design document. Each step takes the raw JSON of one version and
+ * returns the raw JSON of the next; `migrateToCurrent` runs them in order.
+ *
+ * v0 → v1: profiles were stored by their two end points (`from`, `to`); v1 stores `start`,
+ * a unit `direction` and a `length`. Nothing else changed.
+ */
+import { CURRENT_SCHEMA_VERSION } from './schema';
+
+export interface MigrationIssue {
+  path: string;
+  message: string;
+}
+
+type Raw = Record<string, unknown>;
+type Migration = (doc: Raw) => { doc: Raw; issues: MigrationIssue[] };
+
+const isPoint = (v: unknown): v is [number, number, number] =>
+  Array.isArray(v) && v.length === 3 && v.every((n) => typeof n === 'number' && Number.isFinite(n));
+
+const migrateV0toV1: Migration = (doc) => {
+  const issues: MigrationIssue[] = [];
+  const profiles = Array.isArray(doc.profiles) ? doc.profiles : [];
+  const migrated = profiles.map((p: unknown, index) => {
+    if (typeof p !== 'object' || p === null) return p;
+    const { from, to, ...rest } = p as Raw;
+    if (!('from' in (p as Raw)) && !('to' in (p as Raw))) return p;
+    if (!isPoint(from) || !isPoint(to)) {
+      issues.push({ path: `profiles.${index}`, message: 'A version 0 profile needs "from" and "to" as [x, y, z] in mm' });
+      return p;
+    }
+    const d = [to[0] - from[0], to[1] - from[1], to[2] - from[2]];
+    const length = Math.hypot(d[0], d[1], d[2]);
+    if (length === 0) {
+      issues.push({ path: `profiles.${index}`, message: 'A version 0 profile has "from" equal to "to": it has no length' });
+      return p;
+    }
+    return { ...rest, start: [...from], direction: d.map((c) => c / length), length };
+  });
+  return { doc: { ...doc, profiles: migrated, schemaVersion: 1 }, issues };
+};
+
+/** migrations[n] turns version n into version n + 1. */
+const migrations: Migration[] = [migrateV0toV1];
+
+export function migrateToCurrent(input: Raw): { doc: Raw; issues: MigrationIssue[]; fromVersion: number } {
+  const version = input.schemaVersion;
+  if (version === undefined) {
+    return { doc: input, fromVersion: -1, issues: [{ path: 'schemaVersion', message: `The document has no "schemaVersion"; add "schemaVersion": ${CURRENT_SCHEMA_VERSION}` }] };
+  }
+  if (typeof version !== 'number' || !Number.isInteger(version) || version < 0) {
+    return { doc: input, fromVersion: -1, issues: [{ path: 'schemaVersion', message: '"schemaVersion" must be a whole number' }] };
+  }
+  if (version > CURRENT_SCHEMA_VERSION) {
+    return {
+      doc: input,
+      fromVersion: version,
+      issues: [{ path: 'schemaVersion', message: `This document is version ${version}, made by a newer Slotwise; this one reads up to version ${CURRENT_SCHEMA_VERSION}` }],
+    };
+  }
+  let doc = input;
+  const issues: MigrationIssue[] = [];
+  for (let v = version; v < CURRENT_SCHEMA_VERSION; v++) {
+    const step = migrations[v](doc);
+    doc = step.doc;
+    issues.push(...step.issues);
+  }
+  return { doc, issues, fromVersion: version };
+}

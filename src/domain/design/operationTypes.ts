@@ -1,0 +1,84 @@
+/**
+ * The inputs of the design operations and their serialisable form, `DesignOperation`
+ * (type + payload), which findings carry as fixes and the editor replays. Lengths mm.
+ */
+import type { Accessory, AccessoryKind, Axis, Cutout, Joint, JointKind, JointMember, Panel, Vec3 } from './schema';
+
+export class OperationError extends Error {
+  constructor(message: string) {
+    super(message);
+    this.name = 'OperationError';
+  }
+}
+
+export interface ProfileInput {
+  id?: string;
+  variantId?: string;
+  start: Vec3;
+  direction: Vec3;
+  length: number;
+  rollDeg?: number;
+  label?: string;
+}
+export interface ProfileChanges {
+  length?: number;
+  start?: Vec3;
+  direction?: Vec3;
+  rollDeg?: number;
+  variantId?: string;
+  label?: string;
+}
+export interface JointInput {
+  id?: string;
+  kind: JointKind;
+  /** Omitted: the system's connector of that kind. */
+  connectorId?: string;
+  members: JointMember[];
+  fastenerHead?: Joint['fastenerHead'];
+  tNut?: Joint['tNut'];
+  quantity?: number;
+}
+export interface PanelInput {
+  id?: string;
+  materialId: string;
+  thickness: number;
+  mounting: Panel['mounting'];
+  role?: Panel['role'];
+  boundedBy?: string[];
+  rect: Panel['rect'];
+  cutouts?: Omit<Cutout, 'id'>[];
+  label?: string;
+}
+export type PanelChanges = Partial<Pick<Panel, 'materialId' | 'thickness' | 'mounting' | 'role' | 'rect' | 'label' | 'boundedBy'>>;
+export interface AccessoryInput {
+  id?: string;
+  kind: AccessoryKind;
+  partId: string;
+  profileId?: string;
+  panelId?: string;
+  end?: Accessory['end'];
+  along?: number;
+  length?: number;
+  quantity?: number;
+}
+
+export type DesignOperation =
+  | { type: 'addProfile'; payload: { profile: ProfileInput } }
+  | { type: 'updateProfile'; payload: { profileId: string; changes: ProfileChanges } }
+  | { type: 'removeParts'; payload: { ids: string[] } }
+  | { type: 'translateParts'; payload: { ids: string[]; offset: Vec3 } }
+  | { type: 'duplicateParts'; payload: { ids: string[]; offset?: Vec3 } }
+  | { type: 'mirrorParts'; payload: { ids: string[]; axis: Axis; point: Vec3; keepOriginal?: boolean } }
+  | { type: 'arrayParts'; payload: { ids: string[]; count: number; spacing: Vec3 } }
+  | { type: 'rotateParts90'; payload: { ids: string[]; axis: Axis; point: Vec3; quarterTurns?: number } }
+  | { type: 'setJointConnector'; payload: { jointId: string; kind: JointKind; connectorId?: string } }
+  | { type: 'addJoint'; payload: { joint: JointInput } }
+  | { type: 'removeJoint'; payload: { jointId: string } }
+  | { type: 'addPanel'; payload: { panel: PanelInput } }
+  | { type: 'updatePanel'; payload: { panelId: string; changes: PanelChanges } }
+  | { type: 'addCutout'; payload: { panelId: string; cutout: Omit<Cutout, 'id' | 'kind'> & { id?: string } } }
+  | { type: 'addAccessory'; payload: { accessory: AccessoryInput } }
+  | { type: 'autoEndCaps'; payload?: Record<string, never> }
+  | { type: 'addFeetToFreeBottomEnds'; payload?: { kind?: 'leveling-foot' | 'caster' } };
+
+export type DesignOperationType = DesignOperation['type'];

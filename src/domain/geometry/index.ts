@@ -1,0 +1,5 @@
+export * from './vectors';
+export * from './box';
+export * from './profileGeometry';
+export * from './panelGeometry';
+export * from './spatialGrid';

@@ -1,0 +1,185 @@
+/**
+ * Uniform-grid spatial index over axis-aligned boxes: the broad phase for interference and
+ * "what touches this profile end" queries. Building is O(n); pair enumeration visits each
+ * candidate pair once (it is reported only by the cell holding the corner of the pair's overlap).
+ */
+import type { Box } from './box';
+
+/** Cell keys stay below 2^30 so they are small integers (fast Map keys, no boxed doubles). */
+const MAX_CELLS = 1 << 30;
+/** Entries per box allowed on average before the cells are made coarser. */
+const MAX_AVERAGE_CELLS_PER_BOX = 12;
+
+export class UniformGrid {
+  readonly cellSize: number;
+  private readonly boxes: readonly Box[];
+  private readonly margin: number;
+  private readonly originX: number;
+  private readonly originY: number;
+  private readonly originZ: number;
+  private readonly cells = new Map<number, number[]>();
+  /** Cells along y and z: key = (x · ny + y) · nz + z. */
+  private readonly ny: number;
+  private readonly nz: number;
+  private readonly nx: number;
+  private readonly stamps: Int32Array;
+  private stamp = 0;
+
+  /**
+   * @param boxes items to index, addressed by their array index
+   * @param margin mm added around every box, so "touching within margin" counts as near
+   * @param cellSize mm; default from the boxes' typical size
+   */
+  constructor(boxes: readonly Box[], options: { margin?: number; cellSize?: number } = {}) {
+    this.boxes = boxes;
+    this.margin = options.margin ?? 0;
+    this.stamps = new Int32Array(boxes.length);
+    let minX = Infinity;
+    let minY = Infinity;
+    let minZ = Infinity;
+    let maxX = -Infinity;
+    let maxY = -Infinity;
+    let maxZ = -Infinity;
+    for (const b of boxes) {
+      if (b.minX < minX) minX = b.minX;
+      if (b.minY < minY) minY = b.minY;
+      if (b.minZ < minZ) minZ = b.minZ;
+      if (b.maxX > maxX) maxX = b.maxX;
+      if (b.maxY > maxY) maxY = b.maxY;
+      if (b.maxZ > maxZ) maxZ = b.maxZ;
+    }
+    const m = this.margin;
+    this.originX = (Number.isFinite(minX) ? minX : 0) - m - 1;
+    this.originY = (Number.isFinite(minY) ? minY : 0) - m - 1;
+    this.originZ = (Number.isFinite(minZ) ? minZ : 0) - m - 1;
+    const spanX = Number.isFinite(maxX) ? maxX - minX + 2 * m + 2 : 1;
+    const spanY = Number.isFinite(maxY) ? maxY - minY + 2 * m + 2 : 1;
+    const spanZ = Number.isFinite(maxZ) ? maxZ - minZ + 2 * m + 2 : 1;
+    let cellSize = Math.max(options.cellSize ?? defaultCellSize(boxes), 1e-3);
+    const cellsFor = (size: number) => (Math.floor(spanX / size) + 1) * (Math.floor(spanY / size) + 1) * (Math.floor(spanZ / size) + 1);
+    while (cellsFor(cellSize) >= MAX_CELLS) cellSize *= 2;
+    // Coarsen until the total number of cell entries stays proportional to n.
+    for (;;) {
+      let entries = 0;
+      for (const b of boxes) entries += this.cellCount(b, cellSize);
+      if (entries <= Math.max(64, MAX_AVERAGE_CELLS_PER_BOX * boxes.length)) break;
+      cellSize *= 2;
+    }
+    this.cellSize = cellSize;
+    this.nx = Math.floor(spanX / cellSize) + 1;
+    this.ny = Math.floor(spanY / cellSize) + 1;
+    this.nz = Math.floor(spanZ / cellSize) + 1;
+    for (let i = 0; i < boxes.length; i++) this.insert(i);
+  }
+
+  /** Calls `visit(i, j)` with i < j once for every pair whose (margin-grown) boxes overlap. */
+  forEachNearPair(visit: (i: number, j: number) => void): void {
+    const s = this.cellSize;
+    const m = this.margin;
+    for (const [key, items] of this.cells) {
+      if (items.length < 2) continue;
+      const cz = key % this.nz;
+      const cy = Math.floor(key / this.nz) % this.ny;
+      const cx = Math.floor(key / (this.nz * this.ny));
+      for (let a = 0; a < items.length; a++) {
+        const i = items[a];
+        const bi = this.boxes[i];
+        for (let b = a + 1; b < items.length; b++) {
+          const j = items[b];
+          const bj = this.boxes[j];
+          if (bi.minX - m > bj.maxX + m || bj.minX - m > bi.maxX + m) continue;
+          if (bi.minY - m > bj.maxY + m || bj.minY - m > bi.maxY + m) continue;
+          if (bi.minZ - m > bj.maxZ + m || bj.minZ - m > bi.maxZ + m) continue;
+          // Report the pair only from the cell containing the low corner of the overlap.
+          const ox = Math.floor((Math.max(bi.minX, bj.minX) - m - this.originX) / s);
+          if (ox !== cx) continue;
+          const oy = Math.floor((Math.max(bi.minY, bj.minY) - m - this.originY) / s);
+          if (oy !== cy) continue;
+          const oz = Math.floor((Math.max(bi.minZ, bj.minZ) - m - this.originZ) / s);
+          if (oz !== cz) continue;
+          if (i < j) visit(i, j);
+          else visit(j, i);
+        }
+      }
+    }
+  }
+
+  /** Calls `visit(i)` once for each indexed box within `margin` (+ the grid margin) of `query`. */
+  forEachNear(query: Box, visit: (i: number) => void, margin = 0): void {
+    const stamp = ++this.stamp;
+    const s = this.cellSize;
+    const m = this.margin + margin;
+    const x0 = this.cellIndex(query.minX - m, this.originX, s, this.nx);
+    const x1 = this.cellIndex(query.maxX + m, this.originX, s, this.nx);
+    const y0 = this.cellIndex(query.minY - m, this.originY, s, this.ny);
+    const y1 = this.cellIndex(query.maxY + m, this.originY, s, this.ny);
+    const z0 = this.cellIndex(query.minZ - m, this.originZ, s, this.nz);
+    const z1 = this.cellIndex(query.maxZ + m, this.originZ, s, this.nz);
+    for (let x = x0; x <= x1; x++) {
+      for (let y = y0; y <= y1; y++) {
+        for (let z = z0; z <= z1; z++) {
+          const items = this.cells.get((x * this.ny + y) * this.nz + z);
+          if (!items) continue;
+          for (const i of items) {
+            if (this.stamps[i] === stamp) continue;
+            this.stamps[i] = stamp;
+            const b = this.boxes[i];
+            if (b.minX > query.maxX + m || query.minX > b.maxX + m) continue;
+            if (b.minY > query.maxY + m || query.minY > b.maxY + m) continue;
+            if (b.minZ > query.maxZ + m || query.minZ > b.maxZ + m) continue;
+            visit(i);
+          }
+        }
+      }
+    }
+  }
+
+  /** Cell index along one axis, clamped to the grid (queries may reach outside it). */
+  private cellIndex(value: number, origin: number, size: number, count: number): number {
+    const c = Math.floor((value - origin) / size);
+    return c < 0 ? 0 : c >= count ? count - 1 : c;
+  }
+
+  private cellCount(b: Box, size: number): number {
+    const m = this.margin;
+    const nx = Math.floor((b.maxX + m - this.originX) / size) - Math.floor((b.minX - m - this.originX) / size) + 1;
+    const ny = Math.floor((b.maxY + m - this.originY) / size) - Math.floor((b.minY - m - this.originY) / size) + 1;
+    const nz = Math.floor((b.maxZ + m - this.originZ) / size) - Math.floor((b.minZ - m - this.originZ) / size) + 1;
+    return nx * ny * nz;
+  }
+
+  private insert(i: number): void {
+    const b = this.boxes[i];
+    const s = this.cellSize;
+    const m = this.margin;
+    const x0 = this.cellIndex(b.minX - m, this.originX, s, this.nx);
+    const x1 = this.cellIndex(b.maxX + m, this.originX, s, this.nx);
+    const y0 = this.cellIndex(b.minY - m, this.originY, s, this.ny);
+    const y1 = this.cellIndex(b.maxY + m, this.originY, s, this.ny);
+    const z0 = this.cellIndex(b.minZ - m, this.originZ, s, this.nz);
+    const z1 = this.cellIndex(b.maxZ + m, this.originZ, s, this.nz);
+    for (let x = x0; x <= x1; x++) {
+      for (let y = y0; y <= y1; y++) {
+        for (let z = z0; z <= z1; z++) {
+          const key = (x * this.ny + y) * this.nz + z;
+          const list = this.cells.get(key);
+          if (list) list.push(i);
+          else this.cells.set(key, [i]);
+        }
+      }
+    }
+  }
+}
+
+/** Median of each box's longest side: long members then span only a few cells. */
+function defaultCellSize(boxes: readonly Box[]): number {
+  if (boxes.length === 0) return 100;
+  const step = Math.max(1, Math.floor(boxes.length / 512));
+  const sizes: number[] = [];
+  for (let i = 0; i < boxes.length; i += step) {
+    const b = boxes[i];
+    sizes.push(Math.max(b.maxX - b.minX, b.maxY - b.minY, b.maxZ - b.minZ));
+  }
+  sizes.sort((a, b) => a - b);
+  return Math.max(sizes[sizes.length >> 1], 1);
+}

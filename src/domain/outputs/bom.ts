@@ -1,0 +1,106 @@
+/**
+ * Bill of materials grouped by part code: profiles by variant (metres, with the piece count),
+ * connectors, screws and T-nuts from the joints, panels by material, thickness and size,
+ * accessories by piece, gasket and slot cover by length.
+ */
+import type { BomLine } from '../analysisTypes';
+import type { AnalysisContext } from '../checks/context';
+import type { HardwareSummary } from './hardware';
+import type { PanelSheet } from './panelSheets';
+
+const CATEGORY_ORDER = ['profile', 'connector', 'fastener', 't-nut', 'panel', 'accessory', 'gasket', 'slot-cover'];
+
+export function billOfMaterials(ctx: AnalysisContext, hardware: HardwareSummary, sheets: PanelSheet[]): BomLine[] {
+  const lines = new Map<string, BomLine>();
+  const prices = ctx.catalogue.catalogue.prices;
+
+  for (const info of ctx.profiles) {
+    const id = info.profile.variantId;
+    let line = lines.get(`profile|${id}`);
+    if (!line) {
+      const v = info.variant;
+      line = {
+        code: v?.partCode ?? id,
+        description: v ? v.name : `Unknown profile variant ${id}`,
+        category: 'profile',
+        quantity: 0,
+        unit: 'm',
+        unitMass: v?.massPerMetre ?? 0,
+        unitPrice: prices.profilePerMetre[id] ?? 0,
+        linePrice: 0,
+        lineMass: 0,
+        pieces: 0,
+        partIds: [],
+      };
+      lines.set(`profile|${id}`, line);
+    }
+    line.quantity += info.profile.length / 1000;
+    line.pieces = (line.pieces ?? 0) + 1;
+    line.partIds.push(info.profile.id);
+  }
+
+  for (const h of hardware.lines) {
+    lines.set(`${h.category}|${h.partId}`, {
+      code: h.partCode,
+      description: h.description,
+      category: h.category,
+      quantity: h.quantity,
+      unit: h.unit,
+      unitMass: h.unitMass,
+      unitPrice: h.unitPrice,
+      linePrice: 0,
+      lineMass: 0,
+      partIds: h.sourceIds,
+    });
+  }
+
+  for (const s of sheets) {
+    const p = s.info.panel;
+    const w = round1(s.info.sheetWidth);
+    const hgt = round1(s.info.sheetHeight);
+    const key = `panel|${p.materialId}|${p.thickness}|${w}|${hgt}|${s.notch.corners}|${p.cutouts.length}`;
+    let line = lines.get(key);
+    if (!line) {
+      const name = s.info.material?.name ?? p.materialId;
+      line = {
+        code: `${p.materialId}-${p.thickness}`,
+        description: `${name} ${p.thickness} mm, ${w} × ${hgt} mm${s.notch.corners > 0 ? `, ${s.notch.corners} corner notches ${s.notch.size} mm` : ''}${p.cutouts.length > 0 ? `, ${p.cutouts.length} cut-outs` : ''}`,
+        category: 'panel',
+        quantity: 0,
+        unit: 'pcs',
+        unitMass: s.mass,
+        unitPrice: round2(s.area * s.pricePerSquareMetre),
+        linePrice: 0,
+        lineMass: 0,
+        partIds: [],
+      };
+      lines.set(key, line);
+    }
+    line.quantity += 1;
+    line.partIds.push(p.id);
+  }
+
+  const out = [...lines.values()];
+  for (const line of out) {
+    line.quantity = line.unit === 'pcs' ? line.quantity : round3(line.quantity);
+    line.unitMass = round4(line.unitMass);
+    line.linePrice = round2(line.quantity * line.unitPrice);
+    line.lineMass = round4(line.quantity * line.unitMass);
+  }
+  return out.sort(
+    (a, b) => CATEGORY_ORDER.indexOf(a.category) - CATEGORY_ORDER.indexOf(b.category) || (a.code < b.code ? -1 : a.code > b.code ? 1 : 0),
+  );
+}
+
+function round1(v: number): number {
+  return Math.round(v * 10) / 10;
+}
+function round2(v: number): number {
+  return Math.round(v * 100) / 100;
+}
+function round3(v: number): number {
+  return Math.round(v * 1000) / 1000;
+}
+function round4(v: number): number {
+  return Math.round(v * 10000) / 10000;
+}

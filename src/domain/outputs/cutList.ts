@@ -1,0 +1,99 @@
+/**
+ * Cut list: every profile piece with its length and tolerance, what happens at each end (tap,
+ * cap, foot, caster, plain) and its machining with positions from a named end; identical pieces
+ * grouped with a quantity.
+ */
+import type { CutListGroup, CutListItem, CutMachiningOperation, EndTreatment } from '../analysisTypes';
+import { threadFor, type ScrewSize } from '../catalogue/fastenerStandards';
+import { accessoriesAt, type AnalysisContext, type ProfileInfo } from '../checks/context';
+import { endWord, formatNumber } from '../checks/describe';
+import type { ProfileEnd } from '../design/schema';
+
+const MACHINING_NAMES: Record<CutMachiningOperation['kind'], string> = {
+  'access-counterbore': 'Access counterbore',
+  'access-hole': 'Access hole',
+  'end-tap': 'End tap',
+  drill: 'Drill',
+};
+
+export function cutList(ctx: AnalysisContext): { items: CutListItem[]; groups: CutListGroup[] } {
+  const tolerance = ctx.design.settings.cutTolerance;
+  const items: CutListItem[] = [];
+  const groups = new Map<string, CutListGroup>();
+  for (const info of ctx.profiles) {
+    const ends = { start: endTreatment(ctx, info, 'start'), end: endTreatment(ctx, info, 'end') };
+    const machining = info.profile.machining
+      .map((m): CutMachiningOperation => ({
+        id: m.id,
+        kind: m.kind,
+        fromEnd: m.fromEnd,
+        offset: m.offset,
+        face: m.face,
+        diameter: m.diameter ?? null,
+        description:
+          m.kind === 'end-tap'
+            ? `${MACHINING_NAMES[m.kind]}${tapThread(info) ? ` ${tapThread(info)}` : ''} in the ${endWord(info, m.fromEnd)} end`
+            : `${MACHINING_NAMES[m.kind]}${m.diameter ? ` Ø ${formatNumber(m.diameter)} mm` : ''} on face ${m.face}, ${formatNumber(m.offset)} mm from the ${endWord(info, m.fromEnd)} end`,
+      }))
+      .sort((a, b) => (a.fromEnd === b.fromEnd ? a.offset - b.offset : a.fromEnd === 'start' ? -1 : 1));
+    const groupKey = [
+      info.profile.variantId,
+      info.profile.length.toFixed(1),
+      ends.start.kind,
+      ends.end.kind,
+      ...machining.map((m) => `${m.kind}/${m.fromEnd}/${m.offset.toFixed(1)}/${m.face}/${m.diameter ?? ''}`),
+    ].join('|');
+    items.push({
+      id: info.profile.id,
+      label: info.profile.label ?? info.profile.id,
+      variantId: info.profile.variantId,
+      length: info.profile.length,
+      tolerance,
+      ends,
+      machining,
+      groupKey,
+    });
+    const group = groups.get(groupKey);
+    if (group) {
+      group.quantity += 1;
+      group.profileIds.push(info.profile.id);
+    } else {
+      groups.set(groupKey, {
+        groupKey,
+        variantId: info.profile.variantId,
+        length: info.profile.length,
+        tolerance,
+        quantity: 1,
+        profileIds: [info.profile.id],
+        ends,
+        machining,
+      });
+    }
+  }
+  const sortedGroups = [...groups.values()].sort((a, b) => (a.variantId === b.variantId ? b.length - a.length : a.variantId < b.variantId ? -1 : 1));
+  return { items, groups: sortedGroups };
+}
+
+function tapThread(info: ProfileInfo): string | undefined {
+  const size = info.system?.endTapSize;
+  return size ? threadFor(size as ScrewSize).designation : undefined;
+}
+
+function endTreatment(ctx: AnalysisContext, info: ProfileInfo, end: ProfileEnd): EndTreatment {
+  const accessories = accessoriesAt(info, end);
+  const thread = tapThread(info);
+  const word = endWord(info, end);
+  const foot = accessories.find((a) => a.kind === 'leveling-foot' || a.kind === 'caster');
+  if (foot) {
+    const kind = foot.kind === 'caster' ? 'caster' : 'foot';
+    return {
+      kind,
+      ...(thread ? { thread } : {}),
+      description: `Tap ${thread ?? 'the centre bore'} in the ${word} end for a ${kind === 'caster' ? 'caster' : 'leveling foot'}`,
+    };
+  }
+  const tapped = info.profile.machining.some((m) => m.kind === 'end-tap' && m.fromEnd === end);
+  if (tapped) return { kind: 'tap', ...(thread ? { thread } : {}), description: `Tap ${thread ?? 'the centre bore'} in the ${word} end` };
+  if (accessories.some((a) => a.kind === 'end-cap')) return { kind: 'cap', description: `End cap on the ${word} end` };
+  return { kind: 'plain', description: `Square cut, deburred` };
+}

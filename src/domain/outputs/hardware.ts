@@ -1,0 +1,157 @@
+/**
+ * Hardware a design uses, totalled per catalogue part: connectors, screws and T-nuts counted from
+ * the joints (per connector spec, times the joint's quantity), and accessories with the screws
+ * and T-nuts that mount them. Also the hardware's mass moments for the centre of mass.
+ * Shared by the BOM, tools, mass and cost; one pass, no per-screw objects.
+ */
+import type { BomCategory } from '../analysisTypes';
+import { fastenerWithHead } from '../checks/catalogueIndex';
+import { memberPoint, type AnalysisContext } from '../checks/context';
+import { pointAlongProfile } from '../geometry/profileGeometry';
+import type { Vec3 } from '../geometry/vectors';
+
+export interface HardwareLine {
+  category: BomCategory;
+  /** Catalogue id. */
+  partId: string;
+  partCode: string;
+  description: string;
+  unit: 'pcs' | 'm';
+  quantity: number;
+  /** kg per unit */
+  unitMass: number;
+  unitPrice: number;
+  /** Design parts (joints, accessories) behind the line. */
+  sourceIds: string[];
+}
+
+export interface MassMoment {
+  kg: number;
+  /** Σ kg·x, Σ kg·y, Σ kg·z for the part with a known position. */
+  mx: number;
+  my: number;
+  mz: number;
+  /** kg of parts with no position (counted at the frame's centre of mass). */
+  unplacedKg: number;
+}
+
+export interface HardwareSummary {
+  lines: HardwareLine[];
+  massByCategory: Map<BomCategory, MassMoment>;
+}
+
+interface PartLike {
+  id: string;
+  partCode: string;
+  name: string;
+  unitMass: number;
+  price: number;
+}
+
+export function hardwareSummary(ctx: AnalysisContext): HardwareSummary {
+  const lines = new Map<string, HardwareLine>();
+  const massByCategory = new Map<BomCategory, MassMoment>();
+  const cat = ctx.catalogue;
+
+  const lineByPart = new Map<PartLike, HardwareLine>();
+  const add = (category: BomCategory, part: PartLike, unit: 'pcs' | 'm', quantity: number, sourceId: string, at: Vec3 | null) => {
+    let line = lineByPart.get(part);
+    if (!line) {
+      const key = `${category}|${part.id}`;
+      line = lines.get(key);
+      if (!line) {
+        line = { category, partId: part.id, partCode: part.partCode, description: part.name, unit, quantity: 0, unitMass: part.unitMass, unitPrice: part.price, sourceIds: [] };
+        lines.set(key, line);
+      }
+      lineByPart.set(part, line);
+    }
+    line.quantity += quantity;
+    if (line.sourceIds[line.sourceIds.length - 1] !== sourceId) line.sourceIds.push(sourceId);
+    const kg = quantity * part.unitMass;
+    if (!(kg > 0)) return;
+    let m = massByCategory.get(category);
+    if (!m) {
+      m = { kg: 0, mx: 0, my: 0, mz: 0, unplacedKg: 0 };
+      massByCategory.set(category, m);
+    }
+    if (at) {
+      m.kg += kg;
+      m.mx += kg * at[0];
+      m.my += kg * at[1];
+      m.mz += kg * at[2];
+    } else m.unplacedKg += kg;
+  };
+
+  // Joints with the same connector, screw head, T-nut and host system use the same parts: resolve once.
+  const recipes = new Map<string, { part: PartLike; category: BomCategory; perConnector: number }[]>();
+  for (const joint of ctx.design.joints) {
+    const first = ctx.profileById.get(joint.members[0]?.profileId);
+    const host = ctx.profileById.get(joint.members[1]?.profileId) ?? first;
+    const hostSystem = host?.variant?.systemId ?? ctx.design.systemId;
+    const key = `${joint.connectorId}|${joint.fastenerHead}|${joint.tNut}|${hostSystem}`;
+    let recipe = recipes.get(key);
+    if (!recipe) {
+      recipe = [];
+      const connector = cat.connectors.get(joint.connectorId);
+      if (connector) {
+        // End-screw "connectors" are the screw itself: no separate part to list.
+        if (connector.unitMass > 0 || connector.price > 0) recipe.push({ part: connector, category: 'connector', perConnector: 1 });
+        for (const use of connector.fasteners) {
+          const f = fastenerWithHead(cat, use.fastenerId, joint.fastenerHead);
+          if (f) recipe.push({ part: f, category: 'fastener', perConnector: use.quantity });
+        }
+        const nut = connector.tNutCount > 0 ? cat.tNutsBySystemKind.get(`${hostSystem}|${joint.tNut}`) : undefined;
+        if (nut) recipe.push({ part: nut, category: 't-nut', perConnector: connector.tNutCount });
+      }
+      recipes.set(key, recipe);
+    }
+    if (recipe.length === 0) continue;
+    const at = first ? memberPoint(first, joint.members[0]) : null;
+    for (const r of recipe) add(r.category, r.part, 'pcs', r.perConnector * joint.quantity, joint.id, at);
+  }
+
+  for (const acc of ctx.design.accessories) {
+    const part = cat.accessories.get(acc.partId);
+    if (!part) continue;
+    const at = accessoryPosition(ctx, acc);
+    const category: BomCategory = acc.kind === 'gasket' ? 'gasket' : acc.kind === 'slot-cover' ? 'slot-cover' : 'accessory';
+    if (part.soldBy === 'metre') {
+      add(category, part, 'm', ((acc.length ?? lengthFallback(ctx, acc)) / 1000) * acc.quantity, acc.id, at);
+    } else {
+      add(category, part, 'pcs', acc.quantity, acc.id, at);
+    }
+    for (const use of part.fasteners ?? []) {
+      const f = cat.fasteners.get(use.fastenerId);
+      if (f) add('fastener', f, 'pcs', use.quantity * acc.quantity, acc.id, at);
+    }
+    if ((part.tNutCount ?? 0) > 0) {
+      const nut = cat.tNutsBySystemKind.get(`${part.systemIds[0]}|drop-in`);
+      if (nut) add('t-nut', nut, 'pcs', (part.tNutCount ?? 0) * acc.quantity, acc.id, at);
+    }
+  }
+  return { lines: [...lines.values()], massByCategory };
+}
+
+/** Sold-by-length parts without a length: the profile's length, or the panel's perimeter. */
+function lengthFallback(ctx: AnalysisContext, acc: { profileId?: string; panelId?: string }): number {
+  if (acc.profileId) return ctx.profileById.get(acc.profileId)?.profile.length ?? 0;
+  if (acc.panelId) {
+    const p = ctx.panelById.get(acc.panelId);
+    if (p) return 2 * (p.sheetWidth + p.sheetHeight);
+  }
+  return 0;
+}
+
+function accessoryPosition(ctx: AnalysisContext, acc: { profileId?: string; panelId?: string; end?: 'start' | 'end'; along?: number }): Vec3 | null {
+  if (acc.profileId) {
+    const info = ctx.profileById.get(acc.profileId);
+    if (!info) return null;
+    if (acc.end) return acc.end === 'start' ? info.startPoint : info.endPoint;
+    return pointAlongProfile(info.profile, acc.along ?? info.profile.length / 2);
+  }
+  if (acc.panelId) {
+    const c = ctx.panelById.get(acc.panelId)?.panel.rect.center;
+    return c ? [c[0], c[1], c[2]] : null;
+  }
+  return null;
+}

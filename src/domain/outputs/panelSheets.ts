@@ -1,0 +1,50 @@
+/** Sheet size, area, mass and price of each panel; captured panels include slot engagement. */
+import type { PanelCutItem } from '../analysisTypes';
+import { panelPricePerSquareMetre } from '../catalogue';
+import type { AnalysisContext, PanelInfo } from '../checks/context';
+import { cornerNotches } from '../checks/panelFitFindings';
+
+export interface PanelSheet {
+  info: PanelInfo;
+  /** m², less cut-outs and notches */
+  area: number;
+  /** kg */
+  mass: number;
+  /** price per m² at this thickness */
+  pricePerSquareMetre: number;
+  notch: { size: number; corners: number };
+}
+
+export function panelSheets(ctx: AnalysisContext): PanelSheet[] {
+  return ctx.panels.map((info) => {
+    const notch = cornerNotches(ctx, info);
+    const cutouts = info.panel.cutouts.reduce((sum, c) => sum + (Math.PI / 4) * c.diameter * c.diameter, 0);
+    const mm2 = Math.max(0, info.sheetWidth * info.sheetHeight - cutouts - notch.corners * notch.size * notch.size);
+    const area = mm2 / 1e6;
+    const density = info.material?.density ?? 0;
+    return {
+      info,
+      area,
+      mass: area * (info.panel.thickness / 1000) * density,
+      pricePerSquareMetre: info.material ? panelPricePerSquareMetre(info.material, info.panel.thickness) : 0,
+      notch: { size: notch.size, corners: notch.corners },
+    };
+  });
+}
+
+export function panelCutItems(sheets: PanelSheet[]): PanelCutItem[] {
+  return sheets.map(({ info, notch }) => ({
+    panelId: info.panel.id,
+    materialId: info.panel.materialId,
+    thickness: info.panel.thickness,
+    width: round(info.sheetWidth),
+    height: round(info.sheetHeight),
+    mounting: info.panel.mounting,
+    cornerNotch: notch.size,
+    notchedCorners: notch.corners,
+  }));
+}
+
+function round(v: number): number {
+  return Math.round(v * 100) / 100;
+}

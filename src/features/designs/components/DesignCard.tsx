@@ -1,0 +1,50 @@
+import { Link } from 'react-router';
+import { Trash } from 'lucide-react';
+import { firstName, formatRelativeTime, pluralize } from '@/lib/format';
+import { profileSystemLabel } from '../profileSystems';
+import type { DesignSummary } from '../api/schemas';
+import { DesignThumbnail } from './DesignThumbnail';
+
+export interface DesignCardProps {
+  design: DesignSummary;
+  onDelete: (design: DesignSummary) => void;
+}
+
+/** One design in the list: picture and name open the editor; the bin asks before deleting. */
+export function DesignCard({ design, onDelete }: DesignCardProps) {
+  return (
+    // The ring goes on the whole card when its link has keyboard focus (the title itself is clipped by truncation).
+    <li className="group relative flex flex-col overflow-hidden rounded-card border border-paper-line bg-paper-raised transition-shadow hover:shadow-md has-[a:focus-visible]:outline-3 has-[a:focus-visible]:outline-offset-2 has-[a:focus-visible]:outline-[#0b7a75] has-[a:focus-visible]:outline-solid">
+      <div className="aspect-[4/3] border-b border-paper-line bg-gradient-to-b from-paper-sunk/40 to-paper-sunk p-4">
+        <DesignThumbnail url={design.thumbnailUrl} name={design.name} />
+      </div>
+      <div className="flex items-start gap-2 p-4">
+        <div className="flex min-w-0 flex-1 flex-col gap-1">
+          <h2 className="truncate text-base font-semibold text-ink">
+            {/* The link's box covers the card so the whole card is one target. */}
+            <Link to={`/designs/${design.id}`} className="rounded outline-none after:absolute after:inset-0 after:content-[''] focus-visible:outline-none">
+              {design.name}
+            </Link>
+          </h2>
+          <p className="flex flex-wrap gap-x-2 text-sm text-ink-soft">
+            <span>{profileSystemLabel(design.systemId)}</span>
+            <span aria-hidden>·</span>
+            <span className="tabular-nums">{pluralize(design.profileCount, 'profile')}</span>
+          </p>
+          <p className="text-xs text-ink-muted">
+            Updated <time dateTime={design.updatedAt}>{formatRelativeTime(design.updatedAt)}</time> by {firstName(design.updatedBy.displayName)}
+          </p>
+        </div>
+        <button
+          type="button"
+          onClick={() => onDelete(design)}
+          aria-label={`Delete ${design.name}`}
+          title="Delete design"
+          className="relative z-10 grid size-11 shrink-0 place-items-center rounded-lg text-ink-muted hover:bg-severity-error-soft hover:text-severity-error focus-ring"
+        >
+          <Trash aria-hidden className="size-5" />
+        </button>
+      </div>
+    </li>
+  );
+}
