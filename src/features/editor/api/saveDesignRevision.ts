@@ -1,0 +1,44 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { z } from 'zod';
+import type { DesignDocument } from '@/domain/design/schema';
+import { apiFetch } from '@/lib/apiClient';
+import { editorKeys } from './editorKeys';
+import { editorRevisionSchema, type EditorDesignDetail, type EditorRevision } from './schemas';
+
+export interface SaveDesignRevisionInput {
+  designId: number;
+  /** The revision the edits started from; a moved-on server answers 409 'stale_revision'. */
+  baseRevision: number;
+  document: DesignDocument;
+  /** data:image/png;base64,… (≤ 400 KB). */
+  thumbnail?: string;
+  message?: string;
+}
+
+const saveResponseSchema = z.object({ revision: editorRevisionSchema });
+
+/** POST /api/designs/:id/revisions — every save is a new revision. */
+export async function saveDesignRevision({ designId, ...body }: SaveDesignRevisionInput): Promise<EditorRevision> {
+  const { revision } = await apiFetch(`/api/designs/${designId}/revisions`, { method: 'POST', body, schema: saveResponseSchema });
+  return revision;
+}
+
+/** Saves and moves the cached design to the new revision; the designs list refreshes its "updated" line. */
+export function useSaveDesignRevision() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: saveDesignRevision,
+    onSuccess: (revision, { designId }) => {
+      queryClient.setQueryData<EditorDesignDetail>(editorKeys.design(designId), (detail) =>
+        detail
+          ? {
+              design: { ...detail.design, latestRevision: revision.number, updatedAt: revision.createdAt, updatedBy: revision.createdBy },
+              revision,
+            }
+          : detail,
+      );
+      // The designs feature caches lists under ['designs', ...]; refresh them without importing that feature.
+      void queryClient.invalidateQueries({ queryKey: ['designs'] });
+    },
+  });
+}

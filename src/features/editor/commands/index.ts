@@ -1,0 +1,5 @@
+export { CommandRefusedError, type EditorCommand } from './EditorCommand';
+export { groupCommand } from './groupCommand';
+export { operationCommand } from './operationCommand';
+export { replaceDesignCommand } from './replaceDesignCommand';
+export { updateJointCommand, updatePanelCommand, updateProfileCommand } from './patchCommands';

@@ -1,0 +1,78 @@
+import { useEffect, useRef } from 'react';
+import { useEditorStoreApi } from '../store/editorStore';
+import type { EditorView } from '../store/types';
+
+export interface ShortcutHandlers {
+  save(): void;
+  deleteSelection(): void;
+  duplicateSelection(): void;
+  openShortcutSheet(): void;
+}
+
+const VIEW_KEYS: Record<string, EditorView> = { '1': 'front', '2': 'top', '3': 'side', '4': 'iso' };
+
+/** True when the key press belongs to a text field, select or editable element, not to the editor. */
+function isTypingTarget(target: EventTarget | null): boolean {
+  if (!(target instanceof HTMLElement)) return false;
+  if (target.isContentEditable) return true;
+  const tag = target.tagName;
+  if (tag === 'TEXTAREA' || tag === 'SELECT') return true;
+  if (tag !== 'INPUT') return false;
+  const type = (target as HTMLInputElement).type;
+  return !['checkbox', 'radio', 'button', 'submit', 'range'].includes(type);
+}
+
+/** True while a modal dialog is open: its own keys (Escape, Tab) win. */
+const dialogOpen = () => document.querySelector('[aria-modal="true"]') !== null;
+
+/** The editor's keyboard shortcuts (listed in hooks/shortcutList.ts and the shortcut sheet). */
+export function useEditorShortcuts(handlers: ShortcutHandlers): void {
+  const store = useEditorStoreApi();
+  const handlersRef = useRef(handlers);
+  handlersRef.current = handlers;
+
+  useEffect(() => {
+    function onKeyDown(event: KeyboardEvent) {
+      const mod = event.ctrlKey || event.metaKey;
+      const key = event.key;
+      const lower = key.toLowerCase();
+      const state = store.getState();
+      const run = (action: () => void) => {
+        event.preventDefault();
+        action();
+      };
+
+      // Saving works from anywhere, even while typing in a field.
+      if (mod && !event.altKey && lower === 's') return run(() => handlersRef.current.save());
+      if (isTypingTarget(event.target) || dialogOpen()) return;
+
+      if (mod && !event.altKey) {
+        if (lower === 'z' && event.shiftKey) return run(state.redo);
+        if (lower === 'z') return run(state.undo);
+        if (lower === 'y') return run(state.redo);
+        if (lower === 'd') return run(() => handlersRef.current.duplicateSelection());
+        return;
+      }
+      if (event.altKey) return;
+
+      if (key === '?') return run(() => handlersRef.current.openShortcutSheet());
+      if (key === 'Escape') {
+        return run(() => {
+          if (state.gestureActive) state.cancelGesture();
+          else if (state.selection.length > 0) state.clearSelection();
+          else if (state.tool !== 'select') state.setTool('select');
+        });
+      }
+      if (key === 'Delete' || key === 'Backspace') return run(() => handlersRef.current.deleteSelection());
+      if (event.shiftKey) return;
+      if (lower === 'v') return run(() => state.setTool('select'));
+      if (lower === 'd') return run(() => state.setTool('draw-profile'));
+      if (lower === 'o') return run(() => state.setTool('fill-opening'));
+      if (lower === 'f') return run(() => state.requestFrame(state.selection.length > 0 ? state.selection : 'all'));
+      const view = VIEW_KEYS[key];
+      if (view) return run(() => state.requestView(view));
+    }
+    window.addEventListener('keydown', onKeyDown);
+    return () => window.removeEventListener('keydown', onKeyDown);
+  }, [store]);
+}

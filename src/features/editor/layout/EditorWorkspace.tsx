@@ -1,0 +1,66 @@
+import { useEffect, useState } from 'react';
+import { useUnits } from '@/features/account/hooks/useUnits';
+import { ErrorNotice } from '@/components/ui';
+import { GeneratorDialog } from '../dialogs/GeneratorDialog';
+import { ShortcutSheetDialog } from '../dialogs/ShortcutSheetDialog';
+import { useEditorShortcuts } from '../hooks/useEditorShortcuts';
+import { useLiveAnalysis } from '../hooks/useLiveAnalysis';
+import { useSelectionActions } from '../hooks/useSelectionActions';
+import { LeaveWithoutSavingDialog } from '../saving/LeaveWithoutSavingDialog';
+import { StaleRevisionDialog } from '../saving/StaleRevisionDialog';
+import { useSaveDesign } from '../saving/useSaveDesign';
+import { useUnsavedChangesGuard } from '../saving/useUnsavedChangesGuard';
+import { useEditorStore } from '../store/editorStore';
+import { CanvasArea } from './CanvasArea';
+import { EditorTopBar } from './EditorTopBar';
+import { InspectorColumn } from './InspectorColumn';
+import { OutputsArea } from './OutputsArea';
+import { RefusalNotice } from './RefusalNotice';
+import { ToolStrip } from './ToolStrip';
+
+/** The editor screen: top bar, tool strip, the model, the inspector and the outputs dock, plus its keys and dialogs. */
+export function EditorWorkspace() {
+  const { units, setUnits } = useUnits();
+  const setStoreUnits = useEditorStore((state) => state.setUnits);
+  useEffect(() => setStoreUnits(units), [units, setStoreUnits]);
+
+  useLiveAnalysis();
+  const saveState = useSaveDesign();
+  const blocker = useUnsavedChangesGuard();
+  const { deleteSelection, duplicateSelection } = useSelectionActions();
+  const [shortcutsOpen, setShortcutsOpen] = useState(false);
+  const [generatorsOpen, setGeneratorsOpen] = useState(false);
+
+  useEditorShortcuts({
+    save: () => void saveState.save(),
+    deleteSelection,
+    duplicateSelection,
+    openShortcutSheet: () => setShortcutsOpen(true),
+  });
+
+  return (
+    <div className="flex h-dvh min-h-0 flex-col md:h-full">
+      <EditorTopBar saving={saveState.saving} onSave={() => void saveState.save()} onUnitsChange={setUnits} onOpenShortcuts={() => setShortcutsOpen(true)} />
+      {saveState.error ? (
+        <div className="border-b border-paper-line bg-paper-raised px-3 py-2">
+          <ErrorNotice title="Not saved" message={saveState.error} onRetry={() => void saveState.save()} />
+        </div>
+      ) : null}
+      <div className="flex min-h-0 flex-1">
+        <ToolStrip onOpenGenerators={() => setGeneratorsOpen(true)} />
+        <div className="flex min-w-0 flex-1 flex-col">
+          <div className="relative flex min-h-0 flex-1 flex-col">
+            <CanvasArea />
+            <RefusalNotice />
+          </div>
+          <OutputsArea />
+        </div>
+        <InspectorColumn />
+      </div>
+      <ShortcutSheetDialog open={shortcutsOpen} onClose={() => setShortcutsOpen(false)} />
+      <GeneratorDialog open={generatorsOpen} onClose={() => setGeneratorsOpen(false)} />
+      <StaleRevisionDialog saveState={saveState} />
+      <LeaveWithoutSavingDialog blocker={blocker} />
+    </div>
+  );
+}
