@@ -29,7 +29,7 @@ export function OutputsArea() {
             <FindingsPanel />
           </div>
           <div className="min-w-0 flex-1 overflow-hidden">
-            <OutputsDock />
+            <OutputsDock collapsible={false} />
           </div>
         </div>
       ) : null}

@@ -11,7 +11,7 @@ interface FindingMarkersProps {
 }
 
 /**
- * A small severity-coloured badge above every part a finding names (the worst severity wins),
+ * A small severity-coloured badge above every part an error or warning names (the worst wins),
  * drawn through the frame so it is never hidden; the part itself is tinted by PartBatch.
  * One instanced mesh in all.
  */
@@ -23,7 +23,11 @@ export function FindingMarkers({ relativeSize = 0.012 }: FindingMarkersProps) {
   const geometry = resources.hardwareGeometry('badge');
   const material = resources.surface('badge');
 
-  const marks = useMemo(() => [...worstSeverityByPart(analysis).entries()], [analysis]);
+  // Notes (corner notches, tip-over figures) stay in the list only: a badge on every notched panel is noise.
+  const marks = useMemo(
+    () => [...worstSeverityByPart(analysis).entries()].filter(([, severity]) => severity !== 'note'),
+    [analysis],
+  );
   const capacity = Math.max(16, 2 ** Math.ceil(Math.log2(marks.length + 1)));
   const mesh = useMemo(() => {
     const m = new THREE.InstancedMesh(geometry, material, capacity);
