@@ -1,18 +1,8 @@
 import { z } from 'zod';
 
-const personRefSchema = z.object({ id: z.number(), displayName: z.string() });
+import { designSummarySchema, personRefSchema, type DesignSummary } from '@/lib/designApiSchemas';
 
-export const designSummarySchema = z.object({
-  id: z.number(),
-  name: z.string(),
-  systemId: z.string(),
-  latestRevision: z.number(),
-  updatedAt: z.string(),
-  updatedBy: personRefSchema,
-  thumbnailUrl: z.string().nullable(),
-  profileCount: z.number(),
-});
-export type DesignSummary = z.infer<typeof designSummarySchema>;
+export { designSummarySchema, type DesignSummary };
 
 /** A revision without its document (lists, and answers where the document is not needed). */
 export const revisionMetaSchema = z.object({

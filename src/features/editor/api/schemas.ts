@@ -1,18 +1,9 @@
 import { z } from 'zod';
 import { designDocumentSchema } from '@/domain/design/schema';
 
-const personRefSchema = z.object({ id: z.number(), displayName: z.string() });
+import { designSummarySchema, personRefSchema } from '@/lib/designApiSchemas';
 
-export const editorDesignSummarySchema = z.object({
-  id: z.number(),
-  name: z.string(),
-  systemId: z.string(),
-  latestRevision: z.number(),
-  updatedAt: z.string(),
-  updatedBy: personRefSchema,
-  thumbnailUrl: z.string().nullable(),
-  profileCount: z.number(),
-});
+export const editorDesignSummarySchema = designSummarySchema;
 
 /** A revision with its document, validated against the design-document schema. */
 export const editorRevisionSchema = z.object({

@@ -1,3 +1,4 @@
+import { downloadBlob } from '@/lib/download';
 import Papa from 'papaparse';
 import type { BomLine, CutListGroup, CutMachiningOperation, EndTreatment } from '@/domain/analysisTypes';
 import type { LengthUnit } from '@/domain/units';
@@ -89,13 +90,5 @@ export function cutListToCsv(groups: CutListGroup[], pieceLabels: Record<string,
 
 /** Starts a browser download of a CSV text. */
 export function downloadCsv(fileName: string, csv: string): void {
-  const blob = new Blob([csv], { type: 'text/csv;charset=utf-8' });
-  const url = URL.createObjectURL(blob);
-  const link = document.createElement('a');
-  link.href = url;
-  link.download = fileName;
-  document.body.appendChild(link);
-  link.click();
-  link.remove();
-  setTimeout(() => URL.revokeObjectURL(url), 0);
+  downloadBlob(fileName, new Blob([csv], { type: 'text/csv;charset=utf-8' }));
 }

@@ -1,14 +1,8 @@
+import { downloadBlob } from '@/lib/download';
+
 /** Offers `value` as a JSON file download (the local copy kept when a save conflict loads theirs). */
 export function downloadJson(fileName: string, value: unknown): void {
-  const blob = new Blob([JSON.stringify(value, null, 2)], { type: 'application/json' });
-  const url = URL.createObjectURL(blob);
-  const link = document.createElement('a');
-  link.href = url;
-  link.download = fileName;
-  document.body.appendChild(link);
-  link.click();
-  link.remove();
-  setTimeout(() => URL.revokeObjectURL(url), 1000);
+  downloadBlob(fileName, new Blob([JSON.stringify(value, null, 2)], { type: 'application/json' }));
 }
 
 /** "Printer enclosure" → "printer-enclosure". */
