@@ -1,8 +1,9 @@
 // `npm start`: build the client when it is missing or older than its sources, then start the
 // server (which migrates the database and seeds the demo shop on first run).
 import { spawnSync, spawn } from 'node:child_process';
-import { existsSync, statSync, readdirSync } from 'node:fs';
-import { join } from 'node:path';
+import { existsSync, statSync, readdirSync, readFileSync, writeFileSync, mkdirSync } from 'node:fs';
+import { join, dirname, resolve } from 'node:path';
+import { randomBytes } from 'node:crypto';
 
 const root = new URL('..', import.meta.url).pathname;
 const built = join(root, 'dist', 'index.html');
@@ -33,10 +34,24 @@ if (!existsSync(built) || process.env.SLOTWISE_REBUILD === '1' || sourcesChanged
   if (result.status !== 0) process.exit(result.status ?? 1);
 }
 
+// Production needs a session secret. Without one in the environment, use a random secret kept
+// beside the database (created once, readable by this user only), so sessions survive restarts.
+function sessionSecret() {
+  if (process.env.SESSION_SECRET) return process.env.SESSION_SECRET;
+  const databasePath = resolve(root, process.env.DATABASE_PATH ?? 'data/slotwise.sqlite');
+  const secretFile = join(dirname(databasePath), '.session-secret');
+  if (!existsSync(secretFile)) {
+    mkdirSync(dirname(secretFile), { recursive: true });
+    writeFileSync(secretFile, randomBytes(48).toString('hex'), { mode: 0o600 });
+    console.log('Created a session secret beside the database (set SESSION_SECRET to use your own).');
+  }
+  return readFileSync(secretFile, 'utf8').trim();
+}
+
 const server = spawn('npx', ['tsx', 'server/index.ts'], {
   cwd: root,
   stdio: 'inherit',
-  env: { NODE_ENV: 'production', ...process.env },
+  env: { NODE_ENV: 'production', ...process.env, SESSION_SECRET: sessionSecret() },
 });
 for (const signal of ['SIGINT', 'SIGTERM']) process.on(signal, () => server.kill(signal));
 server.on('exit', (code) => process.exit(code ?? 0));
