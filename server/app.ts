@@ -56,7 +56,11 @@ export function createApp(deps: AppDependencies): Express {
   app.set('query parser', 'simple');
 
   app.use(securityHeaders({ production, behindTls: config.trustProxy !== false }));
-  app.use(compression());
+  // API answers are JSON built per request (a save echoes a ~1 MB document): gzip's fastest level
+  // takes about a third less time for ~20 % more bytes there; static files keep the default level.
+  const compressApi = compression({ level: 1 });
+  const compressFiles = compression();
+  app.use((req, res, next) => (req.path.startsWith('/api/') ? compressApi : compressFiles)(req, res, next));
   if (config.logRequests) app.use(morgan(production ? 'combined' : 'dev'));
 
   app.use('/api', express.json({ limit: '6mb' }));

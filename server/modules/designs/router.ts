@@ -57,7 +57,8 @@ export function designsRouter(designs: DesignsService): Router {
       thumbnail: body.thumbnail,
       message: body.message || undefined,
     });
-    res.status(201).json({ revision });
+    res.status(201);
+    sendRevisionJson(res, {}, revision.meta, revision.documentJson);
   });
 
   router.get('/:id/revisions/:number', validate({ params: revisionParamsSchema }), async (req, res) => {

@@ -57,15 +57,14 @@ export function createDesignsService(db: Database) {
     return { meta: presentRevisionMeta(row), documentJson: row.document ?? 'null' };
   }
 
-  /** The answer to a save, built from what was just written rather than read back. */
-  function savedRevision(designId: number, number: number, author: UserModel, input: NewRevision, createdAt: Date): Revision {
+  /** The answer to a save (without its document), built from what was just written rather than read back. */
+  function savedMeta(designId: number, number: number, author: UserModel, input: NewRevision, createdAt: Date): RevisionMeta {
     return {
       number,
       createdAt: createdAt.toISOString(),
       createdBy: { id: author.id, displayName: author.displayName },
       message: input.message ?? null,
       thumbnailUrl: input.thumbnail ? thumbnailUrl(designId, number) : null,
-      document: input.document,
     };
   }
 
@@ -101,14 +100,16 @@ export function createDesignsService(db: Database) {
         );
         return { id: design.id, createdAt: row.createdAt };
       });
-      return { design: await summary(id), revision: savedRevision(id, 1, author, input, createdAt) };
+      return { design: await summary(id), revision: { ...savedMeta(id, 1, author, input, createdAt), document } };
     },
 
     /**
      * Saves a new revision if `baseRevision` is still the latest; otherwise refuses with 409 and the
      * latest number, so the client can merge or reload without losing either side's work.
      */
-    async saveRevision(designId: number, author: UserModel, baseRevision: number, input: NewRevision): Promise<Revision> {
+    async saveRevision(designId: number, author: UserModel, baseRevision: number, input: NewRevision): Promise<StoredRevision> {
+      // Serialised once, outside the write lock; the same text is stored and sent back.
+      const documentJson = JSON.stringify(input.document);
       const { number, createdAt } = await db.write(async (transaction) => {
         const design = await Design.findByPk(designId, { transaction });
         if (!design || design.archivedAt) throw notFound('That design');
@@ -125,7 +126,7 @@ export function createDesignsService(db: Database) {
           {
             designId,
             number: next,
-            document: JSON.stringify(input.document),
+            document: documentJson,
             thumbnail: input.thumbnail ?? null,
             message: input.message ?? null,
             createdBy: author.id,
@@ -138,7 +139,7 @@ export function createDesignsService(db: Database) {
         await design.save({ transaction });
         return { number: next, createdAt: row.createdAt };
       });
-      return savedRevision(designId, number, author, input, createdAt);
+      return { meta: savedMeta(designId, number, author, input, createdAt), documentJson };
     },
 
     async listRevisions(designId: number): Promise<RevisionMeta[]> {

@@ -106,13 +106,18 @@ export interface AnalysisContext {
 export function buildAnalysisContext(design: DesignDocument, catalogue: CatalogueIndex): AnalysisContext {
   const profiles: ProfileInfo[] = [];
   const profileById = new Map<string, ProfileInfo>();
+  // Frames repeat a few directions and rolls, so profiles share one (read-only) SectionAxes per pair.
+  const axesByOrientation = new Map<string, SectionAxes>();
   for (let i = 0; i < design.profiles.length; i++) {
     const profile = design.profiles[i];
     const variant = catalogue.variants.get(profile.variantId);
     const system = variant ? catalogue.systems.get(variant.systemId) : undefined;
     const width = variant?.width ?? UNKNOWN_SECTION_MM;
     const height = variant?.height ?? UNKNOWN_SECTION_MM;
-    const axes = sectionAxes(profile.direction, profile.rollDeg);
+    const d = profile.direction;
+    const orientation = `${exactText(d[0])},${exactText(d[1])},${exactText(d[2])},${exactText(profile.rollDeg)}`;
+    let axes = axesByOrientation.get(orientation);
+    if (!axes) axesByOrientation.set(orientation, (axes = sectionAxes(profile.direction, profile.rollDeg)));
     const info: ProfileInfo = {
       index: i,
       profile,
@@ -178,6 +183,11 @@ export function buildAnalysisContext(design: DesignDocument, catalogue: Catalogu
     profileGrid: new UniformGrid(boxes, { margin: CONTACT_TOLERANCE_MM }),
     memo: new Map(),
   };
+}
+
+/** A number as text that tells −0 from 0 (String(-0) is "0"), so cache keys stay exact. */
+function exactText(x: number): string {
+  return Object.is(x, -0) ? '-0' : String(x);
 }
 
 /** Appends without mutating the shared empty list. */

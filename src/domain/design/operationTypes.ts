@@ -62,6 +62,26 @@ export interface AccessoryInput {
   quantity?: number;
 }
 
+/** A frame opening as `findOpenings` reports it: its four profiles and clear rectangle. */
+export interface DoorOpeningInput {
+  opening: { boundedBy: string[]; rect: Panel['rect'] };
+  /** Which side of the opening along its normal the doors stand on; omitted: away from the frame's middle. */
+  side?: 1 | -1;
+}
+export interface SlidingDoorsInput extends DoorOpeningInput {
+  materialId: string;
+  /** Sheet thickness, mm. */
+  thickness: number;
+  /** How far each leaf reaches past the middle, mm; omitted: SLIDING_LEAF_OVERLAP_MM. */
+  overlap?: number;
+}
+export interface HingedDoorInput extends DoorOpeningInput {
+  materialId: string;
+  thickness: number;
+  /** The upright the hinges go on, seen from the door side's axis order; omitted: 'left'. */
+  hingeSide?: 'left' | 'right';
+}
+
 export type DesignOperation =
   | { type: 'addProfile'; payload: { profile: ProfileInput } }
   | { type: 'updateProfile'; payload: { profileId: string; changes: ProfileChanges } }
@@ -78,6 +98,8 @@ export type DesignOperation =
   | { type: 'updatePanel'; payload: { panelId: string; changes: PanelChanges } }
   | { type: 'addCutout'; payload: { panelId: string; cutout: Omit<Cutout, 'id' | 'kind'> & { id?: string } } }
   | { type: 'addAccessory'; payload: { accessory: AccessoryInput } }
+  | { type: 'addSlidingDoors'; payload: { doors: SlidingDoorsInput } }
+  | { type: 'addHingedDoor'; payload: { door: HingedDoorInput } }
   | { type: 'autoEndCaps'; payload?: Record<string, never> }
   | { type: 'addFeetToFreeBottomEnds'; payload?: { kind?: 'leveling-foot' | 'caster' } };
 

@@ -7,6 +7,7 @@
 import { connectorFor, defaultCatalogue, getConnector, getSystem } from '../catalogue';
 import type { Catalogue } from '../catalogue/types';
 import { normalize } from '../geometry/vectors';
+import { addHingedDoor, addSlidingDoors } from './doorOperations';
 import { addFeetToFreeBottomEnds, autoEndCaps } from './endTreatments';
 import { createIdAllocator, type IdAllocator } from './ids';
 import { withJointMachining } from './jointMachining';
@@ -34,6 +35,7 @@ import type {
 } from './schema';
 
 export { newId, createIdAllocator } from './ids';
+export { addHingedDoor, addSlidingDoors, SLIDING_LEAF_OVERLAP_MM, MIN_SLIDING_OPENING_WIDTH_MM, MIN_DOOR_OPENING_MM } from './doorOperations';
 export { autoEndCaps, addFeetToFreeBottomEnds, freeEnds, bottomEnds } from './endTreatments';
 export * from './operationTypes';
 export { arrayParts, copyParts, duplicateParts, mirrorParts, refreshJointPositions, rotateParts90, translateParts } from './moveOperations';
@@ -373,6 +375,10 @@ export function applyOperation(design: DesignDocument, op: DesignOperation, cata
       return addCutout(design, op.payload.panelId, op.payload.cutout);
     case 'addAccessory':
       return addAccessory(design, op.payload.accessory, catalogue);
+    case 'addSlidingDoors':
+      return addSlidingDoors(design, op.payload.doors, catalogue);
+    case 'addHingedDoor':
+      return addHingedDoor(design, op.payload.door, catalogue);
     case 'autoEndCaps':
       return autoEndCaps(design, catalogue);
     case 'addFeetToFreeBottomEnds':

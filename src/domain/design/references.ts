@@ -29,14 +29,34 @@ export function collectIds(design: DesignDocument): { id: string; path: string }
   return out;
 }
 
+/**
+ * Calls `visit` for every id in the order collectIds lists them; the path is built only when
+ * asked for (a 2,000-part design has ~10,000 ids and usually no duplicate).
+ */
+function forEachId(design: DesignDocument, visit: (id: string, path: () => string) => void): void {
+  design.profiles.forEach((p, i) => {
+    visit(p.id, () => `profiles.${i}.id`);
+    p.machining.forEach((m, j) => visit(m.id, () => `profiles.${i}.machining.${j}.id`));
+  });
+  design.joints.forEach((j, i) => visit(j.id, () => `joints.${i}.id`));
+  design.panels.forEach((p, i) => {
+    visit(p.id, () => `panels.${i}.id`);
+    p.cutouts.forEach((c, j) => visit(c.id, () => `panels.${i}.cutouts.${j}.id`));
+  });
+  design.accessories.forEach((a, i) => visit(a.id, () => `accessories.${i}.id`));
+  design.subAssemblies.forEach((s, i) => visit(s.id, () => `subAssemblies.${i}.id`));
+  design.steps.forEach((s, i) => visit(s.id, () => `steps.${i}.id`));
+  design.loadCases.forEach((l, i) => visit(l.id, () => `loadCases.${i}.id`));
+}
+
 export function documentReferenceErrors(design: DesignDocument, catalogue: Catalogue): DocumentError[] {
   const errors: DocumentError[] = [];
-  const seen = new Map<string, string>();
-  for (const { id, path } of collectIds(design)) {
+  const seen = new Map<string, () => string>();
+  forEachId(design, (id, path) => {
     const first = seen.get(id);
-    if (first) errors.push({ path, message: `The id "${id}" is already used at ${first}; every id in a design must be unique` });
+    if (first) errors.push({ path: path(), message: `The id "${id}" is already used at ${first()}; every id in a design must be unique` });
     else seen.set(id, path);
-  }
+  });
 
   const profiles = new Set(design.profiles.map((p) => p.id));
   const joints = new Set(design.joints.map((j) => j.id));
@@ -44,7 +64,13 @@ export function documentReferenceErrors(design: DesignDocument, catalogue: Catal
   const accessories = new Set(design.accessories.map((a) => a.id));
   const subAssemblies = new Set(design.subAssemblies.map((s) => s.id));
   const placeable = (id: string) => profiles.has(id) || joints.has(id) || panels.has(id) || accessories.has(id);
-  const has = <T extends { id: string }>(list: T[], id: string) => list.some((x) => x.id === id);
+  // Catalogue lists as Sets, built per call (a few dozen entries each) so a changed catalogue is always seen.
+  const catalogueIds = new Map<readonly { id: string }[], Set<string>>();
+  const has = (list: readonly { id: string }[], id: string): boolean => {
+    let set = catalogueIds.get(list);
+    if (!set) catalogueIds.set(list, (set = new Set(list.map((x) => x.id))));
+    return set.has(id);
+  };
 
   if (!has(catalogue.systems, design.systemId)) {
     errors.push({ path: 'systemId', message: `Unknown profile system "${design.systemId}"; use one of ${catalogue.systems.map((s) => s.id).join(', ')}` });

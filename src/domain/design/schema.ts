@@ -21,7 +21,8 @@ const id = z
   .max(64, 'An id is at most 64 characters')
   .regex(/^[A-Za-z0-9_.:-]+$/, 'An id may use letters, digits and _ . : - only');
 
-const finite = z.number().refine(Number.isFinite, 'Must be a finite number');
+// z.number() itself refuses NaN and ±Infinity (zod 4), so no finiteness refine is needed per number.
+const finite = z.number();
 const positiveMm = finite.refine((v) => v > 0, 'Must be greater than 0 mm');
 const nonNegativeMm = finite.refine((v) => v >= 0, 'Cannot be negative');
 

@@ -117,24 +117,40 @@ function toStockBars(groups: StockCut[][], problem: PackingProblem, minReusableO
 function fitDecreasing(problem: PackingProblem, rule: 'first' | 'best'): StockCut[][] {
   const groups: StockCut[][] = [];
   const loads: number[] = [];
-  for (const cut of [...problem.placeable].sort(byLengthDescending)) {
+  const sorted = [...problem.placeable].sort(byLengthDescending);
+  const limit = problem.capacity + LENGTH_TOLERANCE;
+  // Sizes only shrink, so a bar that cannot take the smallest cut never takes another: drop it from
+  // `open` (bar indices, ascending). Same bars, same order, same choices as scanning every bar.
+  const smallest = sorted.length > 0 ? sorted[sorted.length - 1].length + problem.kerf : 0;
+  const open: number[] = [];
+  let previousSize = Number.NaN;
+  let previousPosition = 0;
+  for (const cut of sorted) {
     const size = cut.length + problem.kerf;
-    let chosen = -1;
-    for (let bar = 0; bar < loads.length; bar++) {
-      if (loads[bar] + size > problem.capacity + LENGTH_TOLERANCE) continue;
+    // First fit: every open bar before the last choice already refused a cut of this same size.
+    let position = rule === 'first' && size === previousSize ? previousPosition : 0;
+    let chosenPosition = -1;
+    for (; position < open.length; position++) {
+      const bar = open[position];
+      if (loads[bar] + size > limit) continue;
       if (rule === 'first') {
-        chosen = bar;
+        chosenPosition = position;
         break;
       }
-      if (chosen < 0 || loads[bar] > loads[chosen]) chosen = bar;
+      if (chosenPosition < 0 || loads[bar] > loads[open[chosenPosition]]) chosenPosition = position;
     }
-    if (chosen < 0) {
+    if (chosenPosition < 0) {
       groups.push([]);
       loads.push(0);
-      chosen = loads.length - 1;
+      open.push(loads.length - 1);
+      chosenPosition = open.length - 1;
     }
+    const chosen = open[chosenPosition];
     groups[chosen].push(cut);
     loads[chosen] += size;
+    if (loads[chosen] + smallest > limit) open.splice(chosenPosition, 1);
+    previousSize = size;
+    previousPosition = chosenPosition;
   }
   return groups;
 }

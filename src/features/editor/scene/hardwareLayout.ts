@@ -5,7 +5,7 @@
  */
 import * as THREE from 'three';
 import type { Catalogue, ProfileVariant } from '@/domain/catalogue';
-import type { Accessory, DesignDocument, Joint, Profile } from '@/domain/design/schema';
+import type { Accessory, DesignDocument, Joint, Panel, Profile } from '@/domain/design/schema';
 import {
   addScaled,
   cross,
@@ -196,7 +196,7 @@ export function layoutAccessories(collector: BatchCollector, anchors: Map<string
       default: {
         const along = accessory.along ?? 0;
         const length = accessory.length ?? (accessory.kind === 'gasket' || accessory.kind === 'slot-cover' || accessory.kind === 'door-track' ? profile.length - along : cell * 2);
-        const normal = faceNormal(axes, accessory.kind === 'door-track' ? 1 : 0);
+        const normal = accessory.kind === 'door-track' ? trackFaceNormal(profile, axes, design.panels) : faceNormal(axes, 0);
         const depth = sectionHalfExtentAlong(axes, variant.width, variant.height, normal);
         const strip = stripSize(accessory, cell);
         const center = addScaled(pointAlongProfile(profile, Math.min(profile.length, along + length / 2)), normal, depth + strip.stand / 2);
@@ -207,6 +207,20 @@ export function layoutAccessories(collector: BatchCollector, anchors: Map<string
     }
   }
 }
+
+/** A door track sits on the rail face towards the door leaves the rail bounds; without leaves, on face 1. */
+function trackFaceNormal(profile: Profile, axes: ReturnType<typeof sectionAxes>, panels: Panel[]): Vec3 {
+  const leaf = panels.find((panel) => panel.role === 'door' && panel.boundedBy?.includes(profile.id));
+  if (!leaf) return faceNormal(axes, 1);
+  const n = AXIS_INDEX[leaf.rect.normal];
+  const offset = leaf.rect.center[n] - pointAlongProfile(profile, profile.length / 2)[n];
+  const toward: Vec3 = [0, 0, 0];
+  toward[n] = offset < 0 ? -1 : 1;
+  // The section face whose normal points most nearly towards the leaves.
+  return [0, 1, 2, 3].map((face) => faceNormal(axes, face)).reduce((best, normal) => (dot(normal, toward) > dot(best, toward) ? normal : best));
+}
+
+const AXIS_INDEX = { x: 0, y: 1, z: 2 } as const;
 
 function stripSize(accessory: Accessory, cell: number): { shape: HardwareShape; surface: SurfaceKey; width: number; stand: number } {
   switch (accessory.kind) {
