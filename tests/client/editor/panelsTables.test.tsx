@@ -67,6 +67,8 @@ describe('Parts tab (bill of materials)', () => {
     const profileRow = screen.getByText('Profile 40 x 40 mm').closest('tr')!;
     expect(within(profileRow).getByText('6.56 ft')).toBeInTheDocument(); // 2 m / 0.3048 m per ft
     expect(within(profileRow).getByText('$3.66/ft')).toBeInTheDocument(); // $12/m x 0.3048
+    expect(within(profileRow).getByText('ft')).toBeInTheDocument();
+    expect(within(profileRow).queryByText('m')).not.toBeInTheDocument();
   });
 });
 

@@ -5,7 +5,7 @@ import type { LengthUnit } from '@/domain/units';
 import { SortableTable } from './SortableTable';
 import { CsvButton } from './CsvButton';
 import { bomToCsv } from './csv';
-import { csvFileName, formatMoney, showMass, showQuantity, showUnitMass, showUnitPrice } from './format';
+import { csvFileName, formatMoney, showMass, showQuantity, showSaleUnit, showUnitMass, showUnitPrice } from './format';
 
 export const BOM_CATEGORY_ORDER: BomCategory[] = ['profile', 'connector', 'fastener', 't-nut', 'panel', 'accessory', 'gasket', 'slot-cover'];
 
@@ -49,7 +49,7 @@ export function PartsTab({ lines, units, designName }: PartsTabProps) {
           );
         },
       },
-      { id: 'unit', header: 'Unit', accessorKey: 'unit' },
+      { id: 'unit', header: 'Unit', accessorKey: 'unit', cell: (c) => showSaleUnit(c.row.original.unit, units) },
       {
         id: 'unitMass',
         header: 'Unit mass',

@@ -41,6 +41,12 @@ export function showQuantity(quantity: number, unit: BomUnit, units: LengthUnit)
   return units === 'in' ? `${(quantity * SQUARE_FEET_PER_SQUARE_METRE).toFixed(2)} ft²` : `${quantity.toFixed(3)} m²`;
 }
 
+/** The sale unit as shown: metres and square metres become feet and square feet in inch mode. */
+export function showSaleUnit(unit: BomUnit, units: LengthUnit): string {
+  if (units !== 'in' || unit === 'pcs') return unit;
+  return unit === 'm' ? 'ft' : 'ft²';
+}
+
 /** Factor from a per-unit value (per m, per m²) to the displayed unit (per ft, per ft²). */
 function perUnitFactor(unit: BomUnit, units: LengthUnit): number {
   if (units !== 'in' || unit === 'pcs') return 1;
