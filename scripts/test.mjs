@@ -11,7 +11,7 @@ if (!existsSync(chromium)) {
     `\nChromium was not found at ${chromium}.\n` +
       'The end-to-end tests use Debian\'s Chromium. Install it with:\n' +
       '  apt-get update && apt-get install -y chromium\n' +
-      'or point CHROMIUM_PATH at a Chromium binary. (Never run `playwright install`.)\n',
+      'or point CHROMIUM_PATH at a Chromium binary. The tests use that system browser only.\n',
   );
   process.exit(1);
 }

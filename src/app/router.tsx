@@ -2,7 +2,7 @@ import type { RouteObject } from 'react-router';
 import { PageSkeleton } from '@/components/ui';
 import { RequireRole } from '@/features/auth/components/RequireRole';
 import { SignedInLayout } from './layout/SignedInLayout';
-import { EditorSkeleton } from './routes/EditorSkeleton';
+import { EditorSkeleton } from '@/components/ui/EditorSkeleton';
 import { HomeRedirect } from './routes/HomeRedirect';
 import { RouteErrorBoundary } from './routes/RouteErrorBoundary';
 import { lazyPage } from './routes/pages';

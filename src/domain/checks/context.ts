@@ -12,6 +12,7 @@ import { pointAlongProfile, profileBoundingBox, sectionAxes, type SectionAxes } 
 import { UniformGrid } from '../geometry/spatialGrid';
 import type { Vec3 } from '../geometry/vectors';
 import type { CatalogueIndex } from './catalogueIndex';
+import { slotLimitsOf } from '../design/slotLimits';
 
 /** Two parts closer than this (mm) count as touching. Common practice for a drawn model, no source. */
 export const CONTACT_TOLERANCE_MM = 0.5;
@@ -210,10 +211,10 @@ function panelInfo(index: number, design: DesignDocument, catalogue: CatalogueIn
   if (panel.mounting === 'captured') {
     const systems = bounding.map((b) => b.system).filter((s): s is ProfileSystem => !!s);
     const fallback = catalogue.systems.get(design.systemId);
-    const used = systems.length > 0 ? systems : fallback ? [fallback] : [];
-    if (used.length > 0) {
-      slotOpening = Math.min(...used.map((s) => s.slotOpening));
-      engagement = Math.min(...used.map((s) => s.slotEngagement));
+    const limits = slotLimitsOf(systems.length > 0 ? systems : fallback ? [fallback] : []);
+    if (limits) {
+      slotOpening = limits.slotOpening;
+      engagement = limits.engagement;
     }
   }
   const clearance = panel.mounting === 'captured' ? design.settings.panelClearance : 0;

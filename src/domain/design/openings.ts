@@ -147,3 +147,20 @@ export function openingBoundedBy(openings: FrameOpening[], ids: string[]): Frame
   const want = [...ids].sort().join('+');
   return openings.find((o) => [...o.boundedBy].sort().join('+') === want);
 }
+
+/**
+ * The panel rectangle that fills an opening, mm: a captured sheet keeps the clear opening (the
+ * core adds the slot engagement); a face-mounted sheet covers the profiles' faces and sits on them,
+ * on the +normal side.
+ */
+export function panelRectForOpening(
+  opening: FrameOpening,
+  mounting: 'captured' | 'face',
+  thickness: number,
+  sectionSize: number,
+): FrameOpening['rect'] {
+  const center = [...opening.rect.center] as Vec3;
+  if (mounting === 'captured') return { ...opening.rect, center };
+  center[AXES.indexOf(opening.rect.normal)] += sectionSize / 2 + thickness / 2;
+  return { ...opening.rect, center, width: opening.rect.width + sectionSize, height: opening.rect.height + sectionSize };
+}

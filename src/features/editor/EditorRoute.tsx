@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import { Link, useParams } from 'react-router';
-import { ErrorNotice, Skeleton } from '@/components/ui';
+import { ErrorNotice } from '@/components/ui';
+import { EditorSkeleton } from '@/components/ui/EditorSkeleton';
 import { defaultCatalogue, getSystem } from '@/domain/catalogue';
 import { isApiError } from '@/lib/apiClient';
 import { useEditorDesign } from './api/getEditorDesign';
@@ -17,7 +18,7 @@ export default function EditorRoute() {
   const query = useEditorDesign(valid ? designId : 0);
 
   if (!valid) return <EditorProblem message="This address does not name a design." />;
-  if (query.isPending) return <EditorLoading />;
+  if (query.isPending) return <EditorSkeleton label="Opening the design…" />;
   if (query.isError) {
     const error = query.error;
     const message =
@@ -49,20 +50,6 @@ function EditorSession({ detail }: { detail: EditorDesignDetail }) {
     <EditorStoreProvider store={store}>
       <EditorWorkspace />
     </EditorStoreProvider>
-  );
-}
-
-function EditorLoading() {
-  return (
-    <div role="status" aria-live="polite" className="flex h-full flex-col">
-      <span className="sr-only">Opening the design…</span>
-      <Skeleton className="h-14 rounded-none" />
-      <div className="flex flex-1 gap-2 p-2">
-        <Skeleton className="w-[72px]" />
-        <Skeleton className="flex-1" />
-        <Skeleton className="w-[340px]" />
-      </div>
-    </div>
   );
 }
 

@@ -2,10 +2,11 @@ import { useId, useState, type ReactNode } from 'react';
 import { Columns2, DoorClosed, SquareDashed } from 'lucide-react';
 import { defaultCatalogue, getPanelMaterial } from '@/domain/catalogue';
 import type { DesignOperation, PanelInput } from '@/domain/design/operations';
-import type { FrameOpening } from '@/domain/design/openings';
-import type { Panel, Vec3 } from '@/domain/design/schema';
+import { panelRectForOpening, type FrameOpening } from '@/domain/design/openings';
+import type { Panel } from '@/domain/design/schema';
 import { Button } from '@/components/ui';
 import { cn } from '@/lib/cn';
+import { panelSlotLimits } from '@/domain/design/slotLimits';
 import { operationCommand } from '../commands/operationCommand';
 import { executeAndSelectAdded } from '../hooks/useSelectionActions';
 import { useEditorStore, useEditorStoreApi } from '../store/editorStore';
@@ -13,7 +14,6 @@ import { InspectorSection, InspectorSelect } from './InspectorSection';
 import { LengthInput } from './LengthInput';
 import { capturedThicknessProblem, panelSystem } from './panelRules';
 
-const AXIS_INDEX = { x: 0, y: 1, z: 2 } as const;
 /** A door sheet this thick or the next listed one up (common practice, no source). */
 const PREFERRED_DOOR_THICKNESS_MM = 4;
 
@@ -32,6 +32,7 @@ export function FillOpeningForm({ opening }: { opening: FrameOpening }) {
   const units = useEditorStore((state) => state.units);
   const catalogue = defaultCatalogue;
   const system = panelSystem(design, { boundedBy: opening.boundedBy });
+  const slot = panelSlotLimits(design, opening.boundedBy);
   const materialId = useId();
   const mountingId = useId();
   const roleId = useId();
@@ -43,11 +44,11 @@ export function FillOpeningForm({ opening }: { opening: FrameOpening }) {
   const [hingeSide, setHingeSide] = useState<'left' | 'right'>('left');
   const listedThicknesses = (id: string) => getPanelMaterial(catalogue, id)?.thicknesses ?? [3];
   const thicknessFor = (nextKind: FillKind, id: string) =>
-    nextKind === 'panel' ? fittingThickness(listedThicknesses(id), system?.slotOpening) : doorThickness(listedThicknesses(id));
+    nextKind === 'panel' ? fittingThickness(listedThicknesses(id), slot?.slotOpening) : doorThickness(listedThicknesses(id));
   const [thickness, setThickness] = useState(() => thicknessFor('panel', material));
   const [error, setError] = useState<string | null>(null);
   const captured = kind === 'panel' && mounting === 'captured';
-  const thicknessProblem = captured ? capturedThicknessProblem(thickness, system, units) : null;
+  const thicknessProblem = captured ? capturedThicknessProblem(thickness, slot, units) : null;
   const choice = FILL_KINDS.find((option) => option.kind === kind)!;
   const materialName = getPanelMaterial(catalogue, material)?.name ?? material;
 
@@ -59,7 +60,7 @@ export function FillOpeningForm({ opening }: { opening: FrameOpening }) {
     if (kind === 'hinged-door') {
       return { label: `Add a hinged door of ${materialName}`, op: { type: 'addHingedDoor', payload: { door: { opening: at, materialId: material, thickness, hingeSide } } } };
     }
-    const panel: PanelInput = { materialId: material, thickness, mounting, role, boundedBy: [...opening.boundedBy], rect: panelRect(opening, mounting, thickness, system?.outerSize ?? 40) };
+    const panel: PanelInput = { materialId: material, thickness, mounting, role, boundedBy: [...opening.boundedBy], rect: panelRectForOpening(opening, mounting, thickness, system?.outerSize ?? 40) };
     return { label: `Fill opening with ${materialName}`, op: { type: 'addPanel', payload: { panel } } };
   };
 
@@ -126,7 +127,7 @@ export function FillOpeningForm({ opening }: { opening: FrameOpening }) {
         label="Thickness"
         valueMm={thickness}
         units={units}
-        validate={(mm) => (captured ? capturedThicknessProblem(mm, system, units) : null)}
+        validate={(mm) => (captured ? capturedThicknessProblem(mm, slot, units) : null)}
         onCommit={(mm) => setThickness(mm)}
       />
       {kind === 'panel' ? (
@@ -183,9 +184,3 @@ function doorThickness(thicknesses: number[]): number {
 }
 
 /** A captured panel uses the clear opening; a face-mounted sheet covers to the profiles' centre lines and sits on their face. */
-function panelRect(opening: FrameOpening, mounting: Panel['mounting'], thickness: number, sectionSize: number): Panel['rect'] {
-  if (mounting === 'captured') return { ...opening.rect, center: [...opening.rect.center] as Vec3 };
-  const center = [...opening.rect.center] as Vec3;
-  center[AXIS_INDEX[opening.rect.normal]] += sectionSize / 2 + thickness / 2;
-  return { ...opening.rect, center, width: opening.rect.width + sectionSize, height: opening.rect.height + sectionSize };
-}

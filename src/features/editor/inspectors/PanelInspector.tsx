@@ -9,7 +9,8 @@ import { operationCommand } from '../commands/operationCommand';
 import { useEditorStore, useEditorStoreApi } from '../store/editorStore';
 import { InspectorSection, InspectorSelect, ValueRow } from './InspectorSection';
 import { LengthInput } from './LengthInput';
-import { capturedThicknessProblem, panelSystem } from './panelRules';
+import { panelSlotLimits } from '@/domain/design/slotLimits';
+import { capturedThicknessProblem } from './panelRules';
 
 /** A panel: material, thickness (refused when it cannot fit the slot), mounting, role and round cut-outs. */
 export function PanelInspector({ panel }: { panel: Panel }) {
@@ -21,7 +22,7 @@ export function PanelInspector({ panel }: { panel: Panel }) {
   const mountingId = useId();
   const roleId = useId();
   const catalogue = defaultCatalogue;
-  const system = panelSystem(design, panel);
+  const slot = panelSlotLimits(design, panel.boundedBy);
   const material = getPanelMaterial(catalogue, panel.materialId);
 
   const update = (label: string, changes: PanelChanges): string | null => {
@@ -38,7 +39,7 @@ export function PanelInspector({ panel }: { panel: Panel }) {
           {panelCut && panelCut.notchedCorners > 0 ? (
             <ValueRow name="Corner notches" value={`${panelCut.notchedCorners} × ${formatLength(panelCut.cornerNotch, units)}`} />
           ) : null}
-          {system ? <ValueRow name="Slot opening" value={formatLength(system.slotOpening, units)} /> : null}
+          {slot ? <ValueRow name="Slot opening" value={formatLength(slot.slotOpening, units)} /> : null}
         </dl>
         <InspectorSelect
           id={materialId}
@@ -56,7 +57,7 @@ export function PanelInspector({ panel }: { panel: Panel }) {
           label="Thickness"
           valueMm={panel.thickness}
           units={units}
-          validate={(mm) => (panel.mounting === 'captured' ? capturedThicknessProblem(mm, system, units) : null)}
+          validate={(mm) => (panel.mounting === 'captured' ? capturedThicknessProblem(mm, slot, units) : null)}
           onCommit={(mm) => update(`Set ${panel.id} thickness to ${formatLength(mm, units)}`, { thickness: mm })}
           hint={material ? `Common: ${material.thicknesses.map((t) => formatLength(t, units)).join(', ')}` : undefined}
         />

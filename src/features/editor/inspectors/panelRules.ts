@@ -1,8 +1,9 @@
 import { defaultCatalogue, getSystem, getVariant, type Catalogue, type ProfileSystem } from '@/domain/catalogue';
 import type { DesignDocument, Panel } from '@/domain/design/schema';
+import { isThickerThanSlot, type SlotLimits } from '@/domain/design/slotLimits';
 import { formatLength, type LengthUnit } from '@/domain/units';
 
-/** The profile system holding a panel: that of its first bounding profile, else the design's. */
+/** The profile system holding a panel (for its hardware): that of its first bounding profile, else the design's. */
 export function panelSystem(design: DesignDocument, panel: Pick<Panel, 'boundedBy'>, catalogue: Catalogue = defaultCatalogue): ProfileSystem | undefined {
   const firstProfileId = panel.boundedBy?.[0];
   const profile = firstProfileId ? design.profiles.find((candidate) => candidate.id === firstProfileId) : undefined;
@@ -10,11 +11,8 @@ export function panelSystem(design: DesignDocument, panel: Pick<Panel, 'boundedB
   return getSystem(catalogue, variant?.systemId ?? design.systemId);
 }
 
-/** Why a sheet of this thickness cannot be captured in the system's slot, or null when it fits. */
-export function capturedThicknessProblem(thicknessMm: number, system: ProfileSystem | undefined, units: LengthUnit): string | null {
-  if (!system) return null;
-  if (thicknessMm > system.slotOpening) {
-    return `A ${formatLength(thicknessMm, units)} sheet is thicker than the ${formatLength(system.slotOpening, units)} slot opening of ${system.name} profiles, so it cannot slide into the slot. Choose a thinner sheet or mount it on the face.`;
-  }
-  return null;
+/** Why a sheet of this thickness cannot be captured in the slot around it, or null when it fits (same rule as the panel-fit check). */
+export function capturedThicknessProblem(thicknessMm: number, limits: SlotLimits | null, units: LengthUnit): string | null {
+  if (!limits || !isThickerThanSlot(thicknessMm, limits)) return null;
+  return `A ${formatLength(thicknessMm, units)} sheet is thicker than the ${formatLength(limits.slotOpening, units)} slot opening of ${limits.system.name} profiles, so it cannot slide into the slot. Choose a thinner sheet or mount it on the face.`;
 }
