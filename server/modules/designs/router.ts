@@ -1,5 +1,4 @@
 import { Router } from 'express';
-import type { z } from 'zod';
 import { createEmptyDesignDocument } from '../../domainBridge';
 import { requireRole } from '../../middleware/requireAuth';
 import { validate } from '../../middleware/validate';
@@ -7,9 +6,6 @@ import { requireValidDocument } from './documentCheck';
 import { sendRevisionJson } from './revisionJson';
 import { createDesignBodySchema, designIdParamsSchema, revisionParamsSchema, saveRevisionBodySchema } from './schemas';
 import type { DesignsService } from './service';
-
-type DesignParams = z.output<typeof designIdParamsSchema>;
-type RevisionParams = z.output<typeof revisionParamsSchema>;
 
 /** /api/designs — designs and their revisions; owners and designers. */
 export function designsRouter(designs: DesignsService): Router {
@@ -21,7 +17,7 @@ export function designsRouter(designs: DesignsService): Router {
   });
 
   router.post('/', validate({ body: createDesignBodySchema }), async (req, res) => {
-    const body = req.body as z.output<typeof createDesignBodySchema>;
+    const body = req.body;
     const document =
       body.document === undefined
         ? createEmptyDesignDocument({ name: body.name, systemId: body.systemId, units: body.units })
@@ -32,25 +28,25 @@ export function designsRouter(designs: DesignsService): Router {
   });
 
   router.get('/:id', validate({ params: designIdParamsSchema }), async (req, res) => {
-    const { id } = req.params as unknown as DesignParams;
+    const { id } = req.params;
     const { design, revision } = await designs.getLatest(id);
     sendRevisionJson(res, { design }, revision.meta, revision.documentJson);
   });
 
   router.delete('/:id', validate({ params: designIdParamsSchema }), async (req, res) => {
-    const { id } = req.params as unknown as DesignParams;
+    const { id } = req.params;
     await designs.archive(id, req.user!);
     res.status(204).end();
   });
 
   router.get('/:id/revisions', validate({ params: designIdParamsSchema }), async (req, res) => {
-    const { id } = req.params as unknown as DesignParams;
+    const { id } = req.params;
     res.json({ revisions: await designs.listRevisions(id) });
   });
 
   router.post('/:id/revisions', validate({ params: designIdParamsSchema, body: saveRevisionBodySchema }), async (req, res) => {
-    const { id } = req.params as unknown as DesignParams;
-    const body = req.body as z.output<typeof saveRevisionBodySchema>;
+    const { id } = req.params;
+    const body = req.body;
     const document = await requireValidDocument(body.document);
     const revision = await designs.saveRevision(id, req.user!, body.baseRevision, {
       document,
@@ -62,13 +58,13 @@ export function designsRouter(designs: DesignsService): Router {
   });
 
   router.get('/:id/revisions/:number', validate({ params: revisionParamsSchema }), async (req, res) => {
-    const { id, number } = req.params as unknown as RevisionParams;
+    const { id, number } = req.params;
     const revision = await designs.getRevision(id, number);
     sendRevisionJson(res, {}, revision.meta, revision.documentJson);
   });
 
   router.get('/:id/revisions/:number/thumbnail', validate({ params: revisionParamsSchema }), async (req, res) => {
-    const { id, number } = req.params as unknown as RevisionParams;
+    const { id, number } = req.params;
     const png = await designs.getThumbnail(id, number);
     // A revision never changes, so its picture can be cached for good (privately: it needs a session).
     res
