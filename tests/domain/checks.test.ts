@@ -108,14 +108,14 @@ describe('joint check', () => {
 });
 
 describe('panel fit check', () => {
-  it('rejects a panel thicker than the slot opening, with the numbers, and offers a sheet that fits', () => {
+  it('rejects a panel too thick for the slot opening with its clearance, with the numbers, and offers a sheet that fits', () => {
     const design = boxFrame({ backPanel: true, panelThickness: 10 });
     const thick = panelFitFindings(createAnalysisContext(design)).filter((f) => f.id.includes('too-thick'));
     expect(thick).toHaveLength(1);
     expect(thick[0].severity).toBe('error');
-    expect(thick[0].message).toMatch(/^10 mm acrylic \(pmma\), clear is thicker than the 8 mm slot opening/);
+    expect(thick[0].message).toMatch(/^10 mm acrylic \(pmma\), clear is too thick for the 8 mm slot opening .*1\.5 mm clearance/);
     expect(thick[0].data).toMatchObject({ thicknessMm: 10, slotOpeningMm: 8 });
-    expect(thick[0].fix?.operation).toEqual({ type: 'updatePanel', payload: { panelId: 'BACK', changes: { thickness: 8 } } });
+    expect(thick[0].fix?.operation).toEqual({ type: 'updatePanel', payload: { panelId: 'BACK', changes: { thickness: 6 } } });
     const fixed = applyOperation(design, thick[0].fix!.operation);
     expect(panelFitFindings(createAnalysisContext(fixed)).filter((f) => f.severity === 'error')).toEqual([]);
   });

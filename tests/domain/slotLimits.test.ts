@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { defaultCatalogue, getSystem } from '@/domain/catalogue';
 import { createEmptyDesign } from '@/domain/design/create';
 import { panelRectForOpening, type FrameOpening } from '@/domain/design/openings';
-import { isThickerThanSlot, panelSlotLimits, slotLimitsOf } from '@/domain/design/slotLimits';
+import { isThickerThanSlot, panelSlotLimits, SLOT_THICKNESS_CLEARANCE_MM, slotLimitsOf, thickestFittingThickness } from '@/domain/design/slotLimits';
 
 const metric20 = getSystem(defaultCatalogue, 'metric-20')!;
 const metric40 = getSystem(defaultCatalogue, 'metric-40')!;
@@ -20,10 +20,18 @@ describe('the slot a captured panel sits in', () => {
     expect(panelSlotLimits(design, ['missing'])?.system.id).toBe('metric-40');
   });
 
-  it('refuses only sheets thicker than the opening', () => {
+  it('refuses sheets that leave less than the one slot clearance (1.5 mm, common practice, no source)', () => {
     const limits = slotLimitsOf([metric40])!;
-    expect(isThickerThanSlot(limits.slotOpening, limits)).toBe(false);
-    expect(isThickerThanSlot(limits.slotOpening + 0.1, limits)).toBe(true);
+    expect(SLOT_THICKNESS_CLEARANCE_MM).toBe(1.5);
+    expect(isThickerThanSlot(limits.slotOpening - 1.5, limits)).toBe(false);
+    expect(isThickerThanSlot(limits.slotOpening - 1.4, limits)).toBe(true);
+    expect(isThickerThanSlot(limits.slotOpening, limits)).toBe(true);
+  });
+
+  it('picks the thickest listed sheet that fits, the same rule the generators and the editor form use', () => {
+    // metric 40: 8 mm opening, so 6.5 mm is the thickest sheet that slides in.
+    expect(thickestFittingThickness([3, 4.5, 5, 6, 8, 10], 8)).toBe(6);
+    expect(thickestFittingThickness([8, 10], 8)).toBeUndefined();
   });
 });
 

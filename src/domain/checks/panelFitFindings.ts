@@ -4,6 +4,7 @@
  * its plane against the slots, and the corner notches connectors in the slot call for.
  */
 import type { Finding } from '../analysisTypes';
+import { SLOT_THICKNESS_CLEARANCE_MM, sheetFitsSlot, thickestFittingThickness } from '../design/slotLimits';
 import { panelAxes } from '../geometry/panelGeometry';
 import { sectionHalfExtentAlong } from '../geometry/profileGeometry';
 import { dominantAxis } from '../geometry/vectors';
@@ -65,15 +66,15 @@ function checkThickness(ctx: AnalysisContext, info: PanelInfo, out: Finding[]): 
   if (slotOpening === null) return;
   const materialName = info.material?.name.toLowerCase() ?? panel.materialId;
   const systemName = info.bounding[0].system?.name ?? ctx.design.systemId;
-  if (panel.thickness > slotOpening) {
-    const fits = (info.material?.thicknesses ?? []).filter((t) => t <= slotOpening).sort((a, b) => b - a)[0];
+  if (!sheetFitsSlot(panel.thickness, slotOpening)) {
+    const fits = thickestFittingThickness(info.material?.thicknesses ?? [], slotOpening);
     const fix = fits !== undefined ? setPanelThicknessFix(panel.id, fits) : undefined;
     out.push({
       id: findingId(CHECK, 'too-thick', [panel.id]),
       check: CHECK,
       severity: 'error',
       partIds: [panel.id, ...info.bounding.map((b) => b.profile.id)],
-      message: `${formatNumber(panel.thickness)} mm ${materialName} is thicker than the ${formatNumber(slotOpening)} mm slot opening of the ${systemName} profiles around panel ${panel.id}; it will not go into the slot.${fits !== undefined ? ` Use ${formatNumber(fits)} mm sheet, or mount the panel on a face.` : ' Mount it on a face instead.'}`,
+      message: `${formatNumber(panel.thickness)} mm ${materialName} is too thick for the ${formatNumber(slotOpening)} mm slot opening of the ${systemName} profiles around panel ${panel.id} (a sheet keeps ${formatNumber(SLOT_THICKNESS_CLEARANCE_MM)} mm clearance to slide in); it will not go into the slot.${fits !== undefined ? ` Use ${formatNumber(fits)} mm sheet, or mount the panel on a face.` : ' Mount it on a face instead.'}`,
       ...(fix ? { fix } : {}),
       data: { thicknessMm: panel.thickness, slotOpeningMm: slotOpening },
     });

@@ -46,7 +46,30 @@ export function panelSlotLimits(
   return fallback ? slotLimitsOf([fallback]) : null;
 }
 
+/**
+ * The one slot-fit rule. A captured sheet keeps this clearance to the slot opening, mm, so it slides
+ * in past burrs and sheet tolerance (common practice, no source). Generators, the editor's forms and
+ * the panel-fit check all use it.
+ */
+export const SLOT_THICKNESS_CLEARANCE_MM = 1.5;
+
+/** Thickest sheet (mm) a slot of this opening (mm) takes with the clearance. */
+export function maxCapturedThickness(slotOpeningMm: number): number {
+  return slotOpeningMm - SLOT_THICKNESS_CLEARANCE_MM;
+}
+
+/** Whether a sheet of this thickness (mm) slides into a slot of this opening (mm). */
+export function sheetFitsSlot(thicknessMm: number, slotOpeningMm: number): boolean {
+  return thicknessMm <= maxCapturedThickness(slotOpeningMm) + 1e-9;
+}
+
 /** A sheet of this thickness (mm) cannot be captured in the slot. */
 export function isThickerThanSlot(thicknessMm: number, limits: SlotLimits): boolean {
-  return thicknessMm > limits.slotOpening;
+  return !sheetFitsSlot(thicknessMm, limits.slotOpening);
+}
+
+/** The thickest of these listed thicknesses (mm) that fits the slot opening (mm), or undefined when none does. */
+export function thickestFittingThickness(thicknessesMm: readonly number[], slotOpeningMm: number): number | undefined {
+  const fits = thicknessesMm.filter((t) => sheetFitsSlot(t, slotOpeningMm));
+  return fits.length ? Math.max(...fits) : undefined;
 }

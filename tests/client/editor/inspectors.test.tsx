@@ -114,7 +114,7 @@ describe('panel inspector', () => {
     await user.clear(thickness);
     await user.type(thickness, '10{Enter}');
     // The metric 40 slot opening is 8 mm (domain brief: common practice, approximate).
-    expect(screen.getByRole('alert')).toHaveTextContent(/thicker than the 8 mm slot opening/);
+    expect(screen.getByRole('alert')).toHaveTextContent(/too thick for the 8 mm slot opening/);
     expect(store.getState().design).toBe(before);
   });
 

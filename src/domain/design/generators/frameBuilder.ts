@@ -10,6 +10,7 @@ import { createEmptyDesign } from '../create';
 import { addFeetToFreeBottomEnds, autoEndCaps } from '../endTreatments';
 import { createIdAllocator, type IdAllocator } from '../ids';
 import { addJoints, type JointInput } from '../operations';
+import { thickestFittingThickness } from '../slotLimits';
 import type { Accessory, AssemblyStep, DesignDocument, LoadCase, Panel, Profile, SubAssembly, Vec3 } from '../schema';
 
 export type FrameFace = 'back' | 'left' | 'right' | 'front';
@@ -68,14 +69,10 @@ export interface BuiltFrame {
 
 const round = (v: number) => Math.round(v * 1000) / 1000;
 
-/** Clearance a captured sheet keeps to the slot opening, mm (common practice, no source). */
-export const SLOT_THICKNESS_CLEARANCE_MM = 1.5;
-
-/** Largest listed thickness of a material that fits the system's slot with clearance. */
+/** Largest listed thickness of a material that fits the system's slot (the one rule in design/slotLimits.ts), mm. */
 export function fittingThickness(catalogue: Catalogue, system: ProfileSystem, materialId: string): number | undefined {
   const material = catalogue.panelMaterials.find((m) => m.id === materialId);
-  const fits = [...(material?.thicknesses ?? [])].sort((a, b) => a - b).filter((t) => t <= system.slotOpening - SLOT_THICKNESS_CLEARANCE_MM);
-  return fits.length ? fits[fits.length - 1] : undefined;
+  return thickestFittingThickness(material?.thicknesses ?? [], system.slotOpening);
 }
 
 /**

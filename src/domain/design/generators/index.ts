@@ -14,7 +14,8 @@ import { tableGenerator } from './table';
 import type { GeneratorDefinition } from './types';
 
 export type { GeneratorDefinition } from './types';
-export { fittingThickness, capturedSheet, SLOT_THICKNESS_CLEARANCE_MM } from './frameBuilder';
+export { fittingThickness, capturedSheet } from './frameBuilder';
+export { SLOT_THICKNESS_CLEARANCE_MM } from '../slotLimits';
 export { boxFrameGenerator, tableGenerator, shelfUnitGenerator, cabinetGenerator, enclosureGenerator };
 
 export const generators = [boxFrameGenerator, tableGenerator, shelfUnitGenerator, cabinetGenerator, enclosureGenerator] as const;

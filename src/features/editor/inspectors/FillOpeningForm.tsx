@@ -6,7 +6,7 @@ import { panelRectForOpening, type FrameOpening } from '@/domain/design/openings
 import type { Panel } from '@/domain/design/schema';
 import { Button } from '@/components/ui';
 import { cn } from '@/lib/cn';
-import { panelSlotLimits } from '@/domain/design/slotLimits';
+import { panelSlotLimits, thickestFittingThickness } from '@/domain/design/slotLimits';
 import { operationCommand } from '../commands/operationCommand';
 import { executeAndSelectAdded } from '../hooks/useSelectionActions';
 import { useEditorStore, useEditorStoreApi } from '../store/editorStore';
@@ -169,12 +169,11 @@ export function FillOpeningForm({ opening }: { opening: FrameOpening }) {
   );
 }
 
-/** The thickest common thickness that fits the slot (or the thinnest listed when none does). */
+/** The thickest listed thickness that fits the slot (the rule in design/slotLimits.ts), or the thinnest listed when none does. */
 function fittingThickness(thicknesses: number[], slotOpening: number | undefined): number {
-  const sorted = [...thicknesses].sort((a, b) => a - b);
-  if (slotOpening === undefined) return sorted[0] ?? 3;
-  const fitting = sorted.filter((t) => t <= slotOpening - 0.5);
-  return fitting[fitting.length - 1] ?? sorted[0] ?? 3;
+  const thinnest = thicknesses.length ? Math.min(...thicknesses) : 3;
+  if (slotOpening === undefined) return thinnest;
+  return thickestFittingThickness(thicknesses, slotOpening) ?? thinnest;
 }
 
 /** The thinnest listed sheet of at least the preferred door thickness, else the thickest listed. */
