@@ -72,12 +72,3 @@ export function indexCatalogue(catalogue: Catalogue): CatalogueIndex {
   return index;
 }
 
-/**
- * The connector's screw with the joint's head style. Socket-head screws into tapped ends keep
- * their head (same rule as catalogue `connectorFasteners`); unknown combinations keep the default.
- */
-export function fastenerWithHead(index: CatalogueIndex, fastenerId: string, head: string): Fastener | undefined {
-  const base = index.fasteners.get(fastenerId);
-  if (!base || base.head === head || base.head === 'socket') return base;
-  return index.fastenersByShape.get(`${head}|${base.size}|${base.length}`) ?? base;
-}

@@ -5,7 +5,7 @@
  * Shared by the BOM, tools, mass and cost; one pass, no per-screw objects.
  */
 import type { BomCategory } from '../analysisTypes';
-import { fastenerWithHead } from '../checks/catalogueIndex';
+import { jointRecipe, type JointRecipeItem } from '../design/jointHardware';
 import { memberPoint, type AnalysisContext } from '../checks/context';
 import { pointAlongProfile } from '../geometry/profileGeometry';
 import type { Vec3 } from '../geometry/vectors';
@@ -83,7 +83,7 @@ export function hardwareSummary(ctx: AnalysisContext): HardwareSummary {
   };
 
   // Joints with the same connector, screw head, T-nut and host system use the same parts: resolve once.
-  const recipes = new Map<string, { part: PartLike; category: BomCategory; perConnector: number }[]>();
+  const recipes = new Map<string, JointRecipeItem[]>();
   for (const joint of ctx.design.joints) {
     const first = ctx.profileById.get(joint.members[0]?.profileId);
     const host = ctx.profileById.get(joint.members[1]?.profileId) ?? first;
@@ -91,18 +91,7 @@ export function hardwareSummary(ctx: AnalysisContext): HardwareSummary {
     const key = `${joint.connectorId}|${joint.fastenerHead}|${joint.tNut}|${hostSystem}`;
     let recipe = recipes.get(key);
     if (!recipe) {
-      recipe = [];
-      const connector = cat.connectors.get(joint.connectorId);
-      if (connector) {
-        // End-screw "connectors" are the screw itself: no separate part to list.
-        if (connector.unitMass > 0 || connector.price > 0) recipe.push({ part: connector, category: 'connector', perConnector: 1 });
-        for (const use of connector.fasteners) {
-          const f = fastenerWithHead(cat, use.fastenerId, joint.fastenerHead);
-          if (f) recipe.push({ part: f, category: 'fastener', perConnector: use.quantity });
-        }
-        const nut = connector.tNutCount > 0 ? cat.tNutsBySystemKind.get(`${hostSystem}|${joint.tNut}`) : undefined;
-        if (nut) recipe.push({ part: nut, category: 't-nut', perConnector: connector.tNutCount });
-      }
+      recipe = jointRecipe(cat.catalogue, joint, hostSystem);
       recipes.set(key, recipe);
     }
     if (recipe.length === 0) continue;

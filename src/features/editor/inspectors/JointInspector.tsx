@@ -1,5 +1,6 @@
 import { useId } from 'react';
 import { defaultCatalogue } from '@/domain/catalogue';
+import { jointHostSystemId } from '@/domain/design/jointHardware';
 import type { Joint, JointKind } from '@/domain/design/schema';
 import { formatLength } from '@/domain/units';
 import { Button } from '@/components/ui';
@@ -20,7 +21,7 @@ export function JointInspector({ joint }: { joint: Joint }) {
   const headId = useId();
   const nutId = useId();
   const kinds: JointKind[] = joint.members.length === 3 ? ['corner-cube'] : joint.kind === 'hinge' ? ['hinge'] : TWO_WAY_JOINT_KINDS;
-  const { lines, hexKeys } = jointHardware(joint, defaultCatalogue);
+  const { lines, hexKeys } = jointHardware(joint, jointHostSystemId(design, joint, defaultCatalogue), defaultCatalogue);
   const machining = jointMachining(design, joint.id);
 
   return (

@@ -1,6 +1,7 @@
 import { useId, useMemo, useState } from 'react';
 import { Check, Link } from 'lucide-react';
 import { defaultCatalogue, connectorFor, getVariant } from '@/domain/catalogue';
+import { jointHostSystemId } from '@/domain/design/jointHardware';
 import { detectJoints, type JointProposal } from '@/domain/design/jointDetection';
 import type { JointKind } from '@/domain/design/schema';
 import { Button } from '@/components/ui';
@@ -85,7 +86,7 @@ function ProposalRow({ proposal, onAccept }: { proposal: JointProposal; onAccept
   const firstProfile = design.profiles.find((profile) => profile.id === proposal.members[0].profileId);
   const systemId = (firstProfile && getVariant(defaultCatalogue, firstProfile.variantId)?.systemId) ?? design.systemId;
   const connector = connectorFor(defaultCatalogue, systemId, kind);
-  const hardware = connector ? jointHardware({ connectorId: connector.id, fastenerHead: 'button', tNut: 'drop-in', quantity: 1 }) : null;
+  const hardware = connector ? jointHardware({ connectorId: connector.id, fastenerHead: 'button', tNut: 'drop-in', quantity: 1 }, jointHostSystemId(design, proposal, defaultCatalogue)) : null;
   const machiningCount = connector?.machining.length ?? 0;
 
   return (

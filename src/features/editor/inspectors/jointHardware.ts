@@ -1,4 +1,5 @@
-import { connectorFasteners, defaultCatalogue, getConnector, tNutFor, type Catalogue } from '@/domain/catalogue';
+import { defaultCatalogue, getConnector, type Catalogue } from '@/domain/catalogue';
+import { jointRecipe } from '@/domain/design/jointHardware';
 import type { DesignDocument, Joint } from '@/domain/design/schema';
 
 export interface HardwareLine {
@@ -6,19 +7,23 @@ export interface HardwareLine {
   quantity: number;
 }
 
-/** What one joint brings: connectors, screws (with their hex key) and T-nuts, counted. */
-export function jointHardware(joint: Pick<Joint, 'connectorId' | 'fastenerHead' | 'tNut' | 'quantity'>, catalogue: Catalogue = defaultCatalogue) {
+/**
+ * What one joint brings: connectors, screws (with their hex key) and T-nuts, counted. The parts come
+ * from the domain's one recipe (`jointRecipe`), the same the bill of materials uses; `hostSystemId`
+ * is the system whose slot takes the T-nuts (see `jointHostSystemId`).
+ */
+export function jointHardware(
+  joint: Pick<Joint, 'connectorId' | 'fastenerHead' | 'tNut' | 'quantity'>,
+  hostSystemId: string,
+  catalogue: Catalogue = defaultCatalogue,
+) {
   const connector = getConnector(catalogue, joint.connectorId);
   if (!connector) return { connector: undefined, lines: [] as HardwareLine[], hexKeys: [] as string[] };
-  const lines: HardwareLine[] = [{ name: connector.name, quantity: joint.quantity }];
+  const lines: HardwareLine[] = [];
   const hexKeys = new Set<string>();
-  for (const { fastener, quantity } of connectorFasteners(catalogue, connector, joint.fastenerHead)) {
-    lines.push({ name: fastener.name, quantity: quantity * joint.quantity });
-    hexKeys.add(fastener.hexKey.label);
-  }
-  if (connector.tNutCount > 0) {
-    const nut = tNutFor(catalogue, connector.systemIds[0], joint.tNut);
-    lines.push({ name: nut?.name ?? `${joint.tNut} T-nut`, quantity: connector.tNutCount * joint.quantity });
+  for (const item of jointRecipe(catalogue, joint, hostSystemId)) {
+    lines.push({ name: item.part.name, quantity: item.perConnector * joint.quantity });
+    if ('hexKey' in item.part) hexKeys.add(item.part.hexKey.label);
   }
   return { connector, lines, hexKeys: [...hexKeys] };
 }
