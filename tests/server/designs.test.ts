@@ -62,7 +62,7 @@ describe('designs and revisions', () => {
     const response = await designer.post('/api/designs').set(CLIENT).send({ name: 'Bad', systemId: 'metric-40', document });
     expect(response.status).toBe(400);
     expect(response.body.error.code).toBe('invalid_document');
-    expect(response.body.error.fields['document.profiles.1.length']).toMatch(/greater than 0/);
+    expect(response.body.error.fields['document.profiles.1.length']).toMatch(/at least 0.01 mm/);
     expect(await rowCounts(t.db)).toEqual(before);
   });
 

@@ -1,0 +1,54 @@
+import { Piscina } from 'piscina';
+import type { AnalysisLimits } from '../../config';
+import type { AnalysisTaskResult } from './analysisTask';
+
+/** Analyses documents in worker threads so a heavy design never holds up other requests. */
+export interface AnalysisPool {
+  /** Resolves with the task's result; rejects with `AnalysisTimeout` past the time limit, `AnalysisBusy` when the queue is full. */
+  run(document: unknown): Promise<AnalysisTaskResult>;
+  close(): Promise<void>;
+}
+
+export class AnalysisTimeout extends Error {
+  constructor(readonly limitMs: number) {
+    super(`The analysis took longer than ${limitMs} ms`);
+    this.name = 'AnalysisTimeout';
+  }
+}
+
+export class AnalysisBusy extends Error {
+  constructor() {
+    super('Every analysis worker is busy and the queue is full');
+    this.name = 'AnalysisBusy';
+  }
+}
+
+/** A piscina pool, started on first use; a task past the time limit is aborted and its thread replaced. */
+export function createAnalysisPool(limits: AnalysisLimits): AnalysisPool {
+  let pool: Piscina | undefined;
+  const start = () =>
+    (pool ??= new Piscina({
+      filename: new URL('./analysisWorker.mjs', import.meta.url).href,
+      minThreads: 1,
+      maxThreads: limits.threads,
+      idleTimeout: 60_000,
+      maxQueue: limits.threads * 64,
+    }));
+  return {
+    async run(document) {
+      const signal = AbortSignal.timeout(limits.timeLimitMs);
+      try {
+        return (await start().run(document, { signal })) as AnalysisTaskResult;
+      } catch (error) {
+        if (signal.aborted) throw new AnalysisTimeout(limits.timeLimitMs);
+        if (/queue is at limit/i.test(String((error as Error)?.message))) throw new AnalysisBusy();
+        throw error;
+      }
+    },
+    async close() {
+      const running = pool;
+      pool = undefined;
+      await running?.destroy();
+    },
+  };
+}
