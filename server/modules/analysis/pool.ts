@@ -1,3 +1,4 @@
+import { MessageChannel } from 'node:worker_threads';
 import { Piscina } from 'piscina';
 import type { AnalysisLimits } from '../../config';
 import type { AnalysisTaskResult } from './analysisTask';
@@ -36,13 +37,24 @@ export function createAnalysisPool(limits: AnalysisLimits): AnalysisPool {
     }));
   return {
     async run(document) {
-      const signal = AbortSignal.timeout(limits.timeLimitMs);
+      // The clock starts when a thread picks the task up: waiting in the queue or for a new thread
+      // to load is not the design's fault.
+      const abort = new AbortController();
+      const { port1, port2 } = new MessageChannel();
+      let timer: NodeJS.Timeout | undefined;
+      port1.once('message', () => {
+        timer = setTimeout(() => abort.abort(), limits.timeLimitMs);
+        port1.close();
+      });
       try {
-        return (await start().run(document, { signal })) as AnalysisTaskResult;
+        return (await start().run({ document, started: port2 }, { signal: abort.signal, transferList: [port2] })) as AnalysisTaskResult;
       } catch (error) {
-        if (signal.aborted) throw new AnalysisTimeout(limits.timeLimitMs);
+        if (abort.signal.aborted) throw new AnalysisTimeout(limits.timeLimitMs);
         if (/queue is at limit/i.test(String((error as Error)?.message))) throw new AnalysisBusy();
         throw error;
+      } finally {
+        clearTimeout(timer);
+        port1.close();
       }
     },
     async close() {
