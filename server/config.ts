@@ -3,6 +3,7 @@ import { mkdirSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
 import { dirname, resolve } from 'node:path';
 import { z } from 'zod';
+import { DEFAULT_ANALYSIS_MAX_PARTS, DEFAULT_ANALYSIS_TIME_LIMIT_MS } from '../src/domain/checks/findingCap';
 
 /** Settings read once from the environment at start-up; everything else receives this object. */
 export interface AppConfig {
@@ -33,8 +34,8 @@ export interface AnalysisLimits {
 }
 
 export const DEFAULT_ANALYSIS_LIMITS: AnalysisLimits = {
-  maxParts: 60_000,
-  timeLimitMs: 5_000,
+  maxParts: DEFAULT_ANALYSIS_MAX_PARTS,
+  timeLimitMs: DEFAULT_ANALYSIS_TIME_LIMIT_MS,
   threads: Math.max(1, Math.min(4, availableParallelism())),
 };
 

@@ -1,5 +1,6 @@
 import { Router } from 'express';
 import type { z } from 'zod';
+import { countDesignParts } from '../../../src/domain/checks/findingCap';
 import type { AnalysisLimits } from '../../config';
 import { AppError } from '../../middleware/appError';
 import { requireAuth } from '../../middleware/requireAuth';
@@ -8,18 +9,6 @@ import { documentErrorsToAppError } from '../designs/documentCheck';
 import { AnalysisBusy, AnalysisTimeout, type AnalysisPool } from './pool';
 import { analysisBodySchema } from './schemas';
 
-const PART_LISTS = ['profiles', 'joints', 'panels', 'accessories'] as const;
-
-/** Profiles + joints + panels + accessories in a posted (not yet checked) document. */
-export function countParts(document: unknown): number {
-  if (typeof document !== 'object' || document === null) return 0;
-  let parts = 0;
-  for (const key of PART_LISTS) {
-    const list = (document as Record<string, unknown>)[key];
-    if (Array.isArray(list)) parts += list.length;
-  }
-  return parts;
-}
 
 const thousands = (n: number) => n.toLocaleString('en-US');
 
@@ -31,7 +20,7 @@ export function analysisRouter(pool: AnalysisPool, limits: AnalysisLimits): Rout
   const router = Router();
   router.post('/', requireAuth, validate({ body: analysisBodySchema }), async (req, res) => {
     const { document } = req.body as z.output<typeof analysisBodySchema>;
-    const parts = countParts(document);
+    const parts = countDesignParts(document);
     if (parts > limits.maxParts) {
       throw new AppError(
         413,

@@ -6,6 +6,22 @@
 import type { Finding, Severity } from '../analysisTypes';
 import { formatNumber } from './describe';
 
+/** Parts (profiles + joints + panels + accessories) the editor and, by default, the server analyse at once. */
+export const DEFAULT_ANALYSIS_MAX_PARTS = 60_000;
+/** Wall time after which an analysis is stopped, ms (the server's default and the editor's worker). */
+export const DEFAULT_ANALYSIS_TIME_LIMIT_MS = 5_000;
+
+/** Profiles + joints + panels + accessories of a (possibly unchecked) document. */
+export function countDesignParts(document: unknown): number {
+  if (typeof document !== 'object' || document === null) return 0;
+  let parts = 0;
+  for (const key of ['profiles', 'joints', 'panels', 'accessories']) {
+    const list = (document as Record<string, unknown>)[key];
+    if (Array.isArray(list)) parts += list.length;
+  }
+  return parts;
+}
+
 /** Findings listed per check; the rest are counted, not listed. */
 export const MAX_FINDINGS_PER_CHECK = 200;
 
