@@ -10,6 +10,8 @@ import { runMigrations } from '../../../server/db/migrate';
 import { DEMO_ACCOUNTS, DEMO_PASSWORD, seedDemo } from '../../../server/db/seed';
 import type { Role } from '../../../server/db/models/user';
 import type { Logger } from '../../../server/logger';
+import type { AnalysisPool } from '../../../server/modules/analysis/pool';
+import type { SignInRateLimit } from '../../../server/modules/auth/signInRateLimit';
 
 /** The header every state-changing API call from the Slotwise client carries. */
 export const CLIENT = { 'X-Slotwise-Client': '1' } as const;
@@ -34,10 +36,15 @@ export interface TestApp {
 }
 
 export interface TestAppOptions {
-  rateLimit?: { signInMax: number; windowMs: number };
+  rateLimit?: SignInRateLimit;
   nodeEnv?: 'test' | 'production';
   clientDist?: string;
   seed?: boolean;
+  /** Extra environment variables for loadConfig (ANALYSIS_TIME_LIMIT_MS, …). */
+  env?: Record<string, string>;
+  /** Replaces the recording logger. */
+  logger?: Logger;
+  analysisPool?: AnalysisPool;
 }
 
 export const demoEmail = (role: Role) => DEMO_ACCOUNTS.find((account) => account.role === role)!.email;
@@ -52,6 +59,7 @@ export async function buildTestApp(options: TestAppOptions = {}): Promise<TestAp
       SESSION_SECRET: 'test-session-secret-that-is-long-enough-0123456789',
       CLIENT_DIST: options.clientDist ?? join(dir, 'no-client'),
       LOG_REQUESTS: 'false',
+      ...options.env,
     },
     () => undefined,
   );
@@ -60,11 +68,12 @@ export async function buildTestApp(options: TestAppOptions = {}): Promise<TestAp
   if (options.seed !== false) await seedDemo(db, { passwordCost: TEST_PASSWORD_COST });
 
   const loggedErrors: unknown[] = [];
-  const logger: Logger = { info() {}, warn() {}, error: (_message, details) => void loggedErrors.push(details) };
+  const logger: Logger = options.logger ?? { info() {}, warn() {}, error: (_message, details) => void loggedErrors.push(details) };
   const app = createApp({
     config,
     db,
     logger,
+    analysisPool: options.analysisPool,
     passwordCost: TEST_PASSWORD_COST,
     rateLimit: options.rateLimit ?? { signInMax: 1000, windowMs: 60_000 },
   });
