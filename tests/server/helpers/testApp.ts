@@ -116,6 +116,12 @@ export async function rowCounts(db: Database): Promise<Record<string, number>> {
   return counts;
 }
 
+/** Row counts of every table and a SHA-256 of every row of the data tables: "nothing changed" in one value. */
+export async function dataFingerprint(db: Database): Promise<{ counts: Record<string, number>; checksum: string }> {
+  const { createHash } = await import('node:crypto');
+  return { counts: await rowCounts(db), checksum: createHash('sha256').update(await dataSnapshot(db)).digest('hex') };
+}
+
 /** Every row of the shop's data tables, for "nothing changed" checks. */
 export async function dataSnapshot(db: Database): Promise<string> {
   const parts: unknown[] = [];
