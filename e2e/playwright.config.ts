@@ -45,6 +45,8 @@ export default defineConfig({
     timeout: 120_000,
     env: {
       NODE_ENV: 'production',
+      // Production seeds nothing unless asked; the specs sign in as the demo accounts.
+      SEED_DEMO: '1',
       PORT: String(port),
       DATABASE_PATH: dbFile,
       SESSION_SECRET: 'e2e-session-secret-not-for-production-0123456789',

@@ -1,5 +1,7 @@
 // `npm start`: build the client when it is missing or older than its sources, then start the
-// server (which migrates the database and seeds the demo shop on first run).
+// server (which migrates the database). `npm start` asks for the demo shop explicitly
+// (SEED_DEMO=1, seeded only while the database has no accounts); a real deployment sets
+// SEED_DEMO=0 and creates its first owner with `npm run user:create -- --role owner`.
 import { spawnSync, spawn } from 'node:child_process';
 import { existsSync, statSync, readdirSync, readFileSync, writeFileSync, mkdirSync } from 'node:fs';
 import { join, dirname, resolve } from 'node:path';
@@ -48,10 +50,15 @@ function sessionSecret() {
   return readFileSync(secretFile, 'utf8').trim();
 }
 
+const seedDemo = process.env.SEED_DEMO ?? '1';
+if (seedDemo === '1' || seedDemo === 'true' || seedDemo === 'yes') {
+  console.log('npm start seeds the demo shop into an empty database (set SEED_DEMO=0 to start without it).');
+}
+
 const server = spawn('npx', ['tsx', 'server/index.ts'], {
   cwd: root,
   stdio: 'inherit',
-  env: { NODE_ENV: 'production', ...process.env, SESSION_SECRET: sessionSecret() },
+  env: { NODE_ENV: 'production', ...process.env, SEED_DEMO: seedDemo, SESSION_SECRET: sessionSecret() },
 });
 for (const signal of ['SIGINT', 'SIGTERM']) process.on(signal, () => server.kill(signal));
 server.on('exit', (code) => process.exit(code ?? 0));

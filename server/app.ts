@@ -1,13 +1,13 @@
 import compression from 'compression';
 import express, { type Express } from 'express';
-import morgan from 'morgan';
 import type { AppConfig } from './config';
 import type { Database } from './db/database';
-import { consoleLogger, type Logger } from './logger';
+import { serverLogger, type Logger } from './logger';
 import { serveClient } from './middleware/clientStatic';
 import { csrfGuard } from './middleware/csrfGuard';
 import { apiNotFound, errorHandler } from './middleware/errorHandler';
 import { securityHeaders } from './middleware/securityHeaders';
+import { createAnalysisPool, type AnalysisPool } from './modules/analysis/pool';
 import { analysisRouter } from './modules/analysis/router';
 import { createPassport } from './modules/auth/passport';
 import { createPasswords, DEFAULT_PASSWORD_COST } from './modules/auth/passwords';
@@ -35,14 +35,18 @@ export interface AppDependencies {
   /** bcrypt cost for new password hashes (tests lower it). */
   passwordCost?: number;
   mailer?: Mailer;
+  /** Worker threads for POST /api/analysis (tests may pass a fake); default: a pool from config.analysis. */
+  analysisPool?: AnalysisPool;
 }
 
 const sessionStores = new WeakMap<Express, SessionStore>();
+const analysisPools = new WeakMap<Express, AnalysisPool>();
 
 /** Builds the whole HTTP application without listening, so tests can drive it on a temporary database. */
 export function createApp(deps: AppDependencies): Express {
   const { config, db } = deps;
-  const logger = deps.logger ?? consoleLogger;
+  const logger = deps.logger ?? serverLogger;
+  const analysisPool = deps.analysisPool ?? createAnalysisPool(config.analysis);
   const production = config.nodeEnv === 'production';
   const passwords = createPasswords(deps.passwordCost ?? DEFAULT_PASSWORD_COST);
   const auth = createAuthService(db, passwords);
@@ -51,6 +55,7 @@ export function createApp(deps: AppDependencies): Express {
 
   const app = express();
   sessionStores.set(app, store);
+  analysisPools.set(app, analysisPool);
   app.disable('x-powered-by');
   app.set('trust proxy', config.trustProxy);
   app.set('query parser', 'simple');
@@ -61,7 +66,17 @@ export function createApp(deps: AppDependencies): Express {
   const compressApi = compression({ level: 1 });
   const compressFiles = compression();
   app.use((req, res, next) => (req.path.startsWith('/api/') ? compressApi : compressFiles)(req, res, next));
-  if (config.logRequests) app.use(morgan(production ? 'combined' : 'dev'));
+  if (config.logRequests) {
+    // One structured line per request; the URL is a field, so nothing in it can rewrite the log.
+    app.use((req, res, next) => {
+      const started = process.hrtime.bigint();
+      res.on('finish', () => {
+        const ms = Number(process.hrtime.bigint() - started) / 1e6;
+        logger.info('Request', { method: req.method, url: req.originalUrl, status: res.statusCode, ms: Math.round(ms * 10) / 10 });
+      });
+      next();
+    });
+  }
 
   app.use('/api', express.json({ limit: '6mb' }));
   app.use('/api', (_req, res, next) => {
@@ -74,7 +89,7 @@ export function createApp(deps: AppDependencies): Express {
   app.use('/api/auth', authRouter({ auth, passport, signInLimiter: signInRateLimiter(deps.rateLimit ?? DEFAULT_SIGN_IN_RATE_LIMIT) }));
   app.use('/api/users', usersRouter(createUsersService(db, passwords)));
   app.use('/api/designs', designsRouter(createDesignsService(db)));
-  app.use('/api/analysis', analysisRouter());
+  app.use('/api/analysis', analysisRouter(analysisPool, config.analysis));
   app.use('/api', apiNotFound);
 
   if (production) serveClient(app, config.clientDist, logger);
@@ -83,7 +98,8 @@ export function createApp(deps: AppDependencies): Express {
   return app;
 }
 
-/** Stops the app's background timers (expired-session sweeps) before the database closes. */
-export function stopBackgroundWork(app: Express): void {
+/** Stops the app's background work (expired-session sweeps, analysis threads) before the database closes. */
+export function stopBackgroundWork(app: Express): Promise<void> {
   sessionStores.get(app)?.stopExpiringSessions();
+  return analysisPools.get(app)?.close() ?? Promise.resolve();
 }

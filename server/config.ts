@@ -1,7 +1,9 @@
 import { randomBytes } from 'node:crypto';
 import { mkdirSync } from 'node:fs';
+import { availableParallelism } from 'node:os';
 import { dirname, resolve } from 'node:path';
 import { z } from 'zod';
+import { DEFAULT_ANALYSIS_MAX_PARTS, DEFAULT_ANALYSIS_TIME_LIMIT_MS } from '../src/domain/checks/findingCap';
 
 /** Settings read once from the environment at start-up; everything else receives this object. */
 export interface AppConfig {
@@ -16,15 +18,39 @@ export interface AppConfig {
   /** Express "trust proxy" value: false, true, a hop count, or addresses/names. */
   trustProxy: boolean | number | string;
   logRequests: boolean;
-  /** Seed the demo shop when the database has no users yet. */
+  /** Seed the demo shop when the database has no users yet: only when asked (SEED_DEMO=1; `npm start` asks). */
   seedDemo: boolean;
+  /** Limits of POST /api/analysis, which runs in a pool of worker threads. */
+  analysis: AnalysisLimits;
 }
+
+export interface AnalysisLimits {
+  /** Parts (profiles + joints + panels + accessories) above which a document is refused with 413. */
+  maxParts: number;
+  /** Wall time after which the analysis is stopped and refused with 422, ms. */
+  timeLimitMs: number;
+  /** Worker threads analysing at once. */
+  threads: number;
+}
+
+export const DEFAULT_ANALYSIS_LIMITS: AnalysisLimits = {
+  maxParts: DEFAULT_ANALYSIS_MAX_PARTS,
+  timeLimitMs: DEFAULT_ANALYSIS_TIME_LIMIT_MS,
+  threads: Math.max(1, Math.min(4, availableParallelism())),
+};
 
 const booleanText = z
   .enum(['true', 'false', '1', '0', 'yes', 'no', ''], {
     error: 'Use true or false',
   })
   .transform((text) => text === 'true' || text === '1' || text === 'yes');
+
+const wholeNumber = (min: number, max: number) =>
+  z.coerce
+    .number({ error: `Use a whole number from ${min} to ${max}` })
+    .int(`Use a whole number from ${min} to ${max}`)
+    .min(min, `Use a whole number from ${min} to ${max}`)
+    .max(max, `Use a whole number from ${min} to ${max}`);
 
 const environmentSchema = z
   .object({
@@ -37,13 +63,17 @@ const environmentSchema = z
       .min(1, 'Use a whole number between 1 and 65535')
       .max(65535, 'Use a whole number between 1 and 65535')
       .default(3000),
-    HOST: z.string().min(1, 'Give a host name or address, e.g. 0.0.0.0').default('0.0.0.0'),
+    // Loopback unless told otherwise: a plain start is not reachable from other machines.
+    HOST: z.string().min(1, 'Give a host name or address, e.g. 127.0.0.1 or 0.0.0.0').default('127.0.0.1'),
     DATABASE_PATH: z.string().min(1, 'Give a file path for the SQLite database').default('data/slotwise.sqlite'),
     SESSION_SECRET: z.string().optional(),
     CLIENT_DIST: z.string().min(1, 'Give the folder of the built client').default('dist'),
     TRUST_PROXY: z.string().optional(),
     LOG_REQUESTS: booleanText.optional(),
     SEED_DEMO: booleanText.optional(),
+    ANALYSIS_MAX_PARTS: wholeNumber(1, 1_000_000).optional(),
+    ANALYSIS_TIME_LIMIT_MS: wholeNumber(100, 600_000).optional(),
+    ANALYSIS_THREADS: wholeNumber(1, 64).optional(),
   })
   .superRefine((env, ctx) => {
     if (env.NODE_ENV !== 'production') return;
@@ -108,6 +138,12 @@ export function loadConfig(
     clientDist: resolve(env.CLIENT_DIST),
     trustProxy: parseTrustProxy(env.TRUST_PROXY),
     logRequests: env.LOG_REQUESTS ?? env.NODE_ENV !== 'test',
-    seedDemo: env.SEED_DEMO ?? true,
+    // Tests and development get the demo shop; production only when asked.
+    seedDemo: env.SEED_DEMO ?? env.NODE_ENV !== 'production',
+    analysis: {
+      maxParts: env.ANALYSIS_MAX_PARTS ?? DEFAULT_ANALYSIS_LIMITS.maxParts,
+      timeLimitMs: env.ANALYSIS_TIME_LIMIT_MS ?? DEFAULT_ANALYSIS_LIMITS.timeLimitMs,
+      threads: env.ANALYSIS_THREADS ?? DEFAULT_ANALYSIS_LIMITS.threads,
+    },
   };
 }

@@ -5,7 +5,7 @@ import { ConfigError, loadConfig } from './config';
 import { openDatabase } from './db/database';
 import { runMigrations } from './db/migrate';
 import { seedDemo } from './seed';
-import { consoleLogger as logger } from './logger';
+import { serverLogger as logger } from './logger';
 
 async function start(): Promise<void> {
   const config = loadConfig(process.env, (message) => logger.warn(message));
@@ -35,7 +35,7 @@ async function start(): Promise<void> {
     const force = setTimeout(() => process.exit(1), 10_000);
     force.unref();
     server.close(async () => {
-      stopBackgroundWork(app);
+      await stopBackgroundWork(app).catch((error) => logger.error('Stopping the analysis threads failed', error));
       await db.close().catch((error) => logger.error('Closing the database failed', error));
       process.exit(0);
     });

@@ -1,4 +1,4 @@
-import { mkdirSync } from 'node:fs';
+import { chmodSync, closeSync, existsSync, mkdirSync, openSync } from 'node:fs';
 import { dirname } from 'node:path';
 import { Sequelize, Transaction, type Options } from 'sequelize';
 import { defineModels, type Models } from './models';
@@ -45,9 +45,21 @@ function setBusyTimeoutOnEveryConnection(sequelize: Sequelize): void {
   };
 }
 
-/** Opens (creating if needed) the SQLite file in WAL mode with foreign keys on. Does not migrate. */
+/** The database holds password hashes and sessions: only the server's own user may read it. */
+export const DATABASE_FILE_MODE = 0o600;
+
+/** Creates the file 0600 if missing and tightens an existing one (and its WAL and shared-memory files). */
+function restrictFileModes(path: string): void {
+  if (!existsSync(path)) closeSync(openSync(path, 'a', DATABASE_FILE_MODE));
+  for (const file of [path, `${path}-wal`, `${path}-shm`]) {
+    if (existsSync(file)) chmodSync(file, DATABASE_FILE_MODE);
+  }
+}
+
+/** Opens (creating if needed, mode 0600) the SQLite file in WAL mode with foreign keys on. Does not migrate. */
 export async function openDatabase(path: string): Promise<Database> {
   mkdirSync(dirname(path), { recursive: true });
+  restrictFileModes(path);
   const sequelize = new Sequelize({
     dialect: 'sqlite',
     storage: path,
@@ -60,6 +72,8 @@ export async function openDatabase(path: string): Promise<Database> {
   await sequelize.query('PRAGMA journal_mode = WAL');
   await sequelize.query(`PRAGMA busy_timeout = ${BUSY_TIMEOUT_MS}`);
   await sequelize.query('PRAGMA foreign_keys = ON');
+  // SQLite gives the -wal and -shm files the database file's mode; tighten any left by an older version.
+  restrictFileModes(path);
   const models = defineModels(sequelize);
   const queue = createWriteQueue();
   return {

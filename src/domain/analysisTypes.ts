@@ -231,7 +231,11 @@ export interface PanelCutItem {
 }
 
 export interface DesignAnalysis {
+  /** At most 200 per check (findingCap.ts); a closing `<check>:more` finding counts the rest. */
   findings: Finding[];
+  /** Findings found but not listed (absent when none were left out). */
+  omittedFindings?: number;
+  /** Every finding by severity, listed or not. */
   counts: { error: number; warning: number; note: number };
   bom: BomLine[];
   cutList: CutListItem[];

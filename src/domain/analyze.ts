@@ -8,6 +8,7 @@ import { defaultCatalogue } from './catalogue';
 import type { Catalogue } from './catalogue/types';
 import { indexCatalogue } from './checks/catalogueIndex';
 import { buildAnalysisContext, type AnalysisContext } from './checks/context';
+import { capFindings } from './checks/findingCap';
 import { interferenceFindings } from './checks/interferenceFindings';
 import { jointFindings } from './checks/jointFindings';
 import { panelFitFindings } from './checks/panelFitFindings';
@@ -50,14 +51,18 @@ export function analyzeDesign(design: DesignDocument, catalogue: Catalogue = def
   const ctx = createAnalysisContext(design, catalogue);
   lap('context');
 
+  // Appended one by one: spreading a huge list into push() overflows the call stack.
   const findings: Finding[] = [];
-  findings.push(...jointFindings(ctx));
+  const append = (list: readonly Finding[]) => {
+    for (const finding of list) findings.push(finding);
+  };
+  append(jointFindings(ctx));
   lap('joints');
-  findings.push(...panelFitFindings(ctx));
+  append(panelFitFindings(ctx));
   lap('panelFit');
-  findings.push(...interferenceFindings(ctx));
+  append(interferenceFindings(ctx));
   lap('interference');
-  findings.push(...sequenceFindings(ctx));
+  append(sequenceFindings(ctx));
   lap('sequence');
 
   const hardware = hardwareSummary(ctx);
@@ -73,15 +78,21 @@ export function analyzeDesign(design: DesignDocument, catalogue: Catalogue = def
   const cost = costSummary(ctx, bom, sheets);
   lap('toolsMassCost');
   const structure = structureAnalysis(ctx, { total: mass.total, centreOfMass: mass.centreOfMass });
-  findings.push(...structure.findings);
+  append(structure.findings);
   lap('structure');
 
   findings.sort((a, b) => SEVERITY_ORDER[a.severity] - SEVERITY_ORDER[b.severity] || (a.id < b.id ? -1 : a.id > b.id ? 1 : 0));
+  // Counts cover every finding, listed or not; the list is capped per check.
   const counts = { error: 0, warning: 0, note: 0 };
-  for (const f of findings) counts[f.severity] += 1;
+  for (const f of findings) {
+    const omitted = f.id === `${f.check}:more` ? Number(f.data?.omitted ?? 0) : 1;
+    counts[f.severity] += omitted;
+  }
+  const capped = capFindings(findings);
 
   return {
-    findings,
+    findings: capped.findings,
+    ...(capped.omitted > 0 ? { omittedFindings: capped.omitted } : {}),
     counts,
     bom,
     cutList: cuts.items,

@@ -5,7 +5,7 @@
  */
 import { readFileSync } from 'node:fs';
 import { pathToFileURL } from 'node:url';
-import Papa from 'papaparse';
+import { toCsv } from './outputs/csv';
 import { analyzeDesign } from './analyze';
 import type { DesignAnalysis } from './analysisTypes';
 import { parseDesignDocument } from './design/parse';
@@ -71,7 +71,7 @@ export function runCli(argv: string[], io: CliIo): number {
   if (format === 'json') {
     io.stdout(`${JSON.stringify(only ? sectionData(analysis, only) : analysis, null, 2)}\n`);
   } else {
-    io.stdout(`${Papa.unparse(sectionRows(analysis, only!), { newline: '\n' })}\n`);
+    io.stdout(`${toCsv(sectionRows(analysis, only!), { newline: '\n' })}\n`);
   }
   return 0;
 }

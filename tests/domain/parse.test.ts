@@ -71,7 +71,7 @@ describe('parseDesignDocument', () => {
   it('points at the field of a shape error with a dotted path', () => {
     const json = exampleFromDocs() as { profiles: { length: number }[] };
     json.profiles[2].length = -5;
-    expect(errorsOf(json)).toContainEqual({ path: 'profiles.2.length', message: 'Must be greater than 0 mm' });
+    expect(errorsOf(json)).toContainEqual({ path: 'profiles.2.length', message: 'Must be at least 0.01 mm' });
   });
 
   it('rejects an id used twice anywhere in the document', () => {

@@ -2,7 +2,16 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Role } from '../../server/db/models/user';
 import { createDesignsService } from '../../server/modules/designs/service';
 import { TINY_PNG_DATA_URL, sampleDocument } from './helpers/fixtures';
+import { routeTable } from './helpers/routeTable';
 import { buildTestApp, CLIENT, type Agent, type TestApp } from './helpers/testApp';
+
+/*
+ * How to add a row: every route the app serves needs one entry in MATRIX below, with the status
+ * each actor gets. `route` is written exactly as Express knows it ("/api/designs/:id"); a test
+ * walks the app's real route table, so a new route without a row (or a row without a route)
+ * fails the suite. When read-only links exist, add a 'link' actor with its own column.
+ * The client-only catch-all served in production ("GET /{*splat}") is not an API route.
+ */
 
 type Actor = Role | 'anonymous';
 const ACTORS: Actor[] = ['anonymous', 'owner', 'designer', 'builder', 'customer', 'instructor'];
@@ -41,6 +50,11 @@ const only = (allowed: Role[], status: number): Record<Actor, number> => ({
 // The allow/deny table: every route × every actor → expected status.
 const MATRIX: Row[] = [
   { method: 'get', route: '/api/health', path: () => '/api/health', expected: { anonymous: 200, owner: 200, designer: 200, builder: 200, customer: 200, instructor: 200 } },
+  {
+    method: 'post', route: '/api/auth/sign-in', path: () => '/api/auth/sign-in', fresh: true,
+    body: () => ({ email: 'builder@harborlane.example', password: 'slotwise-demo-2026' }),
+    expected: { anonymous: 200, owner: 200, designer: 200, builder: 200, customer: 200, instructor: 200 },
+  },
   { method: 'get', route: '/api/auth/me', path: () => '/api/auth/me', expected: signedIn(200) },
   { method: 'patch', route: '/api/auth/me', path: () => '/api/auth/me', body: () => ({}), expected: signedIn(200) },
   // A wrong current password: signed-in users reach the check (400), anonymous visitors do not.
@@ -89,6 +103,14 @@ describe('authorization matrix: every route against every role and an anonymous 
     for (const actor of ACTORS) agents.set(actor, actor === 'anonymous' ? t.anonymous() : await t.signIn(actor));
   });
   afterAll(() => ctx.t.close());
+
+  it('has exactly one row for every route in the app’s real route table', () => {
+    const served = routeTable(ctx.t.app).filter((route) => route.includes(' /api'));
+    const rows = MATRIX.map((row) => `${row.method.toUpperCase()} ${row.route}`).sort();
+    expect(new Set(rows).size, 'a route has two rows').toBe(rows.length);
+    expect(served.filter((route) => !rows.includes(route)), 'routes without a row in MATRIX').toEqual([]);
+    expect(rows.filter((route) => !served.includes(route)), 'rows for routes the app does not serve').toEqual([]);
+  });
 
   const cases = MATRIX.flatMap((row) => ACTORS.map((actor) => ({ row, actor, status: row.expected[actor] })));
 

@@ -12,7 +12,7 @@ describe('reading the environment', () => {
   it('fills in the defaults for development and creates the database folder', () => {
     const warnings: string[] = [];
     const config = loadConfig({ DATABASE_PATH: join(dir, 'made', 'here.sqlite') }, (message) => warnings.push(message));
-    expect(config).toMatchObject({ nodeEnv: 'development', port: 3000, host: '0.0.0.0', trustProxy: false, logRequests: true, seedDemo: true });
+    expect(config).toMatchObject({ nodeEnv: 'development', port: 3000, host: '127.0.0.1', trustProxy: false, logRequests: true, seedDemo: true });
     expect(config.sessionSecret).toMatch(/^[0-9a-f]{64}$/);
     expect(warnings.join(' ')).toMatch(/SESSION_SECRET is not set/);
     expect(existsSync(join(dir, 'made'))).toBe(true);

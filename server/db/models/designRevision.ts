@@ -10,6 +10,10 @@ export class DesignRevisionModel extends Model<InferAttributes<DesignRevisionMod
   declare thumbnail: CreationOptional<Buffer | null>;
   declare message: CreationOptional<string | null>;
   declare createdBy: number;
+  /** Counted from the document when it is saved (the list reads these, not the document). */
+  declare profileCount: CreationOptional<number>;
+  declare jointCount: CreationOptional<number>;
+  declare panelCount: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
 }
 
@@ -25,6 +29,9 @@ export function initDesignRevisionModel(sequelize: Sequelize): typeof DesignRevi
       thumbnail: { type: DataTypes.BLOB, allowNull: true },
       message: { type: DataTypes.STRING(500), allowNull: true },
       createdBy: { type: DataTypes.INTEGER, allowNull: false },
+      profileCount: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+      jointCount: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+      panelCount: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
       createdAt: DataTypes.DATE,
     },
     { sequelize, modelName: 'DesignRevision', tableName: 'design_revisions', underscored: true, updatedAt: false },

@@ -2,15 +2,20 @@ import type { DesignDocument } from '../../../src/domain/design/schema';
 import { checkDesignDocument } from '../../domainBridge';
 import { AppError } from '../../middleware/appError';
 
-/** The parsed document, or a 400 whose fields point into it ("document.profiles.0.length"). */
-export async function requireValidDocument(json: unknown, fieldPrefix = 'document'): Promise<DesignDocument> {
-  const result = checkDesignDocument(json);
-  if (result.ok) return result.design;
+/** A 400 whose fields point into the document ("document.profiles.0.length"). */
+export function documentErrorsToAppError(errors: { path: string; message: string }[], fieldPrefix = 'document'): AppError {
   const fields: Record<string, string> = {};
-  for (const error of result.errors) {
+  for (const error of errors) {
     const key = [fieldPrefix, error.path].filter(Boolean).join('.');
     if (!(key in fields)) fields[key] = error.message;
   }
   const [firstKey, firstMessage] = Object.entries(fields)[0] ?? [fieldPrefix, 'is not a valid design document'];
-  throw new AppError(400, 'invalid_document', `The design document has ${result.errors.length} problem${result.errors.length === 1 ? '' : 's'}, starting with ${firstKey}: ${firstMessage}.`, { fields });
+  return new AppError(400, 'invalid_document', `The design document has ${errors.length} problem${errors.length === 1 ? '' : 's'}, starting with ${firstKey}: ${firstMessage}.`, { fields });
+}
+
+/** The parsed document, or a 400 whose fields point into it ("document.profiles.0.length"). */
+export async function requireValidDocument(json: unknown, fieldPrefix = 'document'): Promise<DesignDocument> {
+  const result = checkDesignDocument(json);
+  if (result.ok) return result.design;
+  throw documentErrorsToAppError(result.errors, fieldPrefix);
 }

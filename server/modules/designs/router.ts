@@ -53,8 +53,8 @@ export function designsRouter(designs: DesignsService): Router {
       thumbnail: body.thumbnail,
       message: body.message || undefined,
     });
-    res.status(201);
-    sendRevisionJson(res, {}, revision.meta, revision.documentJson);
+    // The revision's details only: the client already holds the document it sent.
+    res.status(201).json({ revision: { ...revision.meta, profileCount: document.profiles.length } });
   });
 
   router.get('/:id/revisions/:number', validate({ params: revisionParamsSchema }), async (req, res) => {

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { lengthUnitSchema, systemIdSchema } from '../../../src/domain/contracts';
+import { unsafeTextReason, type SafeTextOptions } from '../../../src/domain/text/safeText';
 import { THUMBNAIL_MAX_BYTES, decodeThumbnail } from './thumbnail';
 
 
@@ -18,11 +19,18 @@ export const positiveWhole = (what: string) =>
 export const designIdParamsSchema = z.object({ id: positiveWhole('A design id') });
 export const revisionParamsSchema = z.object({ id: positiveWhole('A design id'), number: positiveWhole('A revision number') });
 
+/** Refuses control, invisible-only, direction-override and broken characters (src/domain/text/safeText.ts). */
+const safe = (options: SafeTextOptions = {}) => (text: string, ctx: z.RefinementCtx) => {
+  const reason = unsafeTextReason(text, options);
+  if (reason) ctx.addIssue({ code: 'custom', message: reason });
+};
+
 export const designNameSchema = z
   .string({ error: 'Enter a name for the design' })
   .trim()
   .min(1, 'Enter a name for the design')
-  .max(120, 'A design name is at most 120 characters');
+  .max(120, 'A design name is at most 120 characters')
+  .superRefine(safe());
 
 export const createDesignBodySchema = z.strictObject(
   {
@@ -52,7 +60,7 @@ export const saveRevisionBodySchema = z.strictObject(
     baseRevision: z.number({ error: 'baseRevision is the revision number this save started from' }).int('baseRevision is a whole number').positive('baseRevision is a whole number from 1'),
     document: z.unknown().refine((value) => value !== undefined, 'Send the design document'),
     thumbnail: thumbnailSchema.optional(),
-    message: z.string({ error: 'A message is text' }).trim().max(500, 'A message is at most 500 characters').optional(),
+    message: z.string({ error: 'A message is text' }).trim().max(500, 'A message is at most 500 characters').superRefine(safe({ multiline: true, allowEmpty: true })).optional(),
   },
   objectError,
 );

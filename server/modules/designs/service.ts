@@ -19,7 +19,7 @@ const SUMMARY_SELECT = `
   SELECT d.id AS id, d.name AS name, d.system_id AS systemId, d.latest_revision AS latestRevision,
          d.updated_at AS updatedAt, u.id AS updatedById, u.display_name AS updatedByName,
          (r.thumbnail IS NOT NULL) AS hasThumbnail,
-         CASE WHEN json_valid(r.document) THEN json_array_length(r.document, '$.profiles') END AS profileCount
+         r.profile_count AS profileCount
     FROM designs d
     JOIN design_revisions r ON r.design_id = d.id AND r.number = d.latest_revision
     JOIN users u ON u.id = r.created_by
@@ -34,6 +34,13 @@ export interface NewRevision {
   thumbnail?: Buffer;
   message?: string;
 }
+
+/** The counts stored beside a revision, so lists never parse documents. */
+const countsOf = (document: DesignDocument) => ({
+  profileCount: document.profiles.length,
+  jointCount: document.joints.length,
+  panelCount: document.panels.length,
+});
 
 export function createDesignsService(db: Database) {
   const { Design, DesignRevision } = db.models;
@@ -92,6 +99,7 @@ export function createDesignsService(db: Database) {
             designId: design.id,
             number: 1,
             document: JSON.stringify(document),
+            ...countsOf(document),
             thumbnail: extras.thumbnail ?? null,
             message: extras.message ?? null,
             createdBy: author.id,
@@ -127,6 +135,7 @@ export function createDesignsService(db: Database) {
             designId,
             number: next,
             document: documentJson,
+            ...countsOf(input.document),
             thumbnail: input.thumbnail ?? null,
             message: input.message ?? null,
             createdBy: author.id,

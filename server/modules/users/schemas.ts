@@ -1,5 +1,7 @@
 import { z } from 'zod';
 import { ROLES } from '../../../src/domain/contracts';
+import { unsafeTextReason } from '../../../src/domain/text/safeText';
+import { weakPasswordReason } from '../auth/passwordStrength';
 
 export const emailSchema = z
   .string({ error: 'Enter an email address' })
@@ -13,13 +15,23 @@ export const displayNameSchema = z
   .string({ error: 'Enter a name' })
   .trim()
   .min(1, 'Enter a name')
-  .max(80, 'A name is at most 80 characters');
+  .max(80, 'A name is at most 80 characters')
+  .superRefine((name, ctx) => {
+    const reason = unsafeTextReason(name);
+    if (reason) ctx.addIssue({ code: 'custom', message: reason });
+  });
 
 /** bcrypt reads only the first 72 bytes, so longer passwords are refused rather than silently cut. */
 export const newPasswordSchema = z
   .string({ error: 'Enter a password' })
   .min(10, 'Use at least 10 characters')
-  .refine((password) => Buffer.byteLength(password, 'utf8') <= 72, 'Use at most 72 bytes (about 72 plain letters)');
+  .refine((password) => Buffer.byteLength(password, 'utf8') <= 72, 'Use at most 72 bytes (about 72 plain letters)')
+  // Common, repeated and sequential passwords are refused with the estimator's reason.
+  .superRefine((password, ctx) => {
+    if (password.length < 10) return;
+    const reason = weakPasswordReason(password);
+    if (reason) ctx.addIssue({ code: 'custom', message: reason });
+  });
 
 export const roleSchema = z.enum(ROLES, { error: `Choose one of: ${ROLES.join(', ')}` });
 

@@ -49,3 +49,27 @@ export function profilesAtPoint(ctx: AnalysisContext, p: ReadonlyVec3, margin: n
   );
   return out;
 }
+
+/** The first other profile whose box contains point `p` (within `margin` mm) and passes `accept`, or undefined. */
+export function firstProfileAtPoint(
+  ctx: AnalysisContext,
+  p: ReadonlyVec3,
+  margin: number,
+  exceptIndex: number,
+  accept: (info: ProfileInfo) => boolean,
+): ProfileInfo | undefined {
+  let found: ProfileInfo | undefined;
+  const probe: Box = { minX: p[0], minY: p[1], minZ: p[2], maxX: p[0], maxY: p[1], maxZ: p[2] };
+  ctx.profileGrid.forEachNear(
+    probe,
+    (i) => {
+      if (i === exceptIndex) return false;
+      const info = ctx.profiles[i];
+      if (distancePointToBox(p, info.box) > margin || !accept(info)) return false;
+      found = info;
+      return true;
+    },
+    margin,
+  );
+  return found;
+}

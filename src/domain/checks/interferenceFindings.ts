@@ -9,6 +9,7 @@ import { boxPenetration, type Box } from '../geometry/box';
 import { UniformGrid } from '../geometry/spatialGrid';
 import { INTERFERENCE_TOLERANCE_MM, areJoined, type AnalysisContext } from './context';
 import { findingId, mm, profileName } from './describe';
+import { MAX_COUNTED_FINDINGS, MAX_FINDINGS_PER_CHECK, moreFindingsFinding } from './findingCap';
 
 const CHECK = 'interference';
 
@@ -34,9 +35,19 @@ function isContact(ctx: AnalysisContext, a: Solid, b: Solid): boolean {
   return false;
 }
 
-function narrowPhase(ctx: AnalysisContext, a: Solid, b: Solid, out: Finding[]): void {
+/** Overlaps found beyond the cap: counted, with no message built (2,000 stacked profiles make 2 million). */
+interface Overflow {
+  omitted: number;
+}
+
+/** Returns true when counting should stop (enough unlisted overlaps to say "at least"). */
+function narrowPhase(ctx: AnalysisContext, a: Solid, b: Solid, out: Finding[], overflow: Overflow): boolean {
   const depth = boxPenetration(a.box, b.box);
-  if (depth <= INTERFERENCE_TOLERANCE_MM || isContact(ctx, a, b)) return;
+  if (depth <= INTERFERENCE_TOLERANCE_MM || isContact(ctx, a, b)) return false;
+  if (out.length >= MAX_FINDINGS_PER_CHECK) {
+    overflow.omitted += 1;
+    return overflow.omitted >= MAX_COUNTED_FINDINGS;
+  }
   const [first, second] = a.id < b.id ? [a, b] : [b, a];
   out.push({
     id: findingId(CHECK, 'overlap', [first.id, second.id]),
@@ -46,6 +57,7 @@ function narrowPhase(ctx: AnalysisContext, a: Solid, b: Solid, out: Finding[]): 
     message: `${describe(ctx, first)} and ${describe(ctx, second)} overlap by ${mm(depth)}. Move one of them or shorten it.`,
     data: { overlapMm: Math.round(depth * 100) / 100 },
   });
+  return false;
 }
 
 function describe(ctx: AnalysisContext, s: Solid): string {
@@ -54,30 +66,34 @@ function describe(ctx: AnalysisContext, s: Solid): string {
   return text.charAt(0).toUpperCase() + text.slice(1);
 }
 
-function sortFindings(out: Finding[]): Finding[] {
-  return out.sort((x, y) => (x.id < y.id ? -1 : x.id > y.id ? 1 : 0));
+function sortFindings(out: Finding[], overflow: Overflow): Finding[] {
+  out.sort((x, y) => (x.id < y.id ? -1 : x.id > y.id ? 1 : 0));
+  if (overflow.omitted > 0) out.push(moreFindingsFinding(CHECK, 'error', overflow.omitted, overflow.omitted >= MAX_COUNTED_FINDINGS));
+  return out;
 }
 
 /** Grid broad phase: O(n) for frames whose parts are spread out, as T-slot frames are. */
 export function interferenceFindings(ctx: AnalysisContext): Finding[] {
   const solids = solidsOf(ctx);
   const out: Finding[] = [];
+  const overflow: Overflow = { omitted: 0 };
   // The shared profile grid covers profile-profile pairs; a second grid adds the panels.
   if (ctx.panels.length === 0) {
-    ctx.profileGrid.forEachNearPair((i, j) => narrowPhase(ctx, solids[i], solids[j], out));
+    ctx.profileGrid.forEachNearPair((i, j) => narrowPhase(ctx, solids[i], solids[j], out, overflow));
   } else {
     const grid = new UniformGrid(solids.map((s) => s.box));
-    grid.forEachNearPair((i, j) => narrowPhase(ctx, solids[i], solids[j], out));
+    grid.forEachNearPair((i, j) => narrowPhase(ctx, solids[i], solids[j], out, overflow));
   }
-  return sortFindings(out);
+  return sortFindings(out, overflow);
 }
 
 /** Reference check over all pairs, O(n²): for tests and the benchmark only. */
 export function interferenceFindingsAllPairs(ctx: AnalysisContext): Finding[] {
   const solids = solidsOf(ctx);
   const out: Finding[] = [];
+  const overflow: Overflow = { omitted: 0 };
   for (let i = 0; i < solids.length; i++) {
-    for (let j = i + 1; j < solids.length; j++) narrowPhase(ctx, solids[i], solids[j], out);
+    for (let j = i + 1; j < solids.length; j++) if (narrowPhase(ctx, solids[i], solids[j], out, overflow)) return sortFindings(out, overflow);
   }
-  return sortFindings(out);
+  return sortFindings(out, overflow);
 }

@@ -11,7 +11,7 @@ import { sectionHalfExtentAlong } from '../geometry/profileGeometry';
 import { scale } from '../geometry/vectors';
 import { CONTACT_TOLERANCE_MM, accessoriesAt, areJoined, jointsAt, memberEnd, memberPoint, type AnalysisContext, type ProfileInfo } from './context';
 import { capitalise, endPhrase, findingId, mm, profileName } from './describe';
-import { distancePointToBox, faceFacing, pointOffFace, profilesAtPoint, projectAlong } from './geometryQueries';
+import { distancePointToBox, faceFacing, firstProfileAtPoint, pointOffFace, projectAlong } from './geometryQueries';
 import { addEndCapFix, addMachiningFix } from './fixes';
 
 const CHECK = 'joints';
@@ -218,11 +218,9 @@ function checkProfileEnds(ctx: AnalysisContext, out: Finding[]): void {
         continue;
       }
       const point = end === 'start' ? info.startPoint : info.endPoint;
-      const touching = profilesAtPoint(ctx, point, CONTACT_TOLERANCE_MM, info.index).filter(
-        (other) => !areJoined(ctx, info.profile.id, other.profile.id),
-      );
-      if (touching.length > 0) {
-        const other = touching[0];
+      // The first unjoined neighbour is enough (and stays cheap when many profiles share the point).
+      const other = firstProfileAtPoint(ctx, point, CONTACT_TOLERANCE_MM, info.index, (candidate) => !areJoined(ctx, info.profile.id, candidate.profile.id));
+      if (other) {
         out.push({
           id: findingId(CHECK, 'touching-unjoined', [info.profile.id, end, other.profile.id]),
           check: CHECK,
@@ -319,9 +317,8 @@ function checkAccessHolesUncovered(ctx: AnalysisContext, out: Finding[]): void {
     for (const m of info.profile.machining) {
       if (m.kind !== 'access-counterbore' && m.kind !== 'access-hole') continue;
       const probe = pointOffFace(info, m.face, machiningAlong(info, m), COVER_PROBE_MM);
-      const covering = profilesAtPoint(ctx, probe, 0, info.index);
-      if (covering.length === 0) continue;
-      const other = covering[0];
+      const other = firstProfileAtPoint(ctx, probe, 0, info.index, () => true);
+      if (!other) continue;
       out.push({
         id: findingId(CHECK, 'access-covered', [info.profile.id, m.id]),
         check: CHECK,

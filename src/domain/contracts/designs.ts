@@ -29,6 +29,9 @@ export const revisionMetaSchema = z.object({
   thumbnailUrl: z.string().nullable(),
 });
 export type RevisionMeta = z.infer<typeof revisionMetaSchema>;
+/** What a save answers: the new revision's details, without the document the client sent. */
+export const savedRevisionSchema = revisionMetaSchema.extend({ profileCount: z.number() });
+export type SavedRevision = z.infer<typeof savedRevisionSchema>;
 
 export const designsListResponseSchema = z.object({ designs: z.array(designSummarySchema) });
 export type DesignsListResponse = z.infer<typeof designsListResponseSchema>;

@@ -11,6 +11,7 @@ import {
 
 // The kinds of parts are the catalogue's words; the design document refers to them.
 export { accessoryKindSchema, jointKindSchema, machiningKindSchema, type AccessoryKind, type JointKind, type MachiningKind };
+import { unsafeTextReason, type SafeTextOptions } from '../text/safeText';
 
 /**
  * The Slotwise design document, version 1.
@@ -33,12 +34,63 @@ const id = z
   .max(64, 'An id is at most 64 characters')
   .regex(/^[A-Za-z0-9_.:-]+$/, 'An id may use letters, digits and _ . : - only');
 
-// z.number() itself refuses NaN and ±Infinity (zod 4), so no finiteness refine is needed per number.
+/**
+ * Bounds of a design document (docs/design-format.md, "Limits"). They keep every number a real
+ * frame could have and refuse the absurd ones (1e300 mm, 1e-300 mm) that would overflow the
+ * analysis or make grid walks run for minutes. Lengths in mm, forces in N.
+ */
+export const DESIGN_LIMITS = {
+  /** Longest profile, panel side, offset or stock bar, mm (20 m). */
+  maxLengthMm: 20_000,
+  /** Smallest length, thickness or diameter, mm. */
+  minLengthMm: 0.01,
+  /** Every coordinate lies within ±100 m of the origin, mm. */
+  maxCoordinateMm: 100_000,
+  /** Largest single load, N (1 MN). */
+  maxForceN: 1_000_000,
+  maxProfiles: 10_000,
+  maxJoints: 40_000,
+  maxPanels: 5_000,
+  maxAccessories: 40_000,
+  maxSubAssemblies: 1_000,
+  maxSteps: 10_000,
+  maxLoadCases: 100,
+  maxLoadsPerCase: 500,
+  maxMachiningPerProfile: 100,
+  maxCutoutsPerPanel: 200,
+} as const;
+
+const L = DESIGN_LIMITS;
+const thousands = (n: number) => n.toLocaleString('en-US');
+
+// z.number() itself refuses NaN and ±Infinity (zod 4); the bounds below keep numbers sane as well.
 const finite = z.number();
-const positiveMm = finite.refine((v) => v > 0, 'Must be greater than 0 mm');
-const nonNegativeMm = finite.refine((v) => v >= 0, 'Cannot be negative');
+const positiveMm = finite
+  .min(L.minLengthMm, `Must be at least ${L.minLengthMm} mm`)
+  .max(L.maxLengthMm, `Must be at most ${thousands(L.maxLengthMm)} mm (20 m)`);
+const nonNegativeMm = finite.min(0, 'Cannot be negative').max(L.maxLengthMm, `Must be at most ${thousands(L.maxLengthMm)} mm (20 m)`);
+const coordinateMm = finite
+  .min(-L.maxCoordinateMm, `Must be within ±${thousands(L.maxCoordinateMm)} mm (100 m) of the origin`)
+  .max(L.maxCoordinateMm, `Must be within ±${thousands(L.maxCoordinateMm)} mm (100 m) of the origin`);
+const offsetMm = finite
+  .min(-L.maxLengthMm, `Must be within ±${thousands(L.maxLengthMm)} mm`)
+  .max(L.maxLengthMm, `Must be within ±${thousands(L.maxLengthMm)} mm`);
+const forceN = finite.gt(0, 'Must be greater than 0 N').max(L.maxForceN, `Must be at most ${thousands(L.maxForceN)} N`);
+const list = <T extends z.ZodType>(item: T, max: number, what: string) => z.array(item).max(max, `At most ${thousands(max)} ${what}`);
+
+/** Text shown to people: no control, invisible-only, direction-override or broken characters (see safeText.ts). */
+const safeText = (max: number, options: SafeTextOptions = {}) =>
+  z
+    .string()
+    .max(max, `At most ${max} characters`)
+    .superRefine((text, ctx) => {
+      const reason = unsafeTextReason(text, options);
+      if (reason) ctx.addIssue({ code: 'custom', message: reason });
+    });
 
 export const vec3Schema = z.tuple([finite, finite, finite]);
+/** A point in space, mm, within ±100 m of the origin. */
+export const pointSchema = z.tuple([coordinateMm, coordinateMm, coordinateMm]);
 export type Vec3 = z.infer<typeof vec3Schema>;
 
 export const unitVectorSchema = vec3Schema.refine(
@@ -71,11 +123,11 @@ export const profileSchema = z.object({
   /** Catalogue profile variant, e.g. "m40-40x40" (see catalogue). */
   variantId: id,
   length: positiveMm,
-  start: vec3Schema,
+  start: pointSchema,
   direction: unitVectorSchema,
-  rollDeg: finite.default(0),
-  label: z.string().max(80).optional(),
-  machining: z.array(machiningSchema).default([]),
+  rollDeg: finite.min(-360, 'Use a roll between -360° and 360°').max(360, 'Use a roll between -360° and 360°').default(0),
+  label: safeText(80).optional(),
+  machining: list(machiningSchema, L.maxMachiningPerProfile, 'machining operations per profile').default([]),
 });
 export type Profile = z.infer<typeof profileSchema>;
 
@@ -113,8 +165,8 @@ export const cutoutSchema = z.object({
   id,
   kind: z.enum(['round']),
   /** Centre offset from the panel centre along the panel's width (u) and height (v), mm. */
-  u: finite,
-  v: finite,
+  u: offsetMm,
+  v: offsetMm,
   diameter: positiveMm,
 });
 export type Cutout = z.infer<typeof cutoutSchema>;
@@ -134,13 +186,13 @@ export const panelSchema = z.object({
    * x, y, z order, height along the second.
    */
   rect: z.object({
-    center: vec3Schema,
+    center: pointSchema,
     normal: axisSchema,
     width: positiveMm,
     height: positiveMm,
   }),
-  cutouts: z.array(cutoutSchema).default([]),
-  label: z.string().max(80).optional(),
+  cutouts: list(cutoutSchema, L.maxCutoutsPerPanel, 'cut-outs per panel').default([]),
+  label: safeText(80).optional(),
 });
 export type Panel = z.infer<typeof panelSchema>;
 
@@ -165,7 +217,7 @@ export const buildOrientationSchema = z.enum(['as-placed', 'lying-on-back', 'ups
 
 export const subAssemblySchema = z.object({
   id,
-  name: z.string().min(1).max(80),
+  name: safeText(80),
   profileIds: z.array(id).default([]),
   panelIds: z.array(id).default([]),
   buildOrientation: buildOrientationSchema.default('as-placed'),
@@ -176,12 +228,12 @@ export type SubAssembly = z.infer<typeof subAssemblySchema>;
 
 export const assemblyStepSchema = z.object({
   id,
-  title: z.string().min(1).max(120),
+  title: safeText(120),
   /** Ids of profiles, joints, panels or accessories placed in this step. */
   partIds: z.array(id).default([]),
   subAssemblyId: id.optional(),
   insertionDirection: unitVectorSchema.optional(),
-  notes: z.string().max(2000).optional(),
+  notes: safeText(2000, { multiline: true, allowEmpty: true }).optional(),
 });
 export type AssemblyStep = z.infer<typeof assemblyStepSchema>;
 
@@ -192,7 +244,7 @@ export const loadSchema = z.discriminatedUnion('kind', [
     /** Distance from the profile start, mm. */
     along: nonNegativeMm,
     /** Force, newtons (positive, acting along `direction`). */
-    force: positiveMm,
+    force: forceN,
     direction: unitVectorSchema.default([0, -1, 0]),
   }),
   z.object({
@@ -201,15 +253,15 @@ export const loadSchema = z.discriminatedUnion('kind', [
     panelId: id.optional(),
     profileId: id.optional(),
     /** Total force, newtons, spread evenly. */
-    totalForce: positiveMm,
+    totalForce: forceN,
   }),
 ]);
 export type Load = z.infer<typeof loadSchema>;
 
 export const loadCaseSchema = z.object({
   id,
-  name: z.string().min(1).max(80),
-  loads: z.array(loadSchema).default([]),
+  name: safeText(80),
+  loads: list(loadSchema, L.maxLoadsPerCase, 'loads per load case').default([]),
   /** Beam end condition: simply supported is the conservative default. */
   support: z.enum(['simple', 'fixed']).default('simple'),
   /** Tip-over: horizontal push at this height above the floor, mm. */
@@ -226,32 +278,32 @@ export const designSettingsSchema = z.object({
   /** Clearance subtracted from a captured panel's size, total per direction, mm. */
   panelClearance: nonNegativeMm.default(1),
   cutTolerance: nonNegativeMm.default(0.5),
-  safetyFactor: finite.refine((v) => v >= 1, 'A safety factor is at least 1').default(2),
-  deflectionLimitRatio: finite.refine((v) => v > 0, 'Must be positive').default(360),
+  safetyFactor: finite.min(1, 'A safety factor is at least 1').max(100, 'A safety factor is at most 100').default(2),
+  deflectionLimitRatio: finite.gt(0, 'Must be positive').max(100_000, 'Use a ratio of at most 100,000').default(360),
 });
 export type DesignSettings = z.infer<typeof designSettingsSchema>;
 
 export const designDocumentSchema = z.object({
   schemaVersion: z.literal(CURRENT_SCHEMA_VERSION),
-  name: z.string().trim().min(1, 'A design needs a name').max(120),
+  name: z.string().trim().min(1, 'A design needs a name').pipe(safeText(120)),
   units: z.enum(LENGTH_UNITS).default('mm'),
   /** The profile system new profiles use by default, e.g. "metric-40". */
   systemId: id,
   metadata: z
     .object({
-      description: z.string().max(4000).optional(),
-      customer: z.string().max(200).optional(),
-      tags: z.array(z.string().max(40)).max(20).optional(),
+      description: safeText(4000, { multiline: true, allowEmpty: true }).optional(),
+      customer: safeText(200, { allowEmpty: true }).optional(),
+      tags: z.array(safeText(40)).max(20).optional(),
     })
     .default({}),
   settings: designSettingsSchema.default(designSettingsSchema.parse({})),
-  profiles: z.array(profileSchema).default([]),
-  joints: z.array(jointSchema).default([]),
-  panels: z.array(panelSchema).default([]),
-  accessories: z.array(accessorySchema).default([]),
-  subAssemblies: z.array(subAssemblySchema).default([]),
-  steps: z.array(assemblyStepSchema).default([]),
-  loadCases: z.array(loadCaseSchema).default([]),
+  profiles: list(profileSchema, L.maxProfiles, 'profiles').default([]),
+  joints: list(jointSchema, L.maxJoints, 'joints').default([]),
+  panels: list(panelSchema, L.maxPanels, 'panels').default([]),
+  accessories: list(accessorySchema, L.maxAccessories, 'accessories').default([]),
+  subAssemblies: list(subAssemblySchema, L.maxSubAssemblies, 'sub-assemblies').default([]),
+  steps: list(assemblyStepSchema, L.maxSteps, 'assembly steps').default([]),
+  loadCases: list(loadCaseSchema, L.maxLoadCases, 'load cases').default([]),
 });
 export type DesignDocument = z.infer<typeof designDocumentSchema>;
 /** The document as written by hand or by an older client: defaults not yet filled in. */

@@ -72,8 +72,11 @@ export class UniformGrid {
     for (let i = 0; i < boxes.length; i++) this.insert(i);
   }
 
-  /** Calls `visit(i, j)` with i < j once for every pair whose (margin-grown) boxes overlap. */
-  forEachNearPair(visit: (i: number, j: number) => void): void {
+  /**
+   * Calls `visit(i, j)` with i < j once for every pair whose (margin-grown) boxes overlap; stops
+   * when `visit` returns true.
+   */
+  forEachNearPair(visit: (i: number, j: number) => unknown): void {
     const s = this.cellSize;
     const m = this.margin;
     for (const [key, items] of this.cells) {
@@ -97,15 +100,17 @@ export class UniformGrid {
           if (oy !== cy) continue;
           const oz = Math.floor((Math.max(bi.minZ, bj.minZ) - m - this.originZ) / s);
           if (oz !== cz) continue;
-          if (i < j) visit(i, j);
-          else visit(j, i);
+          if ((i < j ? visit(i, j) : visit(j, i)) === true) return;
         }
       }
     }
   }
 
-  /** Calls `visit(i)` once for each indexed box within `margin` (+ the grid margin) of `query`. */
-  forEachNear(query: Box, visit: (i: number) => void, margin = 0): void {
+  /**
+   * Calls `visit(i)` once for each indexed box within `margin` (+ the grid margin) of `query`;
+   * stops early when `visit` returns true (a first-match search stays O(1) among stacked boxes).
+   */
+  forEachNear(query: Box, visit: (i: number) => unknown, margin = 0): void {
     const stamp = ++this.stamp;
     const s = this.cellSize;
     const m = this.margin + margin;
@@ -127,7 +132,7 @@ export class UniformGrid {
             if (b.minX > query.maxX + m || query.minX > b.maxX + m) continue;
             if (b.minY > query.maxY + m || query.minY > b.maxY + m) continue;
             if (b.minZ > query.maxZ + m || query.minZ > b.maxZ + m) continue;
-            visit(i);
+            if (visit(i) === true) return;
           }
         }
       }

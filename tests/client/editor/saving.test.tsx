@@ -69,7 +69,8 @@ function serve(handler: (method: string, url: string, body: unknown) => Response
 
 describe('saving a design', () => {
   it('posts the design with the revision it was based on and marks it saved', async () => {
-    serve((_method, _url, body) => json(201, { revision: { number: 2, document: (body as { document: unknown }).document, createdAt: new Date().toISOString(), createdBy: person, message: null, thumbnailUrl: null } }));
+    // The save answer carries the revision's details, not the document (docs/api.md).
+    serve(() => json(201, { revision: { number: 2, createdAt: new Date().toISOString(), createdBy: person, message: null, thumbnailUrl: null, profileCount: 2 } }));
     const store = setup();
     await userEvent.click(screen.getByRole('button', { name: 'Save now' }));
     await waitFor(() => expect(store.getState().dirty).toBe(false));

@@ -10,7 +10,8 @@ export function sampleDocument(name = 'Test frame', profileCount = 4): DesignDoc
     id: `p${index + 1}`,
     variantId: 'm40-40x40',
     length: 500,
-    start: [0, 0, index * 100] as [number, number, number],
+    // Rows of 1,000 so large samples stay within the ±100 m coordinate bound.
+    start: [0, Math.floor(index / 1000) * 100, (index % 1000) * 100] as [number, number, number],
     direction: [1, 0, 0] as [number, number, number],
   }));
   return designDocumentSchema.parse({ schemaVersion: CURRENT_SCHEMA_VERSION, name, systemId: 'metric-40', units: 'mm', profiles });

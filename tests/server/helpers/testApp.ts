@@ -10,6 +10,8 @@ import { runMigrations } from '../../../server/db/migrate';
 import { DEMO_ACCOUNTS, DEMO_PASSWORD, seedDemo } from '../../../server/seed';
 import type { Role } from '../../../server/db/models/user';
 import type { Logger } from '../../../server/logger';
+import type { AnalysisPool } from '../../../server/modules/analysis/pool';
+import type { SignInRateLimit } from '../../../server/modules/auth/signInRateLimit';
 
 /** The header every state-changing API call from the Slotwise client carries. */
 export const CLIENT = { 'X-Slotwise-Client': '1' } as const;
@@ -34,10 +36,15 @@ export interface TestApp {
 }
 
 export interface TestAppOptions {
-  rateLimit?: { signInMax: number; windowMs: number };
+  rateLimit?: SignInRateLimit;
   nodeEnv?: 'test' | 'production';
   clientDist?: string;
   seed?: boolean;
+  /** Extra environment variables for loadConfig (ANALYSIS_TIME_LIMIT_MS, …). */
+  env?: Record<string, string>;
+  /** Replaces the recording logger. */
+  logger?: Logger;
+  analysisPool?: AnalysisPool;
 }
 
 export const demoEmail = (role: Role) => DEMO_ACCOUNTS.find((account) => account.role === role)!.email;
@@ -52,6 +59,7 @@ export async function buildTestApp(options: TestAppOptions = {}): Promise<TestAp
       SESSION_SECRET: 'test-session-secret-that-is-long-enough-0123456789',
       CLIENT_DIST: options.clientDist ?? join(dir, 'no-client'),
       LOG_REQUESTS: 'false',
+      ...options.env,
     },
     () => undefined,
   );
@@ -60,11 +68,12 @@ export async function buildTestApp(options: TestAppOptions = {}): Promise<TestAp
   if (options.seed !== false) await seedDemo(db, { passwordCost: TEST_PASSWORD_COST });
 
   const loggedErrors: unknown[] = [];
-  const logger: Logger = { info() {}, warn() {}, error: (_message, details) => void loggedErrors.push(details) };
+  const logger: Logger = options.logger ?? { info() {}, warn() {}, error: (_message, details) => void loggedErrors.push(details) };
   const app = createApp({
     config,
     db,
     logger,
+    analysisPool: options.analysisPool,
     passwordCost: TEST_PASSWORD_COST,
     rateLimit: options.rateLimit ?? { signInMax: 1000, windowMs: 60_000 },
   });
@@ -90,7 +99,7 @@ export async function buildTestApp(options: TestAppOptions = {}): Promise<TestAp
       return user!.id;
     },
     async close() {
-      stopBackgroundWork(app);
+      await stopBackgroundWork(app);
       await db.close();
       rmSync(dir, { recursive: true, force: true });
     },
@@ -105,6 +114,12 @@ export async function rowCounts(db: Database): Promise<Record<string, number>> {
     counts[table] = (rows as { n: number }[])[0].n;
   }
   return counts;
+}
+
+/** Row counts of every table and a SHA-256 of every row of the data tables: "nothing changed" in one value. */
+export async function dataFingerprint(db: Database): Promise<{ counts: Record<string, number>; checksum: string }> {
+  const { createHash } = await import('node:crypto');
+  return { counts: await rowCounts(db), checksum: createHash('sha256').update(await dataSnapshot(db)).digest('hex') };
 }
 
 /** Every row of the shop's data tables, for "nothing changed" checks. */

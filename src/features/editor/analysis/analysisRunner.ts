@@ -1,4 +1,5 @@
 import { analyzeDesign } from '@/domain/analyze';
+import { DEFAULT_ANALYSIS_TIME_LIMIT_MS } from '@/domain/checks/findingCap';
 import type { DesignDocument } from '@/domain/design/schema';
 import type { EditorStoreApi } from '../store/types';
 import type { AnalysisRequest, AnalysisResponse } from './messages';
@@ -11,6 +12,8 @@ export interface AnalysisRunnerOptions {
   debounceMs?: number;
   /** How to start the worker; `null` forces the main thread (tests, or no Worker support). */
   createWorker?: WorkerFactory | null;
+  /** A worker still busy after this long is stopped and the analysis reported failed, ms (the server's default). */
+  timeLimitMs?: number;
 }
 
 const defaultWorkerFactory: WorkerFactory = () =>
@@ -24,6 +27,12 @@ const defaultWorkerFactory: WorkerFactory = () =>
  */
 export function startAnalysisRunner(store: EditorStoreApi, options: AnalysisRunnerOptions = {}): () => void {
   const debounceMs = options.debounceMs ?? ANALYSIS_DEBOUNCE_MS;
+  const timeLimitMs = options.timeLimitMs ?? DEFAULT_ANALYSIS_TIME_LIMIT_MS * 2;
+  let deadline: ReturnType<typeof setTimeout> | null = null;
+  const clearDeadline = () => {
+    if (deadline) clearTimeout(deadline);
+    deadline = null;
+  };
   const factory = options.createWorker === undefined ? (typeof Worker === 'undefined' ? null : defaultWorkerFactory) : options.createWorker;
 
   let worker: Worker | null = null;
@@ -69,11 +78,13 @@ export function startAnalysisRunner(store: EditorStoreApi, options: AnalysisRunn
     worker.onmessage = (event: MessageEvent<AnalysisResponse>) => {
       const request = inFlight;
       if (!request || request.requestId !== event.data.requestId) return;
+      clearDeadline();
       inFlight = null;
       finish(request.design, event.data);
     };
     worker.onerror = () => {
       // The worker could not start or crashed: finish this and later requests on the main thread.
+      clearDeadline();
       const request = inFlight;
       inFlight = null;
       worker?.terminate();
@@ -101,6 +112,17 @@ export function startAnalysisRunner(store: EditorStoreApi, options: AnalysisRunn
     inFlight = { requestId, design };
     const message: AnalysisRequest = { requestId, design };
     target.postMessage(message);
+    // Past the time limit the worker is stopped (never retried on the main thread, which would freeze the tab).
+    clearDeadline();
+    deadline = setTimeout(() => {
+      deadline = null;
+      if (!inFlight || inFlight.requestId !== requestId) return;
+      inFlight = null;
+      worker?.terminate();
+      worker = null;
+      if (!stopped) store.getState().setAnalysisFailed();
+      if (!stopped && design !== wanted()) schedule(0);
+    }, timeLimitMs);
   };
 
   function schedule(delay: number) {
@@ -118,6 +140,7 @@ export function startAnalysisRunner(store: EditorStoreApi, options: AnalysisRunn
     stopped = true;
     unsubscribe();
     if (timer) clearTimeout(timer);
+    clearDeadline();
     worker?.terminate();
     worker = null;
   };

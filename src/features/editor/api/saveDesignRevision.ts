@@ -3,7 +3,7 @@ import { z } from 'zod';
 import type { DesignDocument } from '@/domain/design/schema';
 import { apiFetch } from '@/lib/apiClient';
 import { editorKeys } from './editorKeys';
-import { editorRevisionSchema, type EditorDesignDetail, type EditorRevision } from './schemas';
+import { savedRevisionSchema, type EditorDesignDetail, type EditorRevision } from './schemas';
 
 export interface SaveDesignRevisionInput {
   designId: number;
@@ -15,12 +15,15 @@ export interface SaveDesignRevisionInput {
   message?: string;
 }
 
-const saveResponseSchema = z.object({ revision: editorRevisionSchema });
+const saveResponseSchema = z.object({ revision: savedRevisionSchema });
 
-/** POST /api/designs/:id/revisions — every save is a new revision. */
+/**
+ * POST /api/designs/:id/revisions — every save is a new revision. The server answers with the
+ * revision's details only; the document is the one just sent.
+ */
 export async function saveDesignRevision({ designId, ...body }: SaveDesignRevisionInput): Promise<EditorRevision> {
   const { revision } = await apiFetch(`/api/designs/${designId}/revisions`, { method: 'POST', body, schema: saveResponseSchema });
-  return revision;
+  return { number: revision.number, createdAt: revision.createdAt, createdBy: revision.createdBy, message: revision.message, thumbnailUrl: revision.thumbnailUrl, document: body.document };
 }
 
 /** Saves and moves the cached design to the new revision; the designs list refreshes its "updated" line. */

@@ -9,5 +9,7 @@ export const editorDesignSummarySchema = designSummarySchema;
 export const editorRevisionSchema = revisionMetaSchema.extend({ document: designDocumentSchema });
 export type EditorRevision = z.infer<typeof editorRevisionSchema>;
 
+export { savedRevisionSchema, type SavedRevision } from '@/domain/contracts';
+
 export const editorDesignResponseSchema = z.object({ design: editorDesignSummarySchema, revision: editorRevisionSchema });
 export type EditorDesignDetail = z.infer<typeof editorDesignResponseSchema>;

@@ -1,5 +1,5 @@
 import { downloadBlob } from '@/lib/download';
-import Papa from 'papaparse';
+import { toCsv } from '@/domain/outputs/csv';
 import type { BomLine, CutListGroup, CutMachiningOperation, EndTreatment } from '@/domain/analysisTypes';
 import type { LengthUnit } from '@/domain/units';
 import { formatLength, mmToInches } from '@/domain/units';
@@ -32,7 +32,7 @@ export function bomToCsv(lines: BomLine[]): string {
   ]);
   const total = lines.reduce((sum, line) => sum + line.linePrice, 0);
   rows.push(['Total', '', '', '', '', '', '', round(total, 2)]);
-  return Papa.unparse({ fields: [...BOM_CSV_HEADER], data: rows });
+  return toCsv(rows, { fields: BOM_CSV_HEADER });
 }
 
 export function describeEnd(end: EndTreatment): string {
@@ -85,7 +85,7 @@ export function cutListToCsv(groups: CutListGroup[], pieceLabels: Record<string,
       group.machining.map((op) => describeMachining(op, units)).join('; '),
     ];
   });
-  return Papa.unparse({ fields: cutListCsvHeader(units), data: rows });
+  return toCsv(rows, { fields: cutListCsvHeader(units) });
 }
 
 /** Starts a browser download of a CSV text. */

@@ -1,0 +1,66 @@
+import { MessageChannel } from 'node:worker_threads';
+import { Piscina } from 'piscina';
+import type { AnalysisLimits } from '../../config';
+import type { AnalysisTaskResult } from './analysisTask';
+
+/** Analyses documents in worker threads so a heavy design never holds up other requests. */
+export interface AnalysisPool {
+  /** Resolves with the task's result; rejects with `AnalysisTimeout` past the time limit, `AnalysisBusy` when the queue is full. */
+  run(document: unknown): Promise<AnalysisTaskResult>;
+  close(): Promise<void>;
+}
+
+export class AnalysisTimeout extends Error {
+  constructor(readonly limitMs: number) {
+    super(`The analysis took longer than ${limitMs} ms`);
+    this.name = 'AnalysisTimeout';
+  }
+}
+
+export class AnalysisBusy extends Error {
+  constructor() {
+    super('Every analysis worker is busy and the queue is full');
+    this.name = 'AnalysisBusy';
+  }
+}
+
+/** A piscina pool, started on first use; a task past the time limit is aborted and its thread replaced. */
+export function createAnalysisPool(limits: AnalysisLimits): AnalysisPool {
+  let pool: Piscina | undefined;
+  const start = () =>
+    (pool ??= new Piscina({
+      filename: new URL('./analysisWorker.mjs', import.meta.url).href,
+      minThreads: 1,
+      maxThreads: limits.threads,
+      idleTimeout: 60_000,
+      maxQueue: limits.threads * 64,
+    }));
+  return {
+    async run(document) {
+      // The clock starts when a thread picks the task up: waiting in the queue or for a new thread
+      // to load is not the design's fault.
+      const abort = new AbortController();
+      const { port1, port2 } = new MessageChannel();
+      let timer: NodeJS.Timeout | undefined;
+      port1.once('message', () => {
+        timer = setTimeout(() => abort.abort(), limits.timeLimitMs);
+        port1.close();
+      });
+      try {
+        return (await start().run({ document, started: port2 }, { signal: abort.signal, transferList: [port2] })) as AnalysisTaskResult;
+      } catch (error) {
+        if (abort.signal.aborted) throw new AnalysisTimeout(limits.timeLimitMs);
+        if (/queue is at limit/i.test(String((error as Error)?.message))) throw new AnalysisBusy();
+        throw error;
+      } finally {
+        clearTimeout(timer);
+        port1.close();
+      }
+    },
+    async close() {
+      const running = pool;
+      pool = undefined;
+      await running?.destroy();
+    },
+  };
+}
