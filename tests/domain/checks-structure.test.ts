@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { analyzeDesign } from '@/domain/analyze';
 import { defaultCatalogue } from '@/domain/catalogue';
 import type { Catalogue } from '@/domain/catalogue/types';
-import { designDocumentSchema, type DesignDocument, type DesignDocumentInput } from '@/domain/design/schema';
+import { designDocumentSchema, type DesignDocument, type DesignDocumentInput, CURRENT_SCHEMA_VERSION } from '@/domain/design/schema';
 import { beamResponse } from '@/domain/structure/beams';
 import { boxFrame } from './checksDesigns';
 
@@ -21,7 +21,7 @@ const tubeCatalogue: Catalogue = {
 /** A 1,000 mm beam along X between two posts, joined at both ends. */
 function beamOnPosts(loads: DesignDocumentInput['loadCases'], variantId = 'm40-40x40', rollDeg = 0): DesignDocument {
   return designDocumentSchema.parse({
-    schemaVersion: 1,
+    schemaVersion: CURRENT_SCHEMA_VERSION,
     name: 'Beam',
     systemId: 'metric-40',
     profiles: [

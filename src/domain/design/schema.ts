@@ -13,7 +13,7 @@ import { z } from 'zod';
  * angled braces can come later without a format change; the editor keeps it axis-aligned for now.
  */
 
-export const CURRENT_SCHEMA_VERSION = 1 as const;
+export const CURRENT_SCHEMA_VERSION = 2 as const;
 
 const id = z
   .string()
