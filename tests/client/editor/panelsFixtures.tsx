@@ -101,6 +101,7 @@ export function handMadeAnalysis(): DesignAnalysis {
       note: 'demo prices',
     },
     structure: [],
+    stability: { empty: null, worst: null },
   };
 }
 

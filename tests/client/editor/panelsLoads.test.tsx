@@ -103,8 +103,18 @@ describe('Loads tab: results', () => {
         maxMoment: 60000, maxDeflection: 2.1, deflectionLimit: 600 / 360, deflectionOk: false, maxStress: 13.3, allowableStress: 55, stressOk: true,
       },
     ],
-    legs: [{ profileId: 'leg-1', length: 400, endCondition: 'fixed-free', effectiveLengthFactor: 2.1, load: 250, bucklingLoad: 50000, utilisation: 0.005, ok: true }],
-    tipOver: { pushHeight: 400, weight: 494, leverArm: 150, force: 185, edge: 'front' },
+    legs: [
+      {
+        profileId: 'leg-1', length: 400, endCondition: 'pinned-fixed-sway', effectiveLengthFactor: 2, load: 250, criticalLoad: 60000, squashLoad: 63000, chi: 0.79,
+        bucklingLoad: 50000, utilisation: 0.01, bendingMoment: 0, combinedUtilisation: 0.025, ok: true,
+      },
+    ],
+    tipOver: { pushHeight: 400, weight: 494, leverArm: 150, force: 185, edge: 'front', threshold: 0, footprint: 'profiles' },
+    joints: [],
+    panels: [],
+    racking: { bracedX: false, bracedZ: false, sideLoadX: 0, sideLoadZ: 0 },
+    problems: [],
+    settings: { safetyFactor: 2, deflectionLimitRatio: 360, alloyId: '6063-T5', minYield: 110 },
     cautions: [],
   };
 
