@@ -242,3 +242,26 @@ describe('demo designs', () => {
     }
   });
 });
+
+describe('panel clearance and expansion', () => {
+  it('reports 8 mm acrylic in an 8 mm slot: cast sheet may be 9.2 mm (ISO 7823-1: ±(0.4 + 0.1·t), check-values, verified)', () => {
+    const a = analyzeDesign(boxFrame({ backPanel: true, panelThickness: 8, panelMaterial: 'acrylic' }));
+    const f = a.findings.find((x) => x.id.startsWith('panel-fit:no-clearance'));
+    expect(f?.severity).toBe('warning');
+    expect(f?.data?.toleranceMm).toBeCloseTo(1.2, 6);
+    // The fix offers only a sheet that fits at the top of its tolerance: 6 mm + 1.0 mm = 7 mm ≤ 8 mm.
+    expect(f?.fix?.operation).toMatchObject({ type: 'updatePanel', payload: { changes: { thickness: 6 } } });
+  });
+
+  it('accepts 6 mm acrylic in the same slot', () => {
+    const a = analyzeDesign(boxFrame({ backPanel: true, panelThickness: 6, panelMaterial: 'acrylic' }));
+    expect(a.findings.filter((x) => x.id.startsWith('panel-fit:no-clearance') || x.id.startsWith('panel-fit:too-thick'))).toEqual([]);
+  });
+
+  it('warns when a long plastic sheet grows past the play left in its slots', () => {
+    const design = boxFrame({ width: 3600, backPanel: true, panelThickness: 6, panelMaterial: 'hdpe' });
+    // HDPE about 150 µm/(m·K) (from memory) against 23.4 for the frame: about 13.6 mm over 3.5 m and 30 K, against 12.4 mm of play (1 mm clearance + 2 × (12.2 − 6.5) mm of slot beyond the engagement).
+    const f = analyzeDesign(design).findings.find((x) => x.id.startsWith('panel-fit:thermal'));
+    expect(f?.severity).toBe('warning');
+  });
+});
