@@ -5,6 +5,7 @@
  */
 import type { DesignOperation } from './design/operations';
 import type { StockPlan } from './outputs/stockPlan';
+import type { SystemStock } from './design/schema';
 
 export type Severity = 'error' | 'warning' | 'note';
 export type Vec3Tuple = [number, number, number];
@@ -109,7 +110,20 @@ export interface CutListGroup {
 
 export interface VariantStockPlan {
   variantId: string;
+  /** The profile system whose stock settings apply. */
+  systemId?: string;
+  /** Cuts packed into new bars; `plan.lowerBound` counts bars of the longest length. */
   plan: StockPlan;
+  /** The stock settings in force for this system. */
+  settings?: SystemStock;
+  /** Length and price of each bar in `plan.bars`, in order (a mix when shorter bars are cheaper). */
+  barStock?: { length: number; cost: number }[];
+  /** Offcuts on hand used before new bars, with the cuts placed in them (mm). */
+  offcutsUsed?: { length: number; cuts: StockPlan['bars'][number]['cuts']; left: number }[];
+  /** Price of the new bars, demo prices. */
+  cost?: number;
+  /** No plan costs less: total cut length with kerfs at the cheapest price per usable mm. */
+  costLowerBound?: number;
 }
 
 export type ToolKind = 'hex-key' | 'drill' | 'tap' | 'mallet' | 'square' | 'saw' | 'other';

@@ -16,6 +16,7 @@ import { pitchDiameter, preloadFromTorque, vdiPreload, vdiTighteningTorque } fro
 import { shareLegLoads } from '@/domain/structure/legLoads';
 import { oneWayStripDeflection, roarkAlpha, simplySupportedPlateDeflection } from '@/domain/structure/plates';
 import { PUSH_TEST_MIN_HEIGHT_MM, STABILITY_PUSH_FORCE_N } from '@/domain/structure/stability';
+import { planVariant, usableLength } from '@/domain/outputs/stockPlans';
 import { boxFrame } from './checksDesigns';
 
 describe('flexural buckling reduction (EN 1999-1-1 §6.3.1 form)', () => {
@@ -263,5 +264,78 @@ describe('panel clearance and expansion', () => {
     // HDPE about 150 µm/(m·K) (from memory) against 23.4 for the frame: about 13.6 mm over 3.5 m and 30 K, against 12.4 mm of play (1 mm clearance + 2 × (12.2 − 6.5) mm of slot beyond the engagement).
     const f = analyzeDesign(design).findings.find((x) => x.id.startsWith('panel-fit:thermal'));
     expect(f?.severity).toBe('warning');
+  });
+});
+
+describe('stock plans per profile system', () => {
+  function mixed(settings: DesignDocument['settings'] | Record<string, unknown> = {}): DesignDocument {
+    return designDocumentSchema.parse({
+      schemaVersion: CURRENT_SCHEMA_VERSION,
+      name: 'Two systems',
+      systemId: 'metric-40',
+      settings,
+      profiles: [
+        { id: 'A1', variantId: 'm40-40x40', length: 2500, start: [0, 0, 0], direction: [1, 0, 0] },
+        { id: 'A2', variantId: 'm40-40x40', length: 2500, start: [0, 100, 0], direction: [1, 0, 0] },
+        { id: 'B1', variantId: 'm20-20x20', length: 1200, start: [0, 300, 0], direction: [1, 0, 0] },
+        { id: 'B2', variantId: 'm20-20x20', length: 1200, start: [0, 400, 0], direction: [1, 0, 0] },
+      ],
+    });
+  }
+
+  it('gives a design with metric 40 and metric 20 profiles a bar plan per system, each with its own bar lengths', () => {
+    const plans = analyzeDesign(mixed()).stockPlans;
+    const m40 = plans.find((p) => p.variantId === 'm40-40x40')!;
+    const m20 = plans.find((p) => p.variantId === 'm20-20x20')!;
+    expect(m40.systemId).toBe('metric-40');
+    expect(m20.systemId).toBe('metric-20');
+    // Demo stock lengths of the systems (invented demo values): 6,000 mm for metric 40, 3,000 mm for metric 20.
+    expect(m40.settings!.bars.map((b) => b.length)).toContain(6000);
+    expect(m20.settings!.bars.map((b) => b.length)).toContain(3000);
+    expect(m40.barStock).toEqual([m40.settings!.bars[0]]); // both 2,500 mm cuts in one 6 m bar
+    expect(m20.plan.barCount).toBe(1);
+  });
+
+  it('uses per-system settings from the design where given', () => {
+    const plans = analyzeDesign(mixed({ stockBySystem: { 'metric-20': { bars: [{ length: 1300, cost: 4 }], kerf: 2, trimStart: 0, trimEnd: 0 } } })).stockPlans;
+    const m20 = plans.find((p) => p.variantId === 'm20-20x20')!;
+    expect(m20.barStock).toEqual([
+      { length: 1300, cost: 4 },
+      { length: 1300, cost: 4 },
+    ]);
+  });
+
+  it('uses offcuts on hand before new bars', () => {
+    const plans = analyzeDesign(mixed({ offcutsOnHand: [{ variantId: 'm20-20x20', length: 1250, quantity: 2 }] })).stockPlans;
+    const m20 = plans.find((p) => p.variantId === 'm20-20x20')!;
+    expect(m20.offcutsUsed!.map((o) => o.cuts.map((c) => c.id))).toEqual([['B1'], ['B2']]);
+    expect(m20.plan.barCount).toBe(0);
+    expect(m20.cost).toBe(0);
+  });
+
+  it('trims each bar end with its own kerf: two 1,496 mm cuts do not fit one 3,000 mm bar (3 mm kerf, 5 mm trim)', () => {
+    // 3,000 − 2 × (5 + 3) = 2,984 mm usable; 1,496 + 3 + 1,496 = 2,995 mm needed (derived).
+    const v = planVariant('m40-40x40', 'metric-40', [{ id: 'a', length: 1496 }, { id: 'b', length: 1496 }], { bars: [{ length: 3000, cost: 10 }], kerf: 3, trimStart: 5, trimEnd: 5, minReusableOffcut: 150 });
+    expect(v.plan.barCount).toBe(2);
+    expect(usableLength(3000, { kerf: 3, trimStart: 5, trimEnd: 5 })).toBe(2984);
+  });
+
+  it('buys the cheapest mix of bar lengths and reports a lower bound on cost', () => {
+    // 2 × 2,500 + 1,000 mm do not fit one 6 m bar (5,984 mm usable). One 6 m bar (30) and one 3 m bar (17)
+    // beat two 6 m bars (60) and three 3 m bars (51). Derived.
+    const v = planVariant('m40-40x40', 'metric-40', [{ id: 'a', length: 2500 }, { id: 'b', length: 2500 }, { id: 'c', length: 1000 }], {
+      bars: [
+        { length: 6000, cost: 30 },
+        { length: 3000, cost: 17 },
+      ],
+      kerf: 3,
+      trimStart: 5,
+      trimEnd: 5,
+      minReusableOffcut: 150,
+    });
+    expect(v.barStock!.map((b) => b.length).sort()).toEqual([3000, 6000]);
+    expect(v.cost).toBe(47);
+    expect(v.costLowerBound!).toBeLessThanOrEqual(v.cost!);
+    expect(v.costLowerBound!).toBeGreaterThan(0);
   });
 });
