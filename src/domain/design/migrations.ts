@@ -8,8 +8,8 @@
  * v1 → v2: inch catalogue ids are named by nominal size. Profile variants 'i10-1x1', 'i10-1x2',
  * 'i15-1.5x1.5', 'i15-1.5x3' become 'in-1x1', 'in-1x2', 'in-1.5x1.5', 'in-1.5x3'; every other inch
  * catalogue id ('i10-corner-bracket', 'i15-leveling-foot', …) takes the prefix 'in1-' / 'in1.5-'.
- * Only values of catalogue references (keys ending in "Id") are renamed; part ids and labels are
- * the user's own and stay as they are.
+ * Only values of catalogue references (variantId, connectorId, partId, fastenerId, tNutId) are
+ * renamed; part ids, references to parts (profileId, panelId, …) and labels are the user's own.
  */
 import { CURRENT_SCHEMA_VERSION } from './schema';
 
@@ -61,12 +61,14 @@ export function renameLegacyInchId(id: string): string {
   return LEGACY_VARIANT_SIZES.has(match[2]) ? `${prefixes.variant}-${match[2]}` : `${prefixes.other}-${match[2]}`;
 }
 
+const CATALOGUE_REFERENCE_KEYS = new Set(['variantId', 'connectorId', 'partId', 'fastenerId', 'tNutId']);
+
 function renameCatalogueReferences(value: unknown): unknown {
   if (Array.isArray(value)) return value.map(renameCatalogueReferences);
   if (typeof value !== 'object' || value === null) return value;
   const out: Raw = {};
   for (const [key, v] of Object.entries(value as Raw)) {
-    out[key] = /.Id$/.test(key) && typeof v === 'string' ? renameLegacyInchId(v) : renameCatalogueReferences(v);
+    out[key] = CATALOGUE_REFERENCE_KEYS.has(key) && typeof v === 'string' ? renameLegacyInchId(v) : renameCatalogueReferences(v);
   }
   return out;
 }
