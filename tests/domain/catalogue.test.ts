@@ -143,10 +143,10 @@ describe('profile variants', () => {
     }
   });
 
-  it('draws hollow sections whose holes never overlap: the polygon area matches a point count within 2 %', () => {
+  it('draws hollow sections whose holes never overlap: the polygon area matches a point count within 3 %', () => {
     for (const v of catalogue.variants) {
       const { outline, holes } = v.crossSection;
-      const n = 240;
+      const n = 160;
       const boxes = holes.map((h) => ({ h, minX: Math.min(...h.map((q) => q[0])), maxX: Math.max(...h.map((q) => q[0])), minY: Math.min(...h.map((q) => q[1])), maxY: Math.max(...h.map((q) => q[1])) }));
       let inside = 0;
       let overlaps = 0;
@@ -161,7 +161,7 @@ describe('profile variants', () => {
         }
       expect(overlaps, v.id).toBe(0);
       const sampled = (inside * v.width * v.height) / (n * n);
-      expect(Math.abs(sampled / v.sectionProperties.area - 1), v.id).toBeLessThan(0.02);
+      expect(Math.abs(sampled / v.sectionProperties.area - 1), v.id).toBeLessThan(0.03);
     }
   });
 
