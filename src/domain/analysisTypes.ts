@@ -5,6 +5,7 @@
  */
 import type { DesignOperation } from './design/operations';
 import type { StockPlan } from './outputs/stockPlan';
+import type { SystemStock } from './design/schema';
 
 export type Severity = 'error' | 'warning' | 'note';
 export type Vec3Tuple = [number, number, number];
@@ -109,7 +110,20 @@ export interface CutListGroup {
 
 export interface VariantStockPlan {
   variantId: string;
+  /** The profile system whose stock settings apply. */
+  systemId?: string;
+  /** Cuts packed into new bars; `plan.lowerBound` counts bars of the longest length. */
   plan: StockPlan;
+  /** The stock settings in force for this system. */
+  settings?: SystemStock;
+  /** Length and price of each bar in `plan.bars`, in order (a mix when shorter bars are cheaper). */
+  barStock?: { length: number; cost: number }[];
+  /** Offcuts on hand used before new bars, with the cuts placed in them (mm). */
+  offcutsUsed?: { length: number; cuts: StockPlan['bars'][number]['cuts']; left: number }[];
+  /** Price of the new bars, demo prices. */
+  cost?: number;
+  /** No plan costs less: total cut length with kerfs at the cheapest price per usable mm. */
+  costLowerBound?: number;
 }
 
 export type ToolKind = 'hex-key' | 'drill' | 'tap' | 'mallet' | 'square' | 'saw' | 'other';
@@ -185,15 +199,76 @@ export interface MemberResult {
 export interface LegResult {
   profileId: string;
   length: number;
+  /** End condition used for the buckling length: pinned at the floor, with sway when the frame is unbraced. */
   endCondition: string;
   effectiveLengthFactor: number;
-  /** N, this leg's share of the load case's vertical load plus the frame's weight. */
+  /** N, this leg's share (by statics, from where the loads sit) of the vertical loads and the frame's weight. */
   load: number;
-  /** N, Euler critical load. */
+  /** N, Euler's π²EI/(KL)², for reference. */
+  criticalLoad: number;
+  /** N, A·f₀: no column carries more. */
+  squashLoad: number;
+  /** EN 1999-1-1 §6.3.1 reduction factor χ. */
+  chi: number;
+  /** N, χ·A·f₀ (EN 1999-1-1 §6.3.1), at most `squashLoad`. */
   bucklingLoad: number;
-  /** load / bucklingLoad. */
+  /** load / (bucklingLoad / safety factor). */
   utilisation: number;
+  /** N·mm, bending at the leg's top from side loads on an unbraced frame. */
+  bendingMoment: number;
+  /** EN 1999-1-1 §6.3.3 axial + bending left-hand side (1 = limit), with the safety factor. */
+  combinedUtilisation: number;
+  /** The foot or caster under the leg and its rating, N, if there is one. */
+  support?: { accessoryId: string; rating: number | null };
   ok: boolean;
+}
+
+/** The load through one joint, against what its connectors hold before they slip. */
+export interface JointLoadResult {
+  jointId: string;
+  /** The loaded member the reaction comes from. */
+  profileId: string;
+  /** N, the member's end reaction at this joint. */
+  reaction: number;
+  /** N, slip (or screw shear) capacity of the joint's connectors for this member, before the safety factor. */
+  capacity: number;
+  /** N, capacity / safety factor. */
+  allowable: number;
+  mode: 'slip' | 'screw-shear';
+  ok: boolean;
+}
+
+/** Deflection of a loaded panel (shelf). */
+export interface PanelSagResult {
+  panelId: string;
+  method: 'plate-simply-supported' | 'one-way-strip';
+  /** mm */
+  span: number;
+  /** mm */
+  deflection: number;
+  /** mm, span / settings.deflectionLimitRatio. */
+  limit: number;
+  /** MPa, the sheet's modulus used. */
+  elasticModulus: number;
+  ok: boolean;
+}
+
+/** Side loads on a frame with nothing against racking. */
+export interface RackingResult {
+  /** Plan directions the frame has a brace, gusset or panel against racking in. */
+  bracedX: boolean;
+  bracedZ: boolean;
+  /** N, horizontal load in this load case along x and z. */
+  sideLoadX: number;
+  sideLoadZ: number;
+}
+
+/** A load the structure estimate could not place. */
+export interface StructureProblem {
+  reason: 'unsupported' | 'unknown-load-target' | 'panel-unsupported';
+  partIds: string[];
+  /** N */
+  force?: number;
 }
 
 export interface TipOverResult {
@@ -205,7 +280,12 @@ export interface TipOverResult {
   leverArm: number;
   /** N, horizontal push at pushHeight that starts to tip the frame. */
   force: number;
+  /** The footprint edge it tips over ('front' is −Z). */
   edge: string;
+  /** N, the push the frame should resist (0 when the standard sets no push for a frame this low). */
+  threshold: number;
+  /** 'feet' when feet or casters mark the footprint, else 'profiles'. */
+  footprint: 'feet' | 'profiles';
 }
 
 export interface StructureResult {
@@ -214,7 +294,19 @@ export interface StructureResult {
   members: MemberResult[];
   legs: LegResult[];
   tipOver: TipOverResult | null;
+  joints: JointLoadResult[];
+  panels: PanelSagResult[];
+  racking: RackingResult;
+  problems: StructureProblem[];
+  /** The settings in force for this estimate. */
+  settings: { safetyFactor: number; deflectionLimitRatio: number; alloyId: string; minYield: number };
   cautions: string[];
+}
+
+/** Tip-over of the empty frame and of the worst load case, pushed at the top edge. */
+export interface StabilityResult {
+  empty: TipOverResult | null;
+  worst: (TipOverResult & { loadCaseId: string; loadCaseName: string }) | null;
 }
 
 /** Size to cut a panel: captured panels include slot engagement and clearance. */
@@ -247,5 +339,7 @@ export interface DesignAnalysis {
   mass: MassSummary;
   cost: CostSummary;
   structure: StructureResult[];
+  /** Tip-over, always: the empty frame and the worst load case. */
+  stability: StabilityResult;
   timingsMs?: Record<string, number>;
 }

@@ -103,6 +103,7 @@ export function analyzeDesign(design: DesignDocument, catalogue: Catalogue = def
     mass,
     cost,
     structure: structure.results,
+    stability: structure.stability,
     ...(options.timings === false ? {} : { timingsMs: timings }),
   };
 }

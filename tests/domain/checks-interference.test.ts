@@ -2,7 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { createAnalysisContext } from '@/domain/analyze';
 import { interferenceFindings, interferenceFindingsAllPairs } from '@/domain/checks/interferenceFindings';
-import { designDocumentSchema } from '@/domain/design/schema';
+import { designDocumentSchema, CURRENT_SCHEMA_VERSION } from '@/domain/design/schema';
 
 const axisDirections = [
   [1, 0, 0],
@@ -33,7 +33,7 @@ describe('interference check on random designs', () => {
     fc.assert(
       fc.property(fc.array(profileArb, { maxLength: 60 }), fc.array(panelArb, { maxLength: 8 }), fc.boolean(), (profiles, panels, withJoints) => {
         const design = designDocumentSchema.parse({
-          schemaVersion: 1,
+          schemaVersion: CURRENT_SCHEMA_VERSION,
           name: 'Random',
           systemId: 'metric-40',
           profiles: profiles.map((p, i) => ({ ...p, id: `P${i}`, direction: [...p.direction] })),
@@ -51,7 +51,7 @@ describe('interference check on random designs', () => {
 
   it('finds overlaps at all in those random designs (the comparison is not vacuous)', () => {
     const design = designDocumentSchema.parse({
-      schemaVersion: 1,
+      schemaVersion: CURRENT_SCHEMA_VERSION,
       name: 'Crossing',
       systemId: 'metric-40',
       profiles: [

@@ -113,11 +113,12 @@ describe('panel fit check', () => {
     const thick = panelFitFindings(createAnalysisContext(design)).filter((f) => f.id.includes('too-thick'));
     expect(thick).toHaveLength(1);
     expect(thick[0].severity).toBe('error');
-    expect(thick[0].message).toMatch(/^10 mm acrylic \(pmma\), clear is too thick for the 8 mm slot opening .*1\.5 mm clearance/);
+    expect(thick[0].message).toMatch(/^10 mm acrylic \(pmma\), clear is thicker than the 8 mm slot opening/);
     expect(thick[0].data).toMatchObject({ thicknessMm: 10, slotOpeningMm: 8 });
+    // 8 mm cast acrylic may be 9.2 mm (ISO 7823-1, check-values): the fix offers 6 mm, which is at most 7 mm.
     expect(thick[0].fix?.operation).toEqual({ type: 'updatePanel', payload: { panelId: 'BACK', changes: { thickness: 6 } } });
     const fixed = applyOperation(design, thick[0].fix!.operation);
-    expect(panelFitFindings(createAnalysisContext(fixed)).filter((f) => f.severity === 'error')).toEqual([]);
+    expect(panelFitFindings(createAnalysisContext(fixed)).filter((f) => f.severity !== 'note')).toEqual([]);
   });
 
   it('asks for a gasket on a much thinner panel and computes its length from the sheet edges', () => {

@@ -2,7 +2,7 @@
  * Small, correct designs built by hand for the check and output tests, and helpers to break them.
  * Metric 40 system; lengths mm; Y up.
  */
-import { designDocumentSchema, type DesignDocument, type DesignDocumentInput } from '@/domain/design/schema';
+import { designDocumentSchema, type DesignDocument, type DesignDocumentInput, CURRENT_SCHEMA_VERSION } from '@/domain/design/schema';
 
 export interface BoxFrameOptions {
   width?: number;
@@ -86,7 +86,7 @@ export function boxFrame(o: BoxFrameOptions = {}): DesignDocument {
     });
   }
   return designDocumentSchema.parse({
-    schemaVersion: 1,
+    schemaVersion: CURRENT_SCHEMA_VERSION,
     name: 'Test box frame',
     systemId: 'metric-40',
     profiles,

@@ -138,7 +138,7 @@ describe('generators', () => {
     if (r.ok) return;
     expect(r.errors).toContainEqual({ path: 'width', message: 'Width must be at least 3 × the profile size (120 mm)' });
     expect(r.errors.find((e) => e.path === 'height')!.message).toMatch(/^Height must be at least 120 mm/);
-    expect(() => generateDesign('table', { systemId: 'metric-40', variantId: 'i10-1x2', width: 900, depth: 600, height: 800 })).toThrow(GeneratorParamsError);
+    expect(() => generateDesign('table', { systemId: 'metric-40', variantId: 'in-1x2', width: 900, depth: 600, height: 800 })).toThrow(GeneratorParamsError);
     expect(tryGenerateDesign('rocket', {})).toEqual({ ok: false, errors: [{ path: '', message: expect.stringMatching(/Unknown generator "rocket"/) }] });
     const shelves = tryGenerateDesign('shelf-unit', { systemId: 'metric-45', width: 800, depth: 400, height: 600, shelves: 12 });
     expect(shelves.ok ? '' : shelves.errors[0].message).toMatch(/Too many shelves/);

@@ -111,8 +111,8 @@ describe('tools', () => {
   it('names the inch key from ASME B18.3 for inch screws', () => {
     // ASME B18.3, verified (check-values.md): 5/16 button head → 3/16 in; 5/16 socket head → 1/4 in.
     const design = boxFrame();
-    design.profiles = design.profiles.map((p) => ({ ...p, variantId: 'i15-1.5x1.5' }));
-    design.joints = design.joints.map((j, i) => ({ ...j, connectorId: 'i15-corner-bracket', fastenerHead: i === 0 ? 'socket' : 'button' }));
+    design.profiles = design.profiles.map((p) => ({ ...p, variantId: 'in-1.5x1.5' }));
+    design.joints = design.joints.map((j, i) => ({ ...j, connectorId: 'in1.5-corner-bracket', fastenerHead: i === 0 ? 'socket' : 'button' }));
     const keys = analyzeDesign(design).tools.filter((t) => t.kind === 'hex-key');
     expect(keys.map((t) => [t.size, t.standard])).toEqual([
       ['3/16 in', 'ASME B18.3'],

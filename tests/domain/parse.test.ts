@@ -5,6 +5,7 @@ import { describe, expect, it } from 'vitest';
 import { createEmptyDesign } from '@/domain/design/create';
 import { generateDesign } from '@/domain/design/generators';
 import { parseDesignDocument } from '@/domain/design/parse';
+import { defaultCatalogue } from '@/domain/catalogue';
 import { CURRENT_SCHEMA_VERSION, type DesignDocument } from '@/domain/design/schema';
 import { designDocumentJsonSchemaText } from '@/domain/design/writeJsonSchema';
 
@@ -60,7 +61,7 @@ describe('parseDesignDocument', () => {
 
   it('refuses a document from a newer version and one without a version, saying what to do', () => {
     expect(errorsOf({ schemaVersion: 99, name: 'x', systemId: 'metric-40' })[0].message).toMatch(/newer Slotwise/);
-    expect(errorsOf({ name: 'x', systemId: 'metric-40' })[0]).toEqual({ path: 'schemaVersion', message: expect.stringMatching(/"schemaVersion": 1/) });
+    expect(errorsOf({ name: 'x', systemId: 'metric-40' })[0]).toEqual({ path: 'schemaVersion', message: expect.stringMatching(/"schemaVersion": 2/) });
   });
 
   it('refuses text that is not JSON and JSON that is not an object', () => {
@@ -121,7 +122,7 @@ describe('parseDesignDocument', () => {
 describe('createEmptyDesign', () => {
   it('starts a design in the chosen system with its alloy, demo stock length and unit family', () => {
     const d = createEmptyDesign({ name: 'New bench', systemId: 'inch-1.5' });
-    expect(d).toMatchObject({ schemaVersion: 1, name: 'New bench', systemId: 'inch-1.5', units: 'in', profiles: [] });
+    expect(d).toMatchObject({ schemaVersion: 2, name: 'New bench', systemId: 'inch-1.5', units: 'in', profiles: [] });
     expect(d.settings.stockLength).toBeGreaterThan(3000);
     expect(parseDesignDocument(JSON.parse(JSON.stringify(d)))).toEqual({ ok: true, design: d });
     expect(createEmptyDesign({ name: 'x', systemId: 'metric-20', units: 'in' }).units).toBe('in');
@@ -161,5 +162,41 @@ describe('published JSON Schema', () => {
   it('the committed docs/design-format.schema.json equals the one generated from the zod schema', () => {
     const committed = readFileSync(`${docsDir}design-format.schema.json`, 'utf8');
     expect(committed).toBe(designDocumentJsonSchemaText());
+  });
+});
+
+describe('inch catalogue ids named by nominal size (schema version 2)', () => {
+  it('migrates a stored version 1 document to the new ids on read, leaving the user’s own ids and labels alone', () => {
+    const stored = {
+      schemaVersion: 1,
+      name: 'Old inch bench',
+      systemId: 'inch-1.5',
+      units: 'in',
+      profiles: [
+        { id: 'i15-leg', label: 'i15 leg', variantId: 'i15-1.5x1.5', length: 900, start: [0, 0, 0], direction: [0, 1, 0] },
+        { id: 'rail', variantId: 'i15-1.5x3', length: 600, start: [19.05, 880, 0], direction: [1, 0, 0] },
+      ],
+      joints: [{ id: 'j1', kind: 'corner-bracket', connectorId: 'i15-corner-bracket', members: [{ profileId: 'rail', at: 'start' }, { profileId: 'i15-leg', at: 'span', along: 880 }] }],
+      accessories: [{ id: 'foot', kind: 'leveling-foot', partId: 'i15-leveling-foot', profileId: 'i15-leg', end: 'start' }],
+    };
+    const r = parseDesignDocument(stored);
+    expect(r.ok).toBe(true);
+    if (!r.ok) return;
+    expect(r.design.schemaVersion).toBe(CURRENT_SCHEMA_VERSION);
+    expect(r.design.profiles.map((p) => p.variantId)).toEqual(['in-1.5x1.5', 'in-1.5x3']);
+    expect(r.design.joints[0].connectorId).toBe('in1.5-corner-bracket');
+    expect(r.design.accessories[0].partId).toBe('in1.5-leveling-foot');
+    expect(r.design.profiles[0].id).toBe('i15-leg');
+    expect(r.design.profiles[0].label).toBe('i15 leg');
+    expect(r.design.joints[0].members[1].profileId).toBe('i15-leg');
+  });
+
+  it('names the inch variants by nominal size', () => {
+    expect(defaultCatalogue.variants.filter((v) => v.systemId.startsWith('inch')).map((v) => v.name)).toEqual([
+      '1 in square profile',
+      '1 x 2 in profile',
+      '1.5 in square profile',
+      '1.5 x 3 in profile',
+    ]);
   });
 });

@@ -118,6 +118,14 @@ export interface PanelMaterialSpec {
   /** 0..1 for rendering, our own choice */
   opacity: number;
   source: string;
+  /** Sheet thickness tolerance ± (fixed + share·t) mm. */
+  thicknessTolerance: { fixed: number; share: number; source: string };
+  /** Bending modulus, MPa, for shelf sag; null when Slotwise has no figure. */
+  elasticModulus: number | null;
+  /** Linear thermal expansion, per kelvin. */
+  thermalExpansion: number;
+  /** Figures behind the three fields above. */
+  mechanicalSource: string;
 }
 
 /** Aluminium composite panel build-up, 4 mm: two 0.5 mm aluminium skins on a 3 mm polyethylene core (common build-up). */
@@ -150,6 +158,10 @@ export const panelMaterialSpecs: PanelMaterialSpec[] = [
     color: '#cfe9ee',
     opacity: 0.3,
     source: 'Density 1.18 g/cm³ (range 1.16–1.20), verified. Thicknesses common practice, no source.',
+    thicknessTolerance: { fixed: 0.4, share: 0.1, source: 'Cast acrylic, ISO 7823-1: ±(0.4 + 0.1·t) mm (check-values, verified)' },
+    elasticModulus: 3200,
+    thermalExpansion: 70e-6,
+    mechanicalSource: 'E about 3.2 GPa and expansion about 70 µm/(m·K), from memory.',
   },
   {
     id: 'polycarbonate',
@@ -160,6 +172,10 @@ export const panelMaterialSpecs: PanelMaterialSpec[] = [
     color: '#dbe8e4',
     opacity: 0.35,
     source: 'Density 1.20–1.22 g/cm³, verified (lower end used). Thicknesses common practice, no source.',
+    thicknessTolerance: { fixed: 0, share: 0.05, source: 'Extruded sheet, about ±5 % (from memory)' },
+    elasticModulus: 2300,
+    thermalExpansion: 65e-6,
+    mechanicalSource: 'E about 2.3 GPa and expansion about 65 µm/(m·K), from memory.',
   },
   {
     id: 'hdpe',
@@ -170,6 +186,10 @@ export const panelMaterialSpecs: PanelMaterialSpec[] = [
     color: '#ecebe4',
     opacity: 1,
     source: 'Density 0.93–0.97 g/cm³, verified (mid-range used). Thicknesses common practice, no source.',
+    thicknessTolerance: { fixed: 0, share: 0.05, source: 'Extruded sheet, about ±5 % (from memory)' },
+    elasticModulus: 900,
+    thermalExpansion: 150e-6,
+    mechanicalSource: 'E about 0.9 GPa and expansion about 150 µm/(m·K), from memory.',
   },
   {
     id: 'abs',
@@ -180,6 +200,10 @@ export const panelMaterialSpecs: PanelMaterialSpec[] = [
     color: '#34383d',
     opacity: 1,
     source: 'Density 1.04–1.07 g/cm³, partly (secondary source; mid-range used). Thicknesses common practice, no source.',
+    thicknessTolerance: { fixed: 0, share: 0.05, source: 'Extruded sheet, about ±5 % (from memory)' },
+    elasticModulus: 2200,
+    thermalExpansion: 80e-6,
+    mechanicalSource: 'E about 2.2 GPa and expansion about 80 µm/(m·K), from memory.',
   },
   {
     id: 'acm',
@@ -191,6 +215,10 @@ export const panelMaterialSpecs: PanelMaterialSpec[] = [
     opacity: 1,
     source:
       'Equivalent density derived from the 4 mm build-up (0.5 mm aluminium skins at 2,700 kg/m³, 3 mm PE core at 930 kg/m³ — core density recalled from memory): about 5.5 kg/m² (derived). Valid for 4 mm only.',
+    thicknessTolerance: { fixed: 0.2, share: 0, source: 'About ±0.2 mm (from memory)' },
+    elasticModulus: null,
+    thermalExpansion: 24e-6,
+    mechanicalSource: 'Composite build-up: no single modulus, so no sag estimate; expansion close to the aluminium skins, about 24 µm/(m·K), from memory.',
   },
   {
     id: 'perforated-aluminium',
@@ -202,6 +230,10 @@ export const panelMaterialSpecs: PanelMaterialSpec[] = [
     opacity: 0.7,
     source:
       'Equivalent density = 2,700 kg/m³ × (1 − open area). Round 5 mm holes on an 8 mm staggered pitch (common practice, recalled from memory) give about 35 % open area (derived from the geometry).',
+    thicknessTolerance: { fixed: 0.1, share: 0, source: 'About ±0.1 mm (from memory)' },
+    elasticModulus: null,
+    thermalExpansion: 23.4e-6,
+    mechanicalSource: 'Perforations make the bending stiffness uncertain, so no sag estimate; expansion of aluminium 23.4 µm/(m·K) (6063-T6, verified).',
   },
   {
     id: 'plywood',
@@ -212,6 +244,10 @@ export const panelMaterialSpecs: PanelMaterialSpec[] = [
     color: '#c9a46c',
     opacity: 1,
     source: 'Density 500–700 kg/m³, partly (mid-range used; varies by species). Thicknesses common practice, no source.',
+    thicknessTolerance: { fixed: 0.3, share: 0.03, source: 'About ±(0.3 + 3 %) mm (from memory; plywood thickness varies by grade)' },
+    elasticModulus: 7000,
+    thermalExpansion: 7e-6,
+    mechanicalSource: 'E about 7 GPa along the face grain (varies 5–9 GPa by species and lay-up) and expansion about 7 µm/(m·K) in the plane, from memory.',
   },
   {
     id: 'mdf',
@@ -222,6 +258,10 @@ export const panelMaterialSpecs: PanelMaterialSpec[] = [
     color: '#a9825a',
     opacity: 1,
     source: 'Density 500–1,000 kg/m³, partly (a typical board value used). Thicknesses common practice, no source.',
+    thicknessTolerance: { fixed: 0.2, share: 0, source: 'About ±0.2 mm (from memory)' },
+    elasticModulus: 3000,
+    thermalExpansion: 10e-6,
+    mechanicalSource: 'E about 3 GPa and expansion about 10 µm/(m·K), from memory.',
   },
 ];
 
@@ -230,6 +270,11 @@ export function getPanelMaterialSpec(id: string): PanelMaterialSpec {
   const spec = panelMaterialSpecs.find((candidate) => candidate.id === id);
   if (!spec) throw new Error(`Unknown panel material “${id}”.`);
   return spec;
+}
+
+/** Upper thickness tolerance ± in mm of a sheet of this material and nominal thickness (mm). */
+export function sheetThicknessTolerance(spec: Pick<PanelMaterialSpec, 'thicknessTolerance'>, thickness: number): number {
+  return spec.thicknessTolerance.fixed + spec.thicknessTolerance.share * thickness;
 }
 
 /** Panel mass in kg from its size in mm and the material's (equivalent) density. */

@@ -5,10 +5,14 @@
  */
 import type { ProfileSystem, SystemId } from './types';
 
-/** Short code used in ids and part codes, e.g. 'm40' / 'M40'. */
+/**
+ * Short code used in ids and part codes, e.g. 'm40' / 'M40'. Inch systems are named by their
+ * nominal size ('in1', 'in1.5'); schema version 2 renamed the older inch ids (see
+ * `design/migrations.ts`, `LEGACY_INCH_PREFIXES`).
+ */
 export const SYSTEM_PREFIX: Record<SystemId, string> = {
-  'inch-1.0': 'i10',
-  'inch-1.5': 'i15',
+  'inch-1.0': 'in1',
+  'inch-1.5': 'in1.5',
   'metric-20': 'm20',
   'metric-30': 'm30',
   'metric-40': 'm40',
@@ -16,7 +20,7 @@ export const SYSTEM_PREFIX: Record<SystemId, string> = {
 };
 
 export function systemPartCode(systemId: SystemId): string {
-  return SYSTEM_PREFIX[systemId].toUpperCase();
+  return SYSTEM_PREFIX[systemId].replace('.', '').toUpperCase();
 }
 
 const SOURCE =
@@ -27,11 +31,11 @@ type SystemFigures = Omit<ProfileSystem, 'tNutIds' | 'defaultVariantId' | 'defau
 const figures: SystemFigures[] = [
   {
     id: 'inch-1.0',
-    name: 'Inch 1.0 in',
+    name: '1 in square',
     unitFamily: 'inch',
     outerSize: 25.4,
     slotOpening: 6.6, // about 0.26 in
-    slotLipThickness: 2.3,
+    slotLipThickness: 2.7,
     slotChamberWidth: 14,
     slotDepth: 8,
     slotEngagement: 4.5,
@@ -43,11 +47,11 @@ const figures: SystemFigures[] = [
   },
   {
     id: 'inch-1.5',
-    name: 'Inch 1.5 in',
+    name: '1.5 in square',
     unitFamily: 'inch',
     outerSize: 38.1,
     slotOpening: 8.1, // about 0.32 in
-    slotLipThickness: 3,
+    slotLipThickness: 2.6,
     slotChamberWidth: 19,
     slotDepth: 11.5,
     slotEngagement: 6.5,
@@ -79,7 +83,7 @@ const figures: SystemFigures[] = [
     unitFamily: 'metric',
     outerSize: 30,
     slotOpening: 8,
-    slotLipThickness: 2.2,
+    slotLipThickness: 1.9,
     slotChamberWidth: 16.5,
     slotDepth: 9,
     slotEngagement: 5.5,
@@ -95,7 +99,7 @@ const figures: SystemFigures[] = [
     unitFamily: 'metric',
     outerSize: 40,
     slotOpening: 8,
-    slotLipThickness: 4.3,
+    slotLipThickness: 2.0,
     slotChamberWidth: 20,
     slotDepth: 12.2,
     slotEngagement: 6.5,
@@ -111,7 +115,7 @@ const figures: SystemFigures[] = [
     unitFamily: 'metric',
     outerSize: 45,
     slotOpening: 10,
-    slotLipThickness: 4.5,
+    slotLipThickness: 2.8,
     slotChamberWidth: 22.5,
     slotDepth: 13.5,
     slotEngagement: 7.5,
@@ -137,9 +141,9 @@ export const profileSystems: ProfileSystem[] = figures.map((f) => {
 export function squareVariantId(systemId: SystemId): string {
   switch (systemId) {
     case 'inch-1.0':
-      return 'i10-1x1';
+      return 'in-1x1';
     case 'inch-1.5':
-      return 'i15-1.5x1.5';
+      return 'in-1.5x1.5';
     case 'metric-20':
       return 'm20-20x20';
     case 'metric-30':

@@ -17,10 +17,10 @@ interface VariantSpec {
 }
 
 const variantSpecs: VariantSpec[] = [
-  { id: squareVariantId('inch-1.0'), systemId: 'inch-1.0', name: '1 x 1 in', cells: 1, sizeCode: '1X1' },
-  { id: 'i10-1x2', systemId: 'inch-1.0', name: '1 x 2 in', cells: 2, sizeCode: '1X2' },
-  { id: squareVariantId('inch-1.5'), systemId: 'inch-1.5', name: '1.5 x 1.5 in', cells: 1, sizeCode: '15X15' },
-  { id: 'i15-1.5x3', systemId: 'inch-1.5', name: '1.5 x 3 in', cells: 2, sizeCode: '15X30' },
+  { id: squareVariantId('inch-1.0'), systemId: 'inch-1.0', name: '1 in square', cells: 1, sizeCode: '1X1' },
+  { id: 'in-1x2', systemId: 'inch-1.0', name: '1 x 2 in', cells: 2, sizeCode: '1X2' },
+  { id: squareVariantId('inch-1.5'), systemId: 'inch-1.5', name: '1.5 in square', cells: 1, sizeCode: '15X15' },
+  { id: 'in-1.5x3', systemId: 'inch-1.5', name: '1.5 x 3 in', cells: 2, sizeCode: '15X30' },
   { id: squareVariantId('metric-20'), systemId: 'metric-20', name: '20 x 20 mm', cells: 1, sizeCode: '20X20' },
   { id: squareVariantId('metric-30'), systemId: 'metric-30', name: '30 x 30 mm', cells: 1, sizeCode: '30X30' },
   { id: squareVariantId('metric-40'), systemId: 'metric-40', name: '40 x 40 mm', cells: 1, sizeCode: '40X40' },
@@ -86,7 +86,8 @@ export function buildVariants(systems: ProfileSystem[], densityFor: (alloyId: st
       id: spec.id,
       partCode: `SW-${systemPartCode(spec.systemId)}-EXT-${spec.sizeCode}`,
       systemId: spec.systemId,
-      name: `${system.name} profile ${spec.name}`,
+      // Inch systems are named by nominal size already: "1.5 x 3 in profile", not "1.5 in square profile 1.5 x 3 in".
+      name: system.unitFamily === 'inch' ? `${spec.name} profile` : `${system.name} profile ${spec.name}`,
       width: system.outerSize,
       height: system.outerSize * spec.cells,
       cells: spec.cells,

@@ -25,10 +25,11 @@ export function profileName(info: ProfileInfo | undefined, id: string): string {
   return label ? `profile ${id} (${label})` : `profile ${id}`;
 }
 
+/** Lower and higher end along each axis. The design format's front is −Z, so the lower z end is the front. */
 const END_WORDS: Record<0 | 1 | 2, [string, string]> = {
   0: ['left', 'right'],
   1: ['bottom', 'top'],
-  2: ['back', 'front'],
+  2: ['front', 'back'],
 };
 
 /** "right", "top", "front"… : the end named by where it points in the model. */

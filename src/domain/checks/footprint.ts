@@ -1,6 +1,8 @@
 /**
- * The frame's footprint on the floor (convex hull, in the X–Z plane, of every part resting at the
- * lowest level) and how far the centre of mass is from its nearest edge: the tip-over lever arm.
+ * The frame's footprint on the floor (convex hull, in the X–Z plane) and how far the centre of mass
+ * is from its nearest edge: the tip-over lever arm. Where feet or casters are fitted to the lowest
+ * profile ends, the footprint runs through them (their stems sit on the profile's axis); otherwise
+ * through every profile resting at the lowest level. Edges are named with front = −Z.
  */
 import type { Vec3 } from '../geometry/vectors';
 import type { AnalysisContext } from './context';
@@ -9,7 +11,26 @@ const FLOOR_TOLERANCE_MM = 1;
 
 type P2 = [number, number];
 
-/** Floor contact points (x, z), mm. */
+/** Floor contact points (x, z), mm, and whether feet or profiles make them. */
+export function floorContact(ctx: AnalysisContext): { points: P2[]; kind: 'feet' | 'profiles' } {
+  let floor = Infinity;
+  for (const p of ctx.profiles) floor = Math.min(floor, p.box.minY);
+  const feet: P2[] = [];
+  for (const p of ctx.profiles) {
+    if (p.box.minY > floor + FLOOR_TOLERANCE_MM + Math.max(p.width, p.height)) continue;
+    for (const [point, accessories] of [
+      [p.startPoint, p.startAccessories],
+      [p.endPoint, p.endAccessories],
+    ] as const) {
+      if (point[1] > floor + FLOOR_TOLERANCE_MM + Math.max(p.width, p.height) / 2) continue;
+      if (accessories.some((a) => a.kind === 'leveling-foot' || a.kind === 'caster')) feet.push([point[0], point[2]]);
+    }
+  }
+  if (feet.length >= 3) return { points: feet, kind: 'feet' };
+  return { points: floorContactPoints(ctx), kind: 'profiles' };
+}
+
+/** Floor contact points (x, z), mm, of the profiles resting at the lowest level. */
 export function floorContactPoints(ctx: AnalysisContext): P2[] {
   let floor = Infinity;
   for (const p of ctx.profiles) floor = Math.min(floor, p.box.minY);
@@ -47,8 +68,9 @@ export function convexHull(points: P2[]): P2[] {
  * Signed distance (mm) from the centre of mass, projected on the floor, to the nearest footprint
  * edge: positive inside, negative outside. Null when nothing stands on the floor.
  */
-export function footprintLeverArm(ctx: AnalysisContext, centre: Vec3): { distance: number; edge: string } | null {
-  const hull = convexHull(floorContactPoints(ctx));
+export function footprintLeverArm(ctx: AnalysisContext, centre: Vec3): { distance: number; edge: string; footprint: 'feet' | 'profiles' } | null {
+  const contact = floorContact(ctx);
+  const hull = convexHull(contact.points);
   if (hull.length < 3) return null;
   const c: P2 = [centre[0], centre[2]];
   let best = Infinity;
@@ -67,11 +89,11 @@ export function footprintLeverArm(ctx: AnalysisContext, centre: Vec3): { distanc
       bestEdge = edgeName(ez / len, -ex / len);
     }
   }
-  return { distance: best, edge: bestEdge };
+  return { distance: best, edge: bestEdge, footprint: contact.kind };
 }
 
-/** Names an edge by its outward normal (x, z): +x right, −x left, +z front, −z back. */
-function edgeName(nx: number, nz: number): string {
+/** Names an edge by its outward normal (x, z): +x right, −x left, −z front, +z back (the design format's front is −Z). */
+export function edgeName(nx: number, nz: number): string {
   if (Math.abs(nx) >= Math.abs(nz)) return nx > 0 ? 'right' : 'left';
-  return nz > 0 ? 'front' : 'back';
+  return nz < 0 ? 'front' : 'back';
 }

@@ -4,17 +4,21 @@
  * its plane against the slots, and the corner notches connectors in the slot call for.
  */
 import type { Finding } from '../analysisTypes';
-import { SLOT_THICKNESS_CLEARANCE_MM, sheetFitsSlot, thickestFittingThickness } from '../design/slotLimits';
 import { panelAxes } from '../geometry/panelGeometry';
 import { sectionHalfExtentAlong } from '../geometry/profileGeometry';
 import { dominantAxis } from '../geometry/vectors';
 import type { AnalysisContext, PanelInfo } from './context';
+import { sheetThicknessTolerance } from '../catalogue/materials';
 import { findingId, formatNumber, mm } from './describe';
 import { addGasketFix, setPanelThicknessFix } from './fixes';
 
 const CHECK = 'panel-fit';
 /** Thinner than this share of the slot opening rattles: needs a gasket or retainer strip. Common practice, no source. */
 export const THIN_PANEL_RATIO = 0.6;
+/** Temperature swing a panel sees after fitting, K (indoor use; common practice, no source). */
+export const PANEL_TEMPERATURE_SWING_K = 30;
+/** Thermal expansion of the aluminium frame, per K (6063-T6, 23.4 µm/(m·K); ASM / MatWeb, verified). */
+const FRAME_EXPANSION = 23.4e-6;
 /** Drawn opening and frame opening may differ by this much, mm. */
 const OPENING_TOLERANCE_MM = 1;
 /** Connector kinds that sit in a slot at a frame corner, where a captured panel needs a notch. */
@@ -45,6 +49,7 @@ export function panelFitFindings(ctx: AnalysisContext): Finding[] {
       continue;
     }
     checkThickness(ctx, info, out);
+    checkThermal(ctx, info, out);
     checkOpening(info, out);
     const notch = cornerNotches(ctx, info);
     if (notch.corners > 0) {
@@ -61,22 +66,43 @@ export function panelFitFindings(ctx: AnalysisContext): Finding[] {
   return out;
 }
 
+/** The thickest sheet of the material that goes into the slot even at the top of its thickness tolerance, mm. */
+export function thickestFittingSheet(info: PanelInfo, slotOpening: number): number | undefined {
+  const material = info.material;
+  if (!material) return undefined;
+  return material.thicknesses.filter((t) => t + sheetThicknessTolerance(material, t) <= slotOpening).sort((a, b) => b - a)[0];
+}
+
 function checkThickness(ctx: AnalysisContext, info: PanelInfo, out: Finding[]): void {
   const { panel, slotOpening } = info;
   if (slotOpening === null) return;
   const materialName = info.material?.name.toLowerCase() ?? panel.materialId;
   const systemName = info.bounding[0].system?.name ?? ctx.design.systemId;
-  if (!sheetFitsSlot(panel.thickness, slotOpening)) {
-    const fits = thickestFittingThickness(info.material?.thicknesses ?? [], slotOpening);
-    const fix = fits !== undefined ? setPanelThicknessFix(panel.id, fits) : undefined;
+  const fits = thickestFittingSheet(info, slotOpening);
+  const fix = fits !== undefined ? setPanelThicknessFix(panel.id, fits) : undefined;
+  const instead = fits !== undefined ? ` Use ${formatNumber(fits)} mm sheet, which fits even at the top of its tolerance, or mount the panel on a face.` : ' Mount it on a face instead.';
+  if (panel.thickness > slotOpening) {
     out.push({
       id: findingId(CHECK, 'too-thick', [panel.id]),
       check: CHECK,
       severity: 'error',
       partIds: [panel.id, ...info.bounding.map((b) => b.profile.id)],
-      message: `${formatNumber(panel.thickness)} mm ${materialName} is too thick for the ${formatNumber(slotOpening)} mm slot opening of the ${systemName} profiles around panel ${panel.id} (a sheet keeps ${formatNumber(SLOT_THICKNESS_CLEARANCE_MM)} mm clearance to slide in); it will not go into the slot.${fits !== undefined ? ` Use ${formatNumber(fits)} mm sheet, or mount the panel on a face.` : ' Mount it on a face instead.'}`,
+      message: `${formatNumber(panel.thickness)} mm ${materialName} is thicker than the ${formatNumber(slotOpening)} mm slot opening of the ${systemName} profiles around panel ${panel.id}; it will not go into the slot.${instead}`,
       ...(fix ? { fix } : {}),
       data: { thicknessMm: panel.thickness, slotOpeningMm: slotOpening },
+    });
+    return;
+  }
+  const tolerance = info.material ? sheetThicknessTolerance(info.material, panel.thickness) : 0;
+  if (panel.thickness + tolerance > slotOpening) {
+    out.push({
+      id: findingId(CHECK, 'no-clearance', [panel.id]),
+      check: CHECK,
+      severity: 'warning',
+      partIds: [panel.id, ...info.bounding.map((b) => b.profile.id)],
+      message: `${formatNumber(panel.thickness)} mm ${materialName} may be up to ${formatNumber(panel.thickness + tolerance, 2)} mm thick (tolerance ±${formatNumber(tolerance, 2)} mm; ${info.material?.thicknessTolerance.source ?? 'no source'}), more than the ${formatNumber(slotOpening)} mm slot opening of the ${systemName} profiles around panel ${panel.id}: it may not go into the slot.${instead}`,
+      ...(fix ? { fix } : {}),
+      data: { thicknessMm: panel.thickness, toleranceMm: round(tolerance), slotOpeningMm: slotOpening },
     });
     return;
   }
@@ -95,6 +121,31 @@ function checkThickness(ctx: AnalysisContext, info: PanelInfo, out: Finding[]): 
       data: { thicknessMm: panel.thickness, slotOpeningMm: slotOpening, gasketLengthMm: gasketLength },
     });
   }
+}
+
+/**
+ * Thermal growth of a captured sheet against the aluminium frame over PANEL_TEMPERATURE_SWING_K:
+ * ΔL = |α_panel − α_frame|·L·ΔT, against the play left in the slots (the clearance plus the slot
+ * depth beyond the engagement, both sides).
+ */
+function checkThermal(ctx: AnalysisContext, info: PanelInfo, out: Finding[]): void {
+  const material = info.material;
+  if (!material) return;
+  const systems = info.bounding.map((b) => b.system).filter((x): x is NonNullable<typeof x> => !!x);
+  if (systems.length === 0) return;
+  const room = Math.min(...systems.map((x) => x.slotDepth - x.slotEngagement));
+  const play = ctx.design.settings.panelClearance + 2 * Math.max(0, room);
+  const length = Math.max(info.sheetWidth, info.sheetHeight);
+  const growth = Math.abs(material.thermalExpansion - FRAME_EXPANSION) * length * PANEL_TEMPERATURE_SWING_K;
+  if (growth <= play) return;
+  out.push({
+    id: findingId(CHECK, 'thermal', [info.panel.id]),
+    check: CHECK,
+    severity: 'warning',
+    partIds: [info.panel.id],
+    message: `Panel ${info.panel.id} (${material.name.toLowerCase()}) grows about ${mm(growth)} more than the frame over a ${PANEL_TEMPERATURE_SWING_K} K temperature swing along its ${mm(length)} length, more than the ${mm(play)} of play in the slots: it can bow or crack. Leave more clearance or use a stiffer, lower-expansion sheet.`,
+    data: { growthMm: round(growth), playMm: round(play) },
+  });
 }
 
 /** Clear opening between the inner faces of the bounding profiles, and whether the panel is in their slot plane. */

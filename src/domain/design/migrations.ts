@@ -4,6 +4,12 @@
  *
  * v0 → v1: profiles were stored by their two end points (`from`, `to`); v1 stores `start`,
  * a unit `direction` and a `length`. Nothing else changed.
+ *
+ * v1 → v2: inch catalogue ids are named by nominal size. Profile variants 'i10-1x1', 'i10-1x2',
+ * 'i15-1.5x1.5', 'i15-1.5x3' become 'in-1x1', 'in-1x2', 'in-1.5x1.5', 'in-1.5x3'; every other inch
+ * catalogue id ('i10-corner-bracket', 'i15-leveling-foot', …) takes the prefix 'in1-' / 'in1.5-'.
+ * Only values of catalogue references (variantId, connectorId, partId, fastenerId, tNutId) are
+ * renamed; part ids, references to parts (profileId, panelId, …) and labels are the user's own.
  */
 import { CURRENT_SCHEMA_VERSION } from './schema';
 
@@ -40,8 +46,40 @@ const migrateV0toV1: Migration = (doc) => {
   return { doc: { ...doc, profiles: migrated, schemaVersion: 1 }, issues };
 };
 
+/** The inch prefixes before version 2, and what they became. */
+export const LEGACY_INCH_PREFIXES: Record<string, { variant: string; other: string }> = {
+  i10: { variant: 'in', other: 'in1' },
+  i15: { variant: 'in', other: 'in1.5' },
+};
+const LEGACY_VARIANT_SIZES = new Set(['1x1', '1x2', '1.5x1.5', '1.5x3']);
+
+/** The version 2 name of a version 1 catalogue id; ids that were never inch ids come back unchanged. */
+export function renameLegacyInchId(id: string): string {
+  const match = /^(i10|i15)-(.+)$/.exec(id);
+  if (!match) return id;
+  const prefixes = LEGACY_INCH_PREFIXES[match[1]];
+  return LEGACY_VARIANT_SIZES.has(match[2]) ? `${prefixes.variant}-${match[2]}` : `${prefixes.other}-${match[2]}`;
+}
+
+const CATALOGUE_REFERENCE_KEYS = new Set(['variantId', 'connectorId', 'partId', 'fastenerId', 'tNutId']);
+
+function renameCatalogueReferences(value: unknown): unknown {
+  if (Array.isArray(value)) return value.map(renameCatalogueReferences);
+  if (typeof value !== 'object' || value === null) return value;
+  const out: Raw = {};
+  for (const [key, v] of Object.entries(value as Raw)) {
+    out[key] = CATALOGUE_REFERENCE_KEYS.has(key) && typeof v === 'string' ? renameLegacyInchId(v) : renameCatalogueReferences(v);
+  }
+  return out;
+}
+
+const migrateV1toV2: Migration = (doc) => {
+  const renamed = renameCatalogueReferences(doc) as Raw;
+  return { doc: { ...renamed, schemaVersion: 2 }, issues: [] };
+};
+
 /** migrations[n] turns version n into version n + 1. */
-const migrations: Migration[] = [migrateV0toV1];
+const migrations: Migration[] = [migrateV0toV1, migrateV1toV2];
 
 export function migrateToCurrent(input: Raw): { doc: Raw; issues: MigrationIssue[]; fromVersion: number } {
   const version = input.schemaVersion;

@@ -26,7 +26,7 @@ import { unsafeTextReason, type SafeTextOptions } from '../text/safeText';
  * angled braces can come later without a format change; the editor keeps it axis-aligned for now.
  */
 
-export const CURRENT_SCHEMA_VERSION = 1 as const;
+export const CURRENT_SCHEMA_VERSION = 2 as const;
 
 const id = z
   .string()
@@ -269,11 +269,39 @@ export const loadCaseSchema = z.object({
 });
 export type LoadCase = z.infer<typeof loadCaseSchema>;
 
+/** Stock bars one profile system is bought in: lengths with a price per bar, and the saw settings. */
+export const systemStockSchema = z.object({
+  bars: z
+    .array(z.object({ length: positiveMm, cost: z.number().finite().min(0) }))
+    .min(1, 'Give at least one bar length')
+    .max(8),
+  kerf: nonNegativeMm.default(3),
+  /** Squared off each bar end before cutting, mm; each trimmed end also costs a kerf. */
+  trimStart: nonNegativeMm.default(5),
+  trimEnd: nonNegativeMm.default(5),
+  minReusableOffcut: nonNegativeMm.default(150),
+});
+export type SystemStock = z.infer<typeof systemStockSchema>;
+
+/** A piece of profile already on the shelf, used before new bars are cut. */
+export const offcutOnHandSchema = z.object({
+  variantId: id,
+  length: positiveMm,
+  quantity: z.number().int().min(1).max(1000).default(1),
+});
+export type OffcutOnHand = z.infer<typeof offcutOnHandSchema>;
+
 export const designSettingsSchema = z.object({
   alloyId: id.default('6063-T5'),
+  /** Bar length for the design's own system, mm; left at 3,000 the system's own bar lengths apply. */
   stockLength: positiveMm.default(3000),
   kerf: nonNegativeMm.default(3),
+  /** Trimmed off each bar end, mm (each trimmed end also costs a kerf). */
   endTrim: nonNegativeMm.default(5),
+  /** Stock per profile system, by system id; systems not named here use their own defaults. */
+  stockBySystem: z.record(id, systemStockSchema).optional(),
+  /** Offcuts on hand, used before new bars. */
+  offcutsOnHand: z.array(offcutOnHandSchema).max(500).optional(),
   minReusableOffcut: nonNegativeMm.default(150),
   /** Clearance subtracted from a captured panel's size, total per direction, mm. */
   panelClearance: nonNegativeMm.default(1),

@@ -1,7 +1,87 @@
-/** One stock plan per profile variant, from the design's stock settings (mm). */
+/**
+ * Stock plans per profile variant, with stock settings per profile system. Lengths mm, costs in the
+ * price list's currency (demo prices).
+ *
+ * - Settings: `settings.stockBySystem[systemId]` when given; otherwise the system's own bar
+ *   lengths (its demo bar and a half bar, priced from the demo price per metre). The design-wide
+ *   `stockLength` applies to the design's own system when it was changed from the 3,000 mm default.
+ * - End trim is per bar end and each trimmed end costs one kerf: usable = L − Σ(trim + kerf).
+ * - Offcuts on hand are used first (best fit, longest cut first).
+ * - New bars: the cheapest single bar length, then each bar swapped for the cheapest length that
+ *   still holds its cuts, giving the cheapest mix found. The lower bound on cost is the total cut
+ *   length (with kerfs) at the cheapest price per usable millimetre.
+ */
 import type { VariantStockPlan } from '../analysisTypes';
 import type { AnalysisContext } from '../checks/context';
-import { planStock, type StockCut } from './stockPlan';
+import type { ProfileSystem } from '../catalogue/types';
+import type { DesignDocument, SystemStock } from '../design/schema';
+import { planStock, type StockBar, type StockCut } from './stockPlan';
+
+/** Price of a half bar per metre against a full one: short bars cost more per metre (demo assumption, invented). */
+const HALF_BAR_PRICE_FACTOR = 1.15;
+const DEFAULT_STOCK_LENGTH = 3000;
+const TOLERANCE = 1e-6;
+
+/** Usable length of a bar, mm, with each trimmed end costing its trim and a kerf. */
+export function usableLength(length: number, s: Pick<SystemStock, 'kerf' | 'trimStart' | 'trimEnd'>): number {
+  return length - trimAllowance(s);
+}
+
+/** Total taken off a bar's two ends, mm: each trimmed end loses the trim plus one kerf. */
+export function trimAllowance(s: Pick<SystemStock, 'kerf' | 'trimStart' | 'trimEnd'>): number {
+  return (s.trimStart > 0 ? s.trimStart + s.kerf : 0) + (s.trimEnd > 0 ? s.trimEnd + s.kerf : 0);
+}
+
+/** The stock settings in force for one system of a design. */
+export function stockSettingsFor(design: DesignDocument, system: ProfileSystem | undefined, pricePerMetre: number): SystemStock {
+  const systemId = system?.id ?? design.systemId;
+  const own = design.settings.stockBySystem?.[systemId];
+  if (own) return own;
+  const s = design.settings;
+  const base = { kerf: s.kerf, trimStart: s.endTrim, trimEnd: s.endTrim, minReusableOffcut: s.minReusableOffcut };
+  if (systemId === design.systemId && s.stockLength !== DEFAULT_STOCK_LENGTH) {
+    return { ...base, bars: [{ length: s.stockLength, cost: round((s.stockLength / 1000) * pricePerMetre) }] };
+  }
+  const full = system?.demoStockLength ?? DEFAULT_STOCK_LENGTH;
+  const half = Math.round(full / 2);
+  return {
+    ...base,
+    bars: [
+      { length: full, cost: round((full / 1000) * pricePerMetre) },
+      { length: half, cost: round((half / 1000) * pricePerMetre * HALF_BAR_PRICE_FACTOR) },
+    ],
+  };
+}
+
+export interface OffcutUse {
+  /** mm */
+  length: number;
+  cuts: StockCut[];
+  /** mm left of the offcut */
+  left: number;
+}
+
+/** Cuts placed in offcuts on hand (best fit, longest cut first), and the cuts still to place. */
+export function useOffcuts(cuts: StockCut[], offcuts: number[], kerf: number): { used: OffcutUse[]; rest: StockCut[] } {
+  const bins = offcuts.map((length) => ({ length, space: length + kerf, cuts: [] as StockCut[] }));
+  const rest: StockCut[] = [];
+  for (const cut of [...cuts].sort((a, b) => b.length - a.length)) {
+    let best: (typeof bins)[number] | null = null;
+    for (const bin of bins) if (bin.space + TOLERANCE >= cut.length + kerf && (!best || bin.space < best.space)) best = bin;
+    if (!best) rest.push(cut);
+    else {
+      best.cuts.push(cut);
+      best.space -= cut.length + kerf;
+    }
+  }
+  const used = bins.filter((b) => b.cuts.length > 0).map((b) => ({ length: b.length, cuts: b.cuts, left: Math.max(0, round(b.space - kerf)) }));
+  return { used, rest };
+}
+
+function barHolds(bar: StockBar, usable: number, kerf: number): boolean {
+  const total = bar.cuts.reduce((s, c) => s + c.length, 0) + Math.max(0, bar.cuts.length - 1) * kerf;
+  return total <= usable + TOLERANCE;
+}
 
 export function stockPlans(ctx: AnalysisContext): VariantStockPlan[] {
   const byVariant = new Map<string, StockCut[]>();
@@ -10,11 +90,59 @@ export function stockPlans(ctx: AnalysisContext): VariantStockPlan[] {
     list.push({ id: info.profile.id, length: info.profile.length, ...(info.profile.label ? { label: info.profile.label } : {}) });
     byVariant.set(info.profile.variantId, list);
   }
-  const s = ctx.design.settings;
+  const prices = ctx.catalogue.catalogue.prices.profilePerMetre;
   return [...byVariant.entries()]
     .sort((a, b) => (a[0] < b[0] ? -1 : 1))
-    .map(([variantId, cuts]) => ({
-      variantId,
-      plan: planStock({ cuts, stockLength: s.stockLength, kerf: s.kerf, endTrim: s.endTrim, minReusableOffcut: s.minReusableOffcut }),
-    }));
+    .map(([variantId, cuts]) => {
+      const variant = ctx.catalogue.variants.get(variantId);
+      const system = variant ? ctx.catalogue.systems.get(variant.systemId) : undefined;
+      const settings = stockSettingsFor(ctx.design, system, prices[variantId] ?? 0);
+      const offcuts = (ctx.design.settings.offcutsOnHand ?? []).filter((o) => o.variantId === variantId).flatMap((o) => Array.from({ length: o.quantity }, () => o.length));
+      return planVariant(variantId, system?.id ?? ctx.design.systemId, cuts, settings, offcuts);
+    });
+}
+
+/** One variant's plan: offcuts first, then the cheapest mix of bar lengths. */
+export function planVariant(variantId: string, systemId: string, cuts: StockCut[], settings: SystemStock, offcuts: number[] = []): VariantStockPlan {
+  const { used, rest } = useOffcuts(cuts, offcuts, settings.kerf);
+  const trim = trimAllowance(settings);
+  const options = [...settings.bars].sort((a, b) => b.length - a.length);
+  let best: { plan: ReturnType<typeof planStock>; bars: { length: number; cost: number }[]; cost: number } | null = null;
+  for (const option of options) {
+    if (option.length - trim <= 0) continue;
+    const plan = planStock({ cuts: rest, stockLength: option.length, kerf: settings.kerf, endTrim: trim, minReusableOffcut: settings.minReusableOffcut });
+    // Each bar bought in the cheapest length that still holds its cuts.
+    const bars = plan.bars.map((bar) => {
+      let pick = option;
+      for (const o of options) if (o.cost < pick.cost && barHolds(bar, o.length - trim, settings.kerf)) pick = o;
+      return pick;
+    });
+    const unplaced = plan.unplaceable.length;
+    const cost = bars.reduce((s, b) => s + b.cost, 0) + unplaced * 1e9;
+    if (!best || cost < best.cost - TOLERANCE) best = { plan, bars, cost };
+  }
+  const plan = best?.plan ?? planStock({ cuts: rest, stockLength: options[0].length, kerf: settings.kerf, endTrim: trim, minReusableOffcut: settings.minReusableOffcut });
+  const bars = best?.bars ?? [];
+  // Recompute offcuts for bars bought shorter than the plan's length.
+  const adjusted = plan.bars.map((bar, i) => {
+    const usable = (bars[i]?.length ?? options[0].length) - trim;
+    const offcut = Math.max(0, round(usable - bar.usedLength));
+    return { ...bar, offcut, reusable: offcut >= settings.minReusableOffcut && offcut > 0 };
+  });
+  const need = rest.reduce((s, c) => s + c.length + settings.kerf, 0);
+  const cheapestPerMm = Math.min(...options.filter((o) => o.length - trim > 0).map((o) => o.cost / (o.length - trim + settings.kerf)));
+  return {
+    variantId,
+    systemId,
+    plan: { ...plan, bars: adjusted },
+    settings,
+    barStock: bars,
+    offcutsUsed: used,
+    cost: round(bars.reduce((s, b) => s + b.cost, 0)),
+    costLowerBound: round(Number.isFinite(cheapestPerMm) ? need * cheapestPerMm : 0),
+  };
+}
+
+function round(v: number): number {
+  return Math.round(v * 100) / 100;
 }

@@ -1,10 +1,10 @@
-import { designDocumentSchema, type DesignDocument, type Profile } from '@/domain/design/schema';
+import { designDocumentSchema, type DesignDocument, type Profile, CURRENT_SCHEMA_VERSION } from '@/domain/design/schema';
 import type { EditorCommand } from '@/features/editor/commands/EditorCommand';
 
 /** A small frame: two 500 mm rails along X, 40 mm apart in Y. */
 export function twoRailDesign(): DesignDocument {
   return designDocumentSchema.parse({
-    schemaVersion: 1,
+    schemaVersion: CURRENT_SCHEMA_VERSION,
     name: 'Two rails',
     systemId: 'metric-40',
     profiles: [

@@ -2,7 +2,7 @@
 import { afterEach, describe, expect, it } from 'vitest';
 import { act, cleanup, fireEvent, screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
-import { designDocumentSchema } from '@/domain/design/schema';
+import { designDocumentSchema, CURRENT_SCHEMA_VERSION } from '@/domain/design/schema';
 import { ProfileInspector } from '@/features/editor/inspectors/ProfileInspector';
 import { PanelInspector } from '@/features/editor/inspectors/PanelInspector';
 import { InspectorContent } from '@/features/editor/inspectors/InspectorContent';
@@ -85,7 +85,7 @@ describe('profile inspector', () => {
 
 function framedPanelDesign() {
   return designDocumentSchema.parse({
-    schemaVersion: 1,
+    schemaVersion: CURRENT_SCHEMA_VERSION,
     name: 'Framed panel',
     systemId: 'metric-40',
     profiles: [

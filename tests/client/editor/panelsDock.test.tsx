@@ -4,7 +4,7 @@ import { act, cleanup, screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { OutputsDock } from '@/features/editor/panels/OutputsDock';
 import { createEditorStore } from '@/features/editor/store/editorStore';
-import { designDocumentSchema } from '@/domain/design/schema';
+import { designDocumentSchema, CURRENT_SCHEMA_VERSION } from '@/domain/design/schema';
 import { renderWithStore, storeWithAnalysis } from './panelsFixtures';
 
 afterEach(cleanup);
@@ -53,7 +53,7 @@ describe('Outputs dock', () => {
   });
 
   it('shows an empty state for an empty design', () => {
-    const design = designDocumentSchema.parse({ schemaVersion: 1, name: 'Blank', systemId: 'metric-40' });
+    const design = designDocumentSchema.parse({ schemaVersion: CURRENT_SCHEMA_VERSION, name: 'Blank', systemId: 'metric-40' });
     renderWithStore(<OutputsDock />, createEditorStore({ design }));
     expect(screen.getByText('Nothing to list yet.')).toBeInTheDocument();
   });

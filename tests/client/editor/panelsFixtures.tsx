@@ -1,13 +1,13 @@
 import { render } from '@testing-library/react';
 import type { ReactNode } from 'react';
 import type { DesignAnalysis } from '@/domain/analysisTypes';
-import { designDocumentSchema, type DesignDocument } from '@/domain/design/schema';
+import { designDocumentSchema, type DesignDocument, CURRENT_SCHEMA_VERSION } from '@/domain/design/schema';
 import { createEditorStore, EditorStoreProvider, type EditorStoreApi } from '@/features/editor/store/editorStore';
 
 /** A small table frame: four 600 mm rails and a shelf panel, metric 40. */
 export function shelfDesign(): DesignDocument {
   return designDocumentSchema.parse({
-    schemaVersion: 1,
+    schemaVersion: CURRENT_SCHEMA_VERSION,
     name: 'Bench shelf, test',
     systemId: 'metric-40',
     settings: { stockLength: 1000, kerf: 4, endTrim: 10, minReusableOffcut: 150 },
@@ -101,6 +101,7 @@ export function handMadeAnalysis(): DesignAnalysis {
       note: 'demo prices',
     },
     structure: [],
+    stability: { empty: null, worst: null },
   };
 }
 

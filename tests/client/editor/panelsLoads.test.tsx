@@ -1,10 +1,11 @@
 // @vitest-environment jsdom
 import { afterEach, describe, expect, it } from 'vitest';
-import { cleanup, screen, within } from '@testing-library/react';
+import { cleanup, render, screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import type { StructureResult } from '@/domain/analysisTypes';
 import type { LengthUnit } from '@/domain/units';
 import { OutputsDock } from '@/features/editor/panels/OutputsDock';
+import { StructureCautions } from '@/features/editor/panels/StructureCautions';
 import { deflectedShape } from '@/features/editor/panels/deflectedShape';
 import { createEditorStore } from '@/features/editor/store/editorStore';
 import { handMadeAnalysis, historyLength, renderWithStore, shelfDesign, storeWithAnalysis } from './panelsFixtures';
@@ -104,8 +105,18 @@ describe('Loads tab: results', () => {
         maxMoment: 60000, maxDeflection: 2.1, deflectionLimit: 600 / 360, deflectionOk: false, maxStress: 13.3, allowableStress: 55, stressOk: true,
       },
     ],
-    legs: [{ profileId: 'leg-1', length: 400, endCondition: 'fixed-free', effectiveLengthFactor: 2.1, load: 250, bucklingLoad: 50000, utilisation: 0.005, ok: true }],
-    tipOver: { pushHeight: 400, weight: 494, leverArm: 150, force: 185, edge: 'front' },
+    legs: [
+      {
+        profileId: 'leg-1', length: 400, endCondition: 'pinned-fixed-sway', effectiveLengthFactor: 2, load: 250, criticalLoad: 60000, squashLoad: 63000, chi: 0.79,
+        bucklingLoad: 50000, utilisation: 0.005, bendingMoment: 0, combinedUtilisation: 0.025, ok: true,
+      },
+    ],
+    tipOver: { pushHeight: 400, weight: 494, leverArm: 150, force: 185, edge: 'front', threshold: 0, footprint: 'profiles' },
+    joints: [],
+    panels: [],
+    racking: { bracedX: false, bracedZ: false, sideLoadX: 0, sideLoadZ: 0 },
+    problems: [],
+    settings: { safetyFactor: 2, deflectionLimitRatio: 360, alloyId: '6063-T5', minYield: 110 },
     cautions: [],
   };
 
@@ -145,7 +156,15 @@ describe('Loads tab: results', () => {
     expect(cautions).toHaveTextContent(/estimates/i);
     expect(cautions).toHaveTextContent(/Shear deflection is neglected/);
     expect(cautions).toHaveTextContent(/supplier's published data, local codes and a qualified engineer/);
-    expect(cautions).toHaveTextContent(/span\/360 and stress below yield divided by 2.0 are common practice/);
+    expect(cautions).toHaveTextContent(/Limits in force: deflection span\/360 and stress below yield divided by 2.0/);
+    expect(cautions).toHaveTextContent(/Not checked: local buckling/);
+  });
+
+  it('shows the limits actually in force after the settings change', () => {
+    render(<StructureCautions settings={{ safetyFactor: 3, deflectionLimitRatio: 240 }} />);
+    const cautions = screen.getByRole('complementary', { name: 'Cautions' });
+    expect(cautions).toHaveTextContent(/span\/240 and stress below yield divided by 3.0/);
+    expect(cautions).not.toHaveTextContent(/span\/360/);
   });
 });
 

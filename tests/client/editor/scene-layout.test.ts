@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import * as THREE from 'three';
 import { defaultCatalogue } from '@/domain/catalogue';
-import { designDocumentSchema, type DesignDocumentInput } from '@/domain/design/schema';
+import { designDocumentSchema, type DesignDocumentInput, CURRENT_SCHEMA_VERSION } from '@/domain/design/schema';
 import type { DesignAnalysis } from '@/domain/analysisTypes';
 import { buildSceneLayout, profileMatrix } from '@/features/editor/scene/sceneLayout';
 import { SceneResources } from '@/features/editor/scene/sceneResources';
@@ -10,7 +10,7 @@ import { boundingSphereOf, fitDistance } from '@/features/editor/scene/cameraFra
 import { renderModeFromUrl } from '@/features/editor/scene/renderMode';
 
 function design(parts: Partial<DesignDocumentInput>) {
-  return designDocumentSchema.parse({ schemaVersion: 1, name: 'Scene layout test', systemId: 'metric-40', ...parts });
+  return designDocumentSchema.parse({ schemaVersion: CURRENT_SCHEMA_VERSION, name: 'Scene layout test', systemId: 'metric-40', ...parts });
 }
 
 const rail = (id: string, start: [number, number, number], direction: [number, number, number], length: number, variantId = 'm40-40x40') => ({

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { designDocumentSchema, type DesignDocument } from '@/domain/design/schema';
+import { designDocumentSchema, type DesignDocument, CURRENT_SCHEMA_VERSION } from '@/domain/design/schema';
 import { snapPoint, type SnapCatalogue } from '@/features/editor/snapping/snap';
 import { drawTarget } from '@/features/editor/snapping/drawTarget';
 import { gridStepsFor, roundToStep, unitIncrement } from '@/features/editor/snapping/steps';
@@ -13,7 +13,7 @@ const catalogue: SnapCatalogue = {
 
 function design(profiles: { id: string; variantId?: string; start: [number, number, number]; direction: [number, number, number]; length: number }[]): DesignDocument {
   return designDocumentSchema.parse({
-    schemaVersion: 1,
+    schemaVersion: CURRENT_SCHEMA_VERSION,
     name: 'Snapping test frame',
     systemId: 'metric-40',
     profiles: profiles.map((p) => ({ variantId: 'sq40', ...p })),

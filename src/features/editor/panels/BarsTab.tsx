@@ -6,7 +6,7 @@ import type { LengthUnit } from '@/domain/units';
 import { StockPlanPicture } from './StockPlanPicture';
 import { StockSettingsForm } from './StockSettingsForm';
 import type { StockSettingsPatch } from './panelCommands';
-import { showLength } from './format';
+import { showLength, variantName } from './format';
 
 export interface BarsTabProps {
   stockPlans: VariantStockPlan[];
@@ -35,7 +35,7 @@ export function BarsTab({ stockPlans, settings, pictureSettings = settings, unit
       {stockPlans.map(({ variantId, plan }) => (
         <section key={variantId} aria-labelledby={`bars-${variantId}`} className="flex flex-col gap-1">
           <h3 id={`bars-${variantId}`} className="text-sm font-semibold text-ink">
-            {variantId}
+            {variantName(variantId)}
           </h3>
           <dl className="grid grid-cols-2 gap-x-4 gap-y-0.5 text-sm sm:grid-cols-4">
             <Figure label="Bars needed" value={`${plan.barCount} bars`} />

@@ -5,7 +5,7 @@ import type { LengthUnit } from '@/domain/units';
 import { SortableTable } from './SortableTable';
 import { CsvButton } from './CsvButton';
 import { cutListToCsv, describeEnd, describeMachining } from './csv';
-import { csvFileName, showLength, showTolerance } from './format';
+import { csvFileName, showLength, showTolerance, variantName } from './format';
 
 export interface CutsTabProps {
   groups: CutListGroup[];
@@ -76,7 +76,7 @@ export function CutsTab({ groups, items, units, designName }: CutsTabProps) {
         columns={columns}
         rowKey={(group) => group.groupKey}
         groupBy={(group) => group.variantId}
-        renderGroupHeader={(variantId, rows) => `${variantId} · ${rows.reduce((sum, group) => sum + group.quantity, 0)} pieces`}
+        renderGroupHeader={(variantId, rows) => `${variantName(variantId)} · ${rows.reduce((sum, group) => sum + group.quantity, 0)} pieces`}
         totals={['Total', '', showLength(totalLength, units), `${pieceCount} pcs`, '', '', '']}
       />
     </div>

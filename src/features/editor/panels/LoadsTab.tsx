@@ -44,7 +44,7 @@ export function LoadsTab({ design, structure, selection, units, onAddLoadCase, o
         />
       </section>
       <div className="flex min-w-0 flex-col gap-3">
-        <StructureCautions extra={cautionsFromAnalysis} />
+        <StructureCautions extra={cautionsFromAnalysis} settings={design.settings} />
         {design.loadCases.length === 0 ? (
           <p className="text-sm text-ink-muted">No load cases yet. Select a shelf profile or panel, enter the load it carries, and add a case.</p>
         ) : (

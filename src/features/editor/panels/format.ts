@@ -1,3 +1,4 @@
+import { defaultCatalogue, getVariant } from '@/domain/catalogue';
 import { formatForce, formatLength, formatMass, type LengthUnit } from '@/domain/units';
 import type { BomUnit } from '@/domain/analysisTypes';
 
@@ -97,4 +98,11 @@ export function showSmallLength(mm: number, units: LengthUnit): string {
 export function showStress(mpa: number, units: LengthUnit): string {
   if (units === 'in') return `${Math.round(mpa * 145.0377377).toLocaleString('en-US')} psi`;
   return `${mpa < 10 ? mpa.toFixed(2) : mpa.toFixed(1)} MPa`;
+}
+
+/** The name people read for a profile variant ("40 x 40 mm", "1.5 x 3 in"), never its id. */
+export function variantName(variantId: string): string {
+  const variant = getVariant(defaultCatalogue, variantId);
+  if (!variant) return variantId;
+  return variant.name.replace(/ profile$/, '').replace(/^Metric \d+ mm profile /, '');
 }
