@@ -11,7 +11,7 @@ import { buildAnalysisContext, type AnalysisContext } from './checks/context';
 import { interferenceFindings } from './checks/interferenceFindings';
 import { jointFindings } from './checks/jointFindings';
 import { panelFitFindings } from './checks/panelFitFindings';
-import { sequenceFindings } from './checks/sequenceFindings';
+import { sequenceFindings } from './assembly/sequenceFindings';
 import { structureAnalysis } from './checks/structureFindings';
 import type { DesignDocument } from './design/schema';
 import { billOfMaterials } from './outputs/bom';

@@ -33,7 +33,7 @@ describe('interference check on random designs', () => {
     fc.assert(
       fc.property(fc.array(profileArb, { maxLength: 60 }), fc.array(panelArb, { maxLength: 8 }), fc.boolean(), (profiles, panels, withJoints) => {
         const design = designDocumentSchema.parse({
-          schemaVersion: 1,
+          schemaVersion: 2,
           name: 'Random',
           systemId: 'metric-40',
           profiles: profiles.map((p, i) => ({ ...p, id: `P${i}`, direction: [...p.direction] })),
@@ -51,7 +51,7 @@ describe('interference check on random designs', () => {
 
   it('finds overlaps at all in those random designs (the comparison is not vacuous)', () => {
     const design = designDocumentSchema.parse({
-      schemaVersion: 1,
+      schemaVersion: 2,
       name: 'Crossing',
       systemId: 'metric-40',
       profiles: [

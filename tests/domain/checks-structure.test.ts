@@ -21,7 +21,7 @@ const tubeCatalogue: Catalogue = {
 /** A 1,000 mm beam along X between two posts, joined at both ends. */
 function beamOnPosts(loads: DesignDocumentInput['loadCases'], variantId = 'm40-40x40', rollDeg = 0): DesignDocument {
   return designDocumentSchema.parse({
-    schemaVersion: 1,
+    schemaVersion: 2,
     name: 'Beam',
     systemId: 'metric-40',
     profiles: [

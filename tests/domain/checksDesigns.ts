@@ -86,7 +86,7 @@ export function boxFrame(o: BoxFrameOptions = {}): DesignDocument {
     });
   }
   return designDocumentSchema.parse({
-    schemaVersion: 1,
+    schemaVersion: 2,
     name: 'Test box frame',
     systemId: 'metric-40',
     profiles,

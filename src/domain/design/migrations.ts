@@ -4,8 +4,14 @@
  *
  * v0 → v1: profiles were stored by their two end points (`from`, `to`); v1 stores `start`,
  * a unit `direction` and a `length`. Nothing else changed.
+ *
+ * v1 → v2: the assembly sequence is part of the revision. Each step gains a `kind` (inferred from
+ * what it places and its title: flip, join, slide-in, finish or place) and the document gains
+ * `sequenceEdited` (false: a version 1 order was always the generated one). The order and ids are
+ * kept exactly.
  */
-import { CURRENT_SCHEMA_VERSION } from './schema';
+import { z } from 'zod';
+import { CURRENT_SCHEMA_VERSION, designDocumentSchema } from './schema';
 
 export interface MigrationIssue {
   path: string;
@@ -40,8 +46,32 @@ const migrateV0toV1: Migration = (doc) => {
   return { doc: { ...doc, profiles: migrated, schemaVersion: 1 }, issues };
 };
 
+const FINISH_PREFIXES = ['leveling-foot', 'caster', 'end-cap', 'gasket', 'slot-cover'];
+
+/** The kind of a version 1 step, from its title and the kinds of the accessories it places. */
+function inferStepKind(step: Raw, accessoryKinds: Map<string, string>): string {
+  const title = typeof step.title === 'string' ? step.title.toLowerCase() : '';
+  const partIds = Array.isArray(step.partIds) ? step.partIds.filter((x): x is string => typeof x === 'string') : [];
+  if (/^(flip|turn|stand the .* up)/.test(title)) return 'flip';
+  if (typeof step.subAssemblyId === 'string' && /^(bring|join)/.test(title)) return 'join';
+  if (/^slide/.test(title)) return 'slide-in';
+  if (partIds.length > 0 && partIds.every((id) => FINISH_PREFIXES.includes(accessoryKinds.get(id) ?? ''))) return 'finish';
+  return 'place';
+}
+
+const migrateV1toV2: Migration = (doc) => {
+  const accessoryKinds = new Map<string, string>();
+  if (Array.isArray(doc.accessories)) {
+    for (const a of doc.accessories as Raw[]) if (a && typeof a.id === 'string' && typeof a.kind === 'string') accessoryKinds.set(a.id, a.kind);
+  }
+  const steps = Array.isArray(doc.steps)
+    ? doc.steps.map((s: unknown) => (typeof s === 'object' && s !== null && !('kind' in s) ? { ...(s as Raw), kind: inferStepKind(s as Raw, accessoryKinds) } : s))
+    : doc.steps;
+  return { doc: { ...doc, ...(steps !== undefined ? { steps } : {}), sequenceEdited: doc.sequenceEdited ?? false, schemaVersion: 2 }, issues: [] };
+};
+
 /** migrations[n] turns version n into version n + 1. */
-const migrations: Migration[] = [migrateV0toV1];
+const migrations: Migration[] = [migrateV0toV1, migrateV1toV2];
 
 export function migrateToCurrent(input: Raw): { doc: Raw; issues: MigrationIssue[]; fromVersion: number } {
   const version = input.schemaVersion;
@@ -67,3 +97,13 @@ export function migrateToCurrent(input: Raw): { doc: Raw; issues: MigrationIssue
   }
   return { doc, issues, fromVersion: version };
 }
+
+/**
+ * The design-document schema for documents read back from storage: older versions are migrated
+ * first, so a revision saved as version 1 loads as the current version. Use it wherever a stored
+ * document is validated (API responses); use `parseDesignDocument` for files from people.
+ */
+export const storedDesignDocumentSchema = z.preprocess(
+  (raw) => (typeof raw === 'object' && raw !== null && !Array.isArray(raw) ? migrateToCurrent(raw as Raw).doc : raw),
+  designDocumentSchema,
+);

@@ -1,7 +1,8 @@
 import { z } from 'zod';
 
 /**
- * The Slotwise design document, version 1.
+ * The Slotwise design document, version 2 (version 2 adds the assembly sequence fields: a step's
+ * kind, build orientation and caution, and whether the designer edited the order).
  *
  * Space: millimetres, right-handed, Y up (three.js convention). Every length in the document is
  * in millimetres; `units` is only the designer's display preference.
@@ -13,7 +14,7 @@ import { z } from 'zod';
  * angled braces can come later without a format change; the editor keeps it axis-aligned for now.
  */
 
-export const CURRENT_SCHEMA_VERSION = 1 as const;
+export const CURRENT_SCHEMA_VERSION = 2 as const;
 
 const id = z
   .string()
@@ -173,6 +174,14 @@ export const accessorySchema = z.object({
 export type Accessory = z.infer<typeof accessorySchema>;
 
 export const buildOrientationSchema = z.enum(['as-placed', 'lying-on-back', 'upside-down', 'on-side']);
+export type BuildOrientation = z.infer<typeof buildOrientationSchema>;
+
+/**
+ * What a step does: place parts, slide captured panels or T-nuts into open slots, turn the piece
+ * over, join a finished sub-assembly, or finish (feet, caps, gaskets).
+ */
+export const stepKindSchema = z.enum(['place', 'slide-in', 'flip', 'join', 'finish']);
+export type StepKind = z.infer<typeof stepKindSchema>;
 
 export const subAssemblySchema = z.object({
   id,
@@ -193,6 +202,12 @@ export const assemblyStepSchema = z.object({
   subAssemblyId: id.optional(),
   insertionDirection: unitVectorSchema.optional(),
   notes: z.string().max(2000).optional(),
+  /** Version 2: what the step does (see stepKindSchema). */
+  kind: stepKindSchema.default('place'),
+  /** Version 2: the orientation the piece is in during this step; omitted = the sub-assembly's build orientation. */
+  orientation: buildOrientationSchema.optional(),
+  /** Version 2: a caution the designer wrote for this step (derived cautions are added by the core). */
+  caution: z.string().max(500).optional(),
 });
 export type AssemblyStep = z.infer<typeof assemblyStepSchema>;
 
@@ -261,7 +276,10 @@ export const designDocumentSchema = z.object({
   panels: z.array(panelSchema).default([]),
   accessories: z.array(accessorySchema).default([]),
   subAssemblies: z.array(subAssemblySchema).default([]),
+  /** The assembly sequence in build order (version 2 saves the designer's order with each revision). */
   steps: z.array(assemblyStepSchema).default([]),
+  /** Version 2: true once the designer changed the generated order; regenerating then asks first. */
+  sequenceEdited: z.boolean().default(false),
   loadCases: z.array(loadCaseSchema).default([]),
 });
 export type DesignDocument = z.infer<typeof designDocumentSchema>;

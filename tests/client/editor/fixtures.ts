@@ -4,7 +4,7 @@ import type { EditorCommand } from '@/features/editor/commands/EditorCommand';
 /** A small frame: two 500 mm rails along X, 40 mm apart in Y. */
 export function twoRailDesign(): DesignDocument {
   return designDocumentSchema.parse({
-    schemaVersion: 1,
+    schemaVersion: 2,
     name: 'Two rails',
     systemId: 'metric-40',
     profiles: [

@@ -85,7 +85,7 @@ describe('profile inspector', () => {
 
 function framedPanelDesign() {
   return designDocumentSchema.parse({
-    schemaVersion: 1,
+    schemaVersion: 2,
     name: 'Framed panel',
     systemId: 'metric-40',
     profiles: [

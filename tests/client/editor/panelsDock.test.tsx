@@ -53,7 +53,7 @@ describe('Outputs dock', () => {
   });
 
   it('shows an empty state for an empty design', () => {
-    const design = designDocumentSchema.parse({ schemaVersion: 1, name: 'Blank', systemId: 'metric-40' });
+    const design = designDocumentSchema.parse({ schemaVersion: 2, name: 'Blank', systemId: 'metric-40' });
     renderWithStore(<OutputsDock />, createEditorStore({ design }));
     expect(screen.getByText('Nothing to list yet.')).toBeInTheDocument();
   });

@@ -7,7 +7,7 @@ import { createEditorStore, EditorStoreProvider, type EditorStoreApi } from '@/f
 /** A small table frame: four 600 mm rails and a shelf panel, metric 40. */
 export function shelfDesign(): DesignDocument {
   return designDocumentSchema.parse({
-    schemaVersion: 1,
+    schemaVersion: 2,
     name: 'Bench shelf, test',
     systemId: 'metric-40',
     settings: { stockLength: 1000, kerf: 4, endTrim: 10, minReusableOffcut: 150 },

@@ -10,7 +10,7 @@ import { boundingSphereOf, fitDistance } from '@/features/editor/scene/cameraFra
 import { renderModeFromUrl } from '@/features/editor/scene/renderMode';
 
 function design(parts: Partial<DesignDocumentInput>) {
-  return designDocumentSchema.parse({ schemaVersion: 1, name: 'Scene layout test', systemId: 'metric-40', ...parts });
+  return designDocumentSchema.parse({ schemaVersion: 2, name: 'Scene layout test', systemId: 'metric-40', ...parts });
 }
 
 const rail = (id: string, start: [number, number, number], direction: [number, number, number], length: number, variantId = 'm40-40x40') => ({

@@ -13,7 +13,7 @@ const catalogue: SnapCatalogue = {
 
 function design(profiles: { id: string; variantId?: string; start: [number, number, number]; direction: [number, number, number]; length: number }[]): DesignDocument {
   return designDocumentSchema.parse({
-    schemaVersion: 1,
+    schemaVersion: 2,
     name: 'Snapping test frame',
     systemId: 'metric-40',
     profiles: profiles.map((p) => ({ variantId: 'sq40', ...p })),

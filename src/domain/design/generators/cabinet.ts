@@ -40,7 +40,7 @@ function cabinetSteps(frame: BuiltFrame, names: string[], subs: { left: SubAssem
   const steps: AssemblyStep[] = [];
   const step = (title: string, partIds: string[], extra: Partial<AssemblyStep> = {}) => {
     const parts = partIds.filter(Boolean);
-    if (parts.length) steps.push({ id: ids.next('step'), title, partIds: parts, ...extra });
+    if (parts.length || extra.kind === 'flip') steps.push({ id: ids.next('step'), title, partIds: parts, kind: 'place', ...extra });
   };
   const jointsOf = (railId: string) => frame.jointsOfRail.get(railId) ?? [];
   for (const side of ['left', 'right'] as const) {
@@ -56,7 +56,7 @@ function cabinetSteps(frame: BuiltFrame, names: string[], subs: { left: SubAssem
       step(`${label} side: ${names[k].toLowerCase()} rail`, [r[side], ...jointsOf(r[side])], { subAssemblyId: sub.id, insertionDirection: [0, -1, 0] });
     });
   }
-  step('Stand the left side up', [], {});
+  step('Stand the left side up', [], { kind: 'flip', subAssemblyId: subs.left.id, orientation: 'as-placed' });
   const crossMembers = frame.rails.flatMap((r) => [r.back, r.front]);
   // Each cross member's first joint meets the left uprights (rails run from left to right).
   step('Join the cross members to the left side', [...crossMembers, ...crossMembers.map((id) => jointsOf(id)[0])], {
@@ -66,10 +66,14 @@ function cabinetSteps(frame: BuiltFrame, names: string[], subs: { left: SubAssem
   const backPanels = frame.walls.map((b) => b.back).filter((x): x is string => !!x);
   const shelves = frame.shelves.filter((x): x is string => !!x);
   step('Slide the shelves and the back panel in from the open right side', [...shelves, ...backPanels], {
+    kind: 'slide-in',
     insertionDirection: [-1, 0, 0],
     notes: 'They must be in before the right side closes their slots.',
   });
+  step('Stand the right side up', [], { kind: 'flip', subAssemblyId: subs.right.id, orientation: 'as-placed' });
   step('Bring the right side in and fasten it', crossMembers.map((id) => jointsOf(id)[1]), {
+    kind: 'join',
+    orientation: 'as-placed',
     subAssemblyId: subs.right.id,
     insertionDirection: [-1, 0, 0],
     notes: 'Two people: keep the side square while it slides onto the panels.',
@@ -79,7 +83,7 @@ function cabinetSteps(frame: BuiltFrame, names: string[], subs: { left: SubAssem
   const feet = frame.design.accessories.filter((a) => a.kind === 'leveling-foot' || a.kind === 'caster').map((a) => a.id);
   step('Screw in the feet and level the cabinet', feet, { insertionDirection: [0, 1, 0], notes: 'Tip the cabinet with a helper; never work under a raised frame.' });
   step('Press on the end caps', frame.design.accessories.filter((a) => a.kind === 'end-cap').map((a) => a.id), { insertionDirection: [0, -1, 0] });
-  return steps.filter((s) => s.partIds.length > 0);
+  return steps;
 }
 
 export const cabinetGenerator: GeneratorDefinition<typeof cabinetParamsSchema> = {

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { designDocumentSchema } from '@/domain/design/schema';
+import { storedDesignDocumentSchema } from '@/domain/design/migrations';
 
 import { designSummarySchema, personRefSchema } from '@/lib/designApiSchemas';
 
@@ -8,7 +8,7 @@ export const editorDesignSummarySchema = designSummarySchema;
 /** A revision with its document, validated against the design-document schema. */
 export const editorRevisionSchema = z.object({
   number: z.number(),
-  document: designDocumentSchema,
+  document: storedDesignDocumentSchema,
   createdAt: z.string(),
   createdBy: personRefSchema,
   message: z.string().nullable(),

@@ -9,7 +9,7 @@ import { createViewSlice } from './viewSlice';
 
 /** A blank document so the store always holds a valid design before the real one loads. */
 export function placeholderDesign(): DesignDocument {
-  return designDocumentSchema.parse({ schemaVersion: 1, name: 'Untitled design', systemId: 'metric-40' });
+  return designDocumentSchema.parse({ schemaVersion: 2, name: 'Untitled design', systemId: 'metric-40' });
 }
 
 type InitialState = Partial<Pick<EditorState, 'design' | 'designId' | 'baseRevision' | 'units' | 'tool' | 'drawSystemVariantId' | 'selection' | 'lastSaved'>>;

@@ -6,9 +6,9 @@
  */
 import type { Finding } from '../analysisTypes';
 import type { Joint, ProfileEnd } from '../design/schema';
-import { accessoriesAt, allDesignIds, jointsAt, type AnalysisContext, type ProfileInfo } from './context';
-import { findingId, profileName } from './describe';
-import { useDropInTNutsFix } from './fixes';
+import { accessoriesAt, allDesignIds, jointsAt, type AnalysisContext, type ProfileInfo } from '../checks/context';
+import { findingId, profileName } from '../checks/describe';
+import { useDropInTNutsFix } from '../checks/fixes';
 
 const CHECK = 'sequence';
 /** Accessories that close a profile end's slots. */
