@@ -75,7 +75,10 @@ export function generateSteps(design: DesignDocument, _catalogue?: Catalogue): A
 
   const feetByProfile = new Map<string, Accessory[]>();
   for (const a of design.accessories) {
-    if (FINISH_FOOT.has(a.kind) && a.profileId) feetByProfile.set(a.profileId, [...(feetByProfile.get(a.profileId) ?? []), a]);
+    if (!FINISH_FOOT.has(a.kind) || !a.profileId) continue;
+    const list = feetByProfile.get(a.profileId);
+    if (list) list.push(a);
+    else feetByProfile.set(a.profileId, [a]);
   }
   const placedAccessories = new Set<string>();
 
@@ -101,7 +104,9 @@ export function generateSteps(design: DesignDocument, _catalogue?: Catalogue): A
     const levels = new Map<number, Profile[]>();
     for (const p of others) {
       const y = Math.round(p.start[1] + (p.direction[1] * p.length) / 2);
-      levels.set(y, [...(levels.get(y) ?? []), p]);
+      const list = levels.get(y);
+      if (list) list.push(p);
+      else levels.set(y, [p]);
     }
     for (const y of [...levels.keys()].sort((a, b) => a - b)) {
       const list = levels.get(y)!;
@@ -179,10 +184,17 @@ export function generateSteps(design: DesignDocument, _catalogue?: Catalogue): A
       looseCaptured.push(panel.id);
       continue;
     }
-    const closing = Math.max(...bounding.map(mountStage));
+    // Within one sub-assembly the panel goes in during its build; across groups, when they meet.
+    const groups = new Set(bounding.map((id) => groupOf.get(id) ?? ''));
+    const sameSub = groups.size === 1 && !groups.has('');
+    const closing = Math.max(...bounding.map((id) => (sameSub ? (buildStage.get(id) ?? -1) : mountStage(id))));
     const stage = stages[closing];
     if (stage.kind === 'join') stage.prePanels.push(panel.id);
-    else panelsClosedIn.set(closing, [...(panelsClosedIn.get(closing) ?? []), panel.id]);
+    else {
+      const list = panelsClosedIn.get(closing);
+      if (list) list.push(panel.id);
+      else panelsClosedIn.set(closing, [panel.id]);
+    }
   }
 
   // Expand stages to document steps.
@@ -222,7 +234,7 @@ export function generateSteps(design: DesignDocument, _catalogue?: Catalogue): A
 
   stages.forEach((stage, index) => {
     if (stage.prePanels.length > 0) {
-      push({ kind: 'slide-in', title: `${panelTitle(stage.prePanels)} before the ${stage.title.replace(/^Join the /, '')} goes on`, partIds: stage.prePanels, ...base0({ ...stage, kind: 'slide-in', orientation: 'as-placed' }), notes: 'They must be in before the last member closes their slots.' });
+      push({ kind: 'slide-in', title: `${panelTitle(stage.prePanels)} before the ${stage.title.replace(/^Join the /, '')} goes on`, partIds: stage.prePanels, notes: 'They must be in before the last member closes their slots.' });
     }
     const panels = panelsClosedIn.get(index) ?? [];
     if (!stage.splittable || panels.length === 0) {
@@ -297,7 +309,10 @@ export function generateSteps(design: DesignDocument, _catalogue?: Catalogue): A
       const mounted = groups.size > 1 && sub ? (joinStepOf.get(sub) ?? own) : own;
       at = Math.max(at, mounted);
     }
-    if (at >= 0) jointsFor.set(at, [...(jointsFor.get(at) ?? []), joint.id]);
+    if (at < 0) continue;
+    const list = jointsFor.get(at);
+    if (list) list.push(joint.id);
+    else jointsFor.set(at, [joint.id]);
   }
   jointsFor.forEach((jointIds, i) => steps[i].partIds.push(...jointIds));
 
@@ -335,13 +350,31 @@ export function generateSteps(design: DesignDocument, _catalogue?: Catalogue): A
 
 /** Kahn layering: items in groups, each after everything in `before`; null on a cycle. */
 function layer(items: string[], before: Map<string, Set<string>>): string[][] | null {
-  const done = new Set<string>();
-  const out: string[][] = [];
-  while (done.size < items.length) {
-    const ready = items.filter((i) => !done.has(i) && [...before.get(i)!].every((b) => done.has(b)));
-    if (ready.length === 0) return null;
-    ready.forEach((i) => done.add(i));
-    out.push(ready);
+  const waiting = new Map<string, number>();
+  const after = new Map<string, string[]>();
+  for (const i of items) {
+    waiting.set(i, before.get(i)!.size);
+    for (const b of before.get(i)!) {
+      const list = after.get(b);
+      if (list) list.push(i);
+      else after.set(b, [i]);
+    }
   }
-  return out;
+  const out: string[][] = [];
+  let ready = items.filter((i) => waiting.get(i) === 0);
+  let done = 0;
+  while (ready.length > 0) {
+    out.push(ready);
+    done += ready.length;
+    const next: string[] = [];
+    for (const r of ready) {
+      for (const i of after.get(r) ?? []) {
+        const w = waiting.get(i)! - 1;
+        waiting.set(i, w);
+        if (w === 0) next.push(i);
+      }
+    }
+    ready = next;
+  }
+  return done === items.length ? out : null;
 }
