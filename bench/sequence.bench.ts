@@ -42,7 +42,8 @@ export async function run(): Promise<BenchRow[]> {
   return [
     { benchmark: BENCH, metric: `generate steps, ${n} profiles, median wall`, value: steps.wall, unit: 'ms', bar: '< 100 ms', pass: steps.wall < 100 },
     { benchmark: BENCH, metric: `generate steps, ${n} profiles, median CPU`, value: steps.cpu, unit: 'ms' },
-    { benchmark: BENCH, metric: `generate sequence with motions, tools, cautions, ${n} profiles, median wall`, value: full.wall, unit: 'ms', bar: '< 100 ms', pass: full.wall < 100 },
+    { benchmark: BENCH, metric: `generate sequence with motions, tools, cautions, ${n} profiles, median wall`, value: full.wall, unit: 'ms' },
+    { benchmark: BENCH, metric: `generate sequence with motions, tools, cautions, ${n} profiles, median CPU`, value: full.cpu, unit: 'ms' },
     { benchmark: BENCH, metric: `feasibility check, ${n} profiles, ${withSteps.steps.length} steps, median wall`, value: check.wall, unit: 'ms' },
   ];
 }
