@@ -31,7 +31,8 @@ export function SequencePanel() {
   const sensors = useSensors(useSensor(PointerSensor, { activationConstraint: { distance: 4 } }), useSensor(KeyboardSensor, { coordinateGetter: sortableKeyboardCoordinates }));
 
   const run = (label: string, op: DesignOperation) => execute(operationCommand(label, op));
-  const findingsOf = (step: SequenceStep) => findings.filter((f) => f.partIds.some((id) => step.partIds.includes(id)) || f.message.includes(`step ${step.index + 1} (`));
+  // A step is marked when a finding names it (findings name both steps they concern).
+  const findingsOf = (step: SequenceStep) => findings.filter((f) => f.message.includes(`step ${step.index + 1} (`));
 
   const onDragEnd = (event: DragEndEvent) => {
     const { active, over } = event;

@@ -1,6 +1,6 @@
 import { createStore } from 'zustand/vanilla';
 import { temporal } from 'zundo';
-import { designDocumentSchema, type DesignDocument } from '@/domain/design/schema';
+import { CURRENT_SCHEMA_VERSION, designDocumentSchema, type DesignDocument } from '@/domain/design/schema';
 import { createAnalysisSlice } from './analysisSlice';
 import { createDesignSlice, HISTORY_LIMIT } from './designSlice';
 import { createSelectionSlice } from './selectionSlice';
@@ -9,7 +9,7 @@ import { createViewSlice } from './viewSlice';
 
 /** A blank document so the store always holds a valid design before the real one loads. */
 export function placeholderDesign(): DesignDocument {
-  return designDocumentSchema.parse({ schemaVersion: 2, name: 'Untitled design', systemId: 'metric-40' });
+  return designDocumentSchema.parse({ schemaVersion: CURRENT_SCHEMA_VERSION, name: 'Untitled design', systemId: 'metric-40' });
 }
 
 type InitialState = Partial<Pick<EditorState, 'design' | 'designId' | 'baseRevision' | 'units' | 'tool' | 'drawSystemVariantId' | 'selection' | 'lastSaved'>>;
