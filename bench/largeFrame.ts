@@ -115,7 +115,7 @@ export function largeFrame(o: LargeFrameOptions): DesignDocument {
       accessories.push({ id: `${id}-cap-e`, kind: 'end-cap', partId: 'm40-end-cap', profileId: id, end: 'end', quantity: 1 });
     }
   }
-  const base = designDocumentSchema.parse({ schemaVersion: 1, name: `Generated frame, ${profiles.length} profiles`, systemId: 'metric-40' });
+  const base = designDocumentSchema.parse({ schemaVersion: 3, name: `Generated frame, ${profiles.length} profiles`, systemId: 'metric-40' });
   return {
     ...base,
     profiles,

@@ -12,7 +12,7 @@ import { capFindings } from './checks/findingCap';
 import { interferenceFindings } from './checks/interferenceFindings';
 import { jointFindings } from './checks/jointFindings';
 import { panelFitFindings } from './checks/panelFitFindings';
-import { sequenceFindings } from './checks/sequenceFindings';
+import { sequenceFindings } from './assembly/sequenceFindings';
 import { structureAnalysis } from './checks/structureFindings';
 import type { DesignDocument } from './design/schema';
 import { billOfMaterials } from './outputs/bom';

@@ -5,7 +5,7 @@ import type { DesignDocument } from '@/domain/design/schema';
 import { jointFindings } from '@/domain/checks/jointFindings';
 import { panelFitFindings } from '@/domain/checks/panelFitFindings';
 import { interferenceFindings, interferenceFindingsAllPairs } from '@/domain/checks/interferenceFindings';
-import { sequenceFindings } from '@/domain/checks/sequenceFindings';
+import { sequenceFindings } from '@/domain/assembly/sequenceFindings';
 import { defaultCatalogue } from '@/domain/catalogue';
 import { boxFrame, withProfileChange } from './checksDesigns';
 
@@ -177,34 +177,34 @@ describe('sequence check', () => {
     design.joints = design.joints.map((j) => (j.id === 'J-RXF-low-s' ? { ...j, tNut: 'slide-in' } : j));
     const rest = [...design.profiles.map((p) => p.id), ...design.accessories.map((a) => a.id)];
     design.steps = [
-      { id: 's1', title: 'Legs, rails, feet and caps', partIds: rest },
-      { id: 's2', title: 'Joints', partIds: design.joints.map((j) => j.id) },
+      { id: 's1', title: 'Legs, rails, feet and caps', partIds: rest, kind: 'place' },
+      { id: 's2', title: 'Joints', partIds: design.joints.map((j) => j.id), kind: 'place' },
     ];
     const seq = sequenceFindings(createAnalysisContext(design));
     expect(seq.map((f) => f.id)).toEqual(['sequence:slide-in-closed:J-RXF-low-s+L1']);
-    expect(seq[0].message).toContain('Use drop-in T-nuts');
+    expect(seq[0].message).toContain('use drop-in T-nuts');
   });
 
   it('reports a captured panel placed after its frame is closed, and not when placed before', () => {
     const design = boxFrame({ backPanel: true });
     const frame = [...design.profiles.map((p) => p.id), ...design.joints.map((j) => j.id)];
     design.steps = [
-      { id: 's1', title: 'Frame', partIds: frame },
-      { id: 's2', title: 'Back panel', partIds: ['BACK'] },
+      { id: 's1', title: 'Frame', partIds: frame, kind: 'place' },
+      { id: 's2', title: 'Back panel', partIds: ['BACK'], kind: 'place' },
     ];
-    expect(sequenceFindings(createAnalysisContext(design)).map((f) => f.id)).toEqual(['sequence:panel-after-frame:BACK']);
+    expect(sequenceFindings(createAnalysisContext(design)).filter((f) => f.severity === 'error').map((f) => f.id)).toEqual(['sequence:panel-after-frame:BACK']);
     design.steps = [
-      { id: 's1', title: 'Frame without the top back rail', partIds: frame.filter((id) => !id.startsWith('J-RXB-top')) },
-      { id: 's2', title: 'Back panel', partIds: ['BACK'] },
-      { id: 's3', title: 'Close the frame', partIds: ['J-RXB-top-s', 'J-RXB-top-e'] },
+      { id: 's1', title: 'Frame without the top back rail', partIds: frame.filter((id) => !id.startsWith('J-RXB-top')), kind: 'place' },
+      { id: 's2', title: 'Back panel', partIds: ['BACK'], kind: 'place' },
+      { id: 's3', title: 'Close the frame', partIds: ['J-RXB-top-s', 'J-RXB-top-e'], kind: 'place' },
     ];
-    expect(sequenceFindings(createAnalysisContext(design))).toEqual([]);
+    expect(sequenceFindings(createAnalysisContext(design)).filter((f) => f.severity === 'error')).toEqual([]);
   });
 
   it('reports a step that names a part the design does not have', () => {
     const design = boxFrame();
-    design.steps = [{ id: 's1', title: 'Ghost', partIds: ['NOPE'] }];
-    const seq = sequenceFindings(createAnalysisContext(design));
+    design.steps = [{ id: 's1', title: 'Ghost', partIds: ['NOPE'], kind: 'place' }];
+    const seq = sequenceFindings(createAnalysisContext(design)).filter((f) => f.severity === 'error');
     expect(seq).toHaveLength(1);
     expect(seq[0].severity).toBe('error');
     expect(seq[0].partIds).toEqual(['s1', 'NOPE']);

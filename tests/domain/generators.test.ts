@@ -113,7 +113,7 @@ describe('generators', () => {
     expect(left).toMatchObject({ name: 'Left side frame', buildOrientation: 'on-side', joinDirection: [1, 0, 0] });
     expect(right).toMatchObject({ name: 'Right side frame', buildOrientation: 'on-side', joinDirection: [-1, 0, 0] });
     expect(left.profileIds).toHaveLength(2 + 4);
-    const joinStep = d.steps.findIndex((s) => s.subAssemblyId === right.id && s.title.startsWith('Bring'));
+    const joinStep = d.steps.findIndex((s) => s.subAssemblyId === right.id && s.kind === 'join');
     expect(joinStep).toBeGreaterThan(0);
     const at = stepIndexOf(d);
     const inside = d.panels.filter((p) => p.role === 'shelf' || p.label?.startsWith('Back'));

@@ -61,7 +61,7 @@ describe('parseDesignDocument', () => {
 
   it('refuses a document from a newer version and one without a version, saying what to do', () => {
     expect(errorsOf({ schemaVersion: 99, name: 'x', systemId: 'metric-40' })[0].message).toMatch(/newer Slotwise/);
-    expect(errorsOf({ name: 'x', systemId: 'metric-40' })[0]).toEqual({ path: 'schemaVersion', message: expect.stringMatching(/"schemaVersion": 2/) });
+    expect(errorsOf({ name: 'x', systemId: 'metric-40' })[0]).toEqual({ path: 'schemaVersion', message: expect.stringMatching(/"schemaVersion": 3/) });
   });
 
   it('refuses text that is not JSON and JSON that is not an object', () => {
@@ -122,7 +122,7 @@ describe('parseDesignDocument', () => {
 describe('createEmptyDesign', () => {
   it('starts a design in the chosen system with its alloy, demo stock length and unit family', () => {
     const d = createEmptyDesign({ name: 'New bench', systemId: 'inch-1.5' });
-    expect(d).toMatchObject({ schemaVersion: 2, name: 'New bench', systemId: 'inch-1.5', units: 'in', profiles: [] });
+    expect(d).toMatchObject({ schemaVersion: 3, name: 'New bench', systemId: 'inch-1.5', units: 'in', profiles: [] });
     expect(d.settings.stockLength).toBeGreaterThan(3000);
     expect(parseDesignDocument(JSON.parse(JSON.stringify(d)))).toEqual({ ok: true, design: d });
     expect(createEmptyDesign({ name: 'x', systemId: 'metric-20', units: 'in' }).units).toBe('in');

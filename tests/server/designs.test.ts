@@ -29,7 +29,7 @@ describe('designs and revisions', () => {
     expect(response.body.design).toMatchObject({ name: 'Bench stand', systemId: 'metric-30', latestRevision: 1, profileCount: 0, thumbnailUrl: null });
     expect(response.body.design.updatedAt).toMatch(/^\d{4}-\d\d-\d\dT/);
     expect(response.body.revision).toMatchObject({ number: 1, message: null, createdBy: { displayName: 'Tomasz Reyes' } });
-    expect(response.body.revision.document).toMatchObject({ schemaVersion: 2, name: 'Bench stand', systemId: 'metric-30', units: 'in', profiles: [] });
+    expect(response.body.revision.document).toMatchObject({ schemaVersion: 3, name: 'Bench stand', systemId: 'metric-30', units: 'in', profiles: [] });
   });
 
   it('creates a design from a posted document and counts its profiles', async () => {

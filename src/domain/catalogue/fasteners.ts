@@ -47,7 +47,8 @@ export function fastenerId(head: ScrewHead, size: ScrewSize, lengthMm: number): 
   return `fst-${head}-${sizeSlug(size)}-${lengthLabel(size, lengthMm)}`;
 }
 
-function makeFastener(head: ScrewHead, size: ScrewSize, length: number): Fastener {
+/** One fastener record (id, code, mass, demo price, hex key by standard). */
+export function makeFastener(head: ScrewHead, size: ScrewSize, length: number): Fastener {
   const thread = threadFor(size);
   const d = thread.nominalDiameterMm;
   const volume = (Math.PI / 4) * d * d * length + HEAD_MASS_SHARE[head] * (Math.PI / 4) * (1.5 * d) ** 2 * d;

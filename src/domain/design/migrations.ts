@@ -5,13 +5,18 @@
  * v0 → v1: profiles were stored by their two end points (`from`, `to`); v1 stores `start`,
  * a unit `direction` and a `length`. Nothing else changed.
  *
- * v1 → v2: inch catalogue ids are named by nominal size. Profile variants 'i10-1x1', 'i10-1x2',
+ * v1 → v2: the assembly sequence is part of the revision. Each step gains a `kind` (inferred from
+ * what it places and its title: flip, join, slide-in, finish or place) and the document gains
+ * `sequenceEdited` (false: a version 1 order was always the generated one). The order and ids are
+ * kept exactly.
+ * v2 → v3: inch catalogue ids are named by nominal size. Profile variants 'i10-1x1', 'i10-1x2',
  * 'i15-1.5x1.5', 'i15-1.5x3' become 'in-1x1', 'in-1x2', 'in-1.5x1.5', 'in-1.5x3'; every other inch
  * catalogue id ('i10-corner-bracket', 'i15-leveling-foot', …) takes the prefix 'in1-' / 'in1.5-'.
  * Only values of catalogue references (variantId, connectorId, partId, fastenerId, tNutId) are
  * renamed; part ids, references to parts (profileId, panelId, …) and labels are the user's own.
  */
-import { CURRENT_SCHEMA_VERSION } from './schema';
+import { z } from 'zod';
+import { CURRENT_SCHEMA_VERSION, designDocumentSchema } from './schema';
 
 export interface MigrationIssue {
   path: string;
@@ -46,14 +51,38 @@ const migrateV0toV1: Migration = (doc) => {
   return { doc: { ...doc, profiles: migrated, schemaVersion: 1 }, issues };
 };
 
-/** The inch prefixes before version 2, and what they became. */
+const FINISH_PREFIXES = ['leveling-foot', 'caster', 'end-cap', 'gasket', 'slot-cover'];
+
+/** The kind of a version 1 step, from its title and the kinds of the accessories it places. */
+function inferStepKind(step: Raw, accessoryKinds: Map<string, string>): string {
+  const title = typeof step.title === 'string' ? step.title.toLowerCase() : '';
+  const partIds = Array.isArray(step.partIds) ? step.partIds.filter((x): x is string => typeof x === 'string') : [];
+  if (/^(flip|turn|stand the .* up)/.test(title)) return 'flip';
+  if (typeof step.subAssemblyId === 'string' && /^(bring|join)/.test(title)) return 'join';
+  if (/^slide/.test(title)) return 'slide-in';
+  if (partIds.length > 0 && partIds.every((id) => FINISH_PREFIXES.includes(accessoryKinds.get(id) ?? ''))) return 'finish';
+  return 'place';
+}
+
+const migrateV1toV2: Migration = (doc) => {
+  const accessoryKinds = new Map<string, string>();
+  if (Array.isArray(doc.accessories)) {
+    for (const a of doc.accessories as Raw[]) if (a && typeof a.id === 'string' && typeof a.kind === 'string') accessoryKinds.set(a.id, a.kind);
+  }
+  const steps = Array.isArray(doc.steps)
+    ? doc.steps.map((s: unknown) => (typeof s === 'object' && s !== null && !('kind' in s) ? { ...(s as Raw), kind: inferStepKind(s as Raw, accessoryKinds) } : s))
+    : doc.steps;
+  return { doc: { ...doc, ...(steps !== undefined ? { steps } : {}), sequenceEdited: doc.sequenceEdited ?? false, schemaVersion: 2 }, issues: [] };
+};
+
+/** The inch prefixes before version 3, and what they became. */
 export const LEGACY_INCH_PREFIXES: Record<string, { variant: string; other: string }> = {
   i10: { variant: 'in', other: 'in1' },
   i15: { variant: 'in', other: 'in1.5' },
 };
 const LEGACY_VARIANT_SIZES = new Set(['1x1', '1x2', '1.5x1.5', '1.5x3']);
 
-/** The version 2 name of a version 1 catalogue id; ids that were never inch ids come back unchanged. */
+/** The version 3 name of a version 2 or older catalogue id; ids that were never inch ids come back unchanged. */
 export function renameLegacyInchId(id: string): string {
   const match = /^(i10|i15)-(.+)$/.exec(id);
   if (!match) return id;
@@ -73,13 +102,13 @@ function renameCatalogueReferences(value: unknown): unknown {
   return out;
 }
 
-const migrateV1toV2: Migration = (doc) => {
+const migrateV2toV3: Migration = (doc) => {
   const renamed = renameCatalogueReferences(doc) as Raw;
-  return { doc: { ...renamed, schemaVersion: 2 }, issues: [] };
+  return { doc: { ...renamed, schemaVersion: 3 }, issues: [] };
 };
 
 /** migrations[n] turns version n into version n + 1. */
-const migrations: Migration[] = [migrateV0toV1, migrateV1toV2];
+const migrations: Migration[] = [migrateV0toV1, migrateV1toV2, migrateV2toV3];
 
 export function migrateToCurrent(input: Raw): { doc: Raw; issues: MigrationIssue[]; fromVersion: number } {
   const version = input.schemaVersion;
@@ -105,3 +134,13 @@ export function migrateToCurrent(input: Raw): { doc: Raw; issues: MigrationIssue
   }
   return { doc, issues, fromVersion: version };
 }
+
+/**
+ * The design-document schema for documents read back from storage: older versions are migrated
+ * first, so a revision saved as version 1 loads as the current version. Use it wherever a stored
+ * document is validated (API responses); use `parseDesignDocument` for files from people.
+ */
+export const storedDesignDocumentSchema = z.preprocess(
+  (raw) => (typeof raw === 'object' && raw !== null && !Array.isArray(raw) ? migrateToCurrent(raw as Raw).doc : raw),
+  designDocumentSchema,
+);

@@ -2,7 +2,7 @@
  * The inputs of the design operations and their serialisable form, `DesignOperation`
  * (type + payload), which findings carry as fixes and the editor replays. Lengths mm.
  */
-import type { Accessory, AccessoryKind, Axis, Cutout, Joint, JointKind, JointMember, Panel, Vec3 } from './schema';
+import type { Accessory, AccessoryKind, AssemblyStep, Axis, Cutout, Joint, JointKind, JointMember, Panel, Vec3 } from './schema';
 
 export class OperationError extends Error {
   constructor(message: string) {
@@ -63,6 +63,14 @@ export interface AccessoryInput {
 }
 
 /** A frame opening as `findOpenings` reports it: its four profiles and clear rectangle. */
+/** Changes to a step's words (assembly/sequenceOperations.ts). */
+export interface StepChanges {
+  title?: string;
+  notes?: string;
+  caution?: string;
+  kind?: AssemblyStep['kind'];
+}
+
 export interface DoorOpeningInput {
   opening: { boundedBy: string[]; rect: Panel['rect'] };
   /** Which side of the opening along its normal the doors stand on; omitted: away from the frame's middle. */
@@ -101,6 +109,18 @@ export type DesignOperation =
   | { type: 'addSlidingDoors'; payload: { doors: SlidingDoorsInput } }
   | { type: 'addHingedDoor'; payload: { door: HingedDoorInput } }
   | { type: 'autoEndCaps'; payload?: Record<string, never> }
-  | { type: 'addFeetToFreeBottomEnds'; payload?: { kind?: 'leveling-foot' | 'caster' } };
+  | { type: 'addFeetToFreeBottomEnds'; payload?: { kind?: 'leveling-foot' | 'caster' } }
+  // Assembly sequence edits (src/domain/assembly/sequenceOperations.ts).
+  | { type: 'moveStep'; payload: { stepId: string; toIndex: number } }
+  | { type: 'moveStepBefore'; payload: { stepId: string; beforeStepId: string } }
+  | { type: 'moveStepAfter'; payload: { stepId: string; afterStepId: string } }
+  | { type: 'mergeSteps'; payload: { stepIds: string[] } }
+  | { type: 'splitStep'; payload: { stepId: string; partIds: string[]; newStepId?: string } }
+  | { type: 'movePartsToStep'; payload: { partIds: string[]; stepId: string } }
+  | { type: 'updateStep'; payload: { stepId: string; changes: StepChanges } }
+  | { type: 'regenerateSequence'; payload?: Record<string, never> };
+
+/** Operations that edit the assembly sequence rather than the parts. */
+export const SEQUENCE_OPERATION_TYPES: ReadonlySet<string> = new Set(['moveStep', 'moveStepBefore', 'moveStepAfter', 'mergeSteps', 'splitStep', 'movePartsToStep', 'updateStep', 'regenerateSequence']);
 
 export type DesignOperationType = DesignOperation['type'];

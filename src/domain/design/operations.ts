@@ -12,8 +12,10 @@ import { addFeetToFreeBottomEnds, autoEndCaps } from './endTreatments';
 import { createIdAllocator, type IdAllocator } from './ids';
 import { withJointMachining } from './jointMachining';
 import { arrayParts, duplicateParts, mirrorParts, refreshJointPositions, rotateParts90, translateParts } from './moveOperations';
+import { followPartChanges, mergeSteps, moveStep, moveStepAfter, moveStepBefore, movePartsToStep, regenerateSequence, splitStep, updateStep } from '../assembly/sequenceOperations';
 import {
   OperationError,
+  SEQUENCE_OPERATION_TYPES,
   type AccessoryInput,
   type DesignOperation,
   type JointInput,
@@ -343,7 +345,16 @@ export function addAccessory(design: DesignDocument, input: AccessoryInput, cata
 
 // ---------- replay ----------
 
+/**
+ * Applies one serialisable operation. After a change to the parts, an assembly order the designer
+ * never edited is generated again so it keeps up with the design.
+ */
 export function applyOperation(design: DesignDocument, op: DesignOperation, catalogue: Catalogue = defaultCatalogue): DesignDocument {
+  const next = applyOperationOnly(design, op, catalogue);
+  return SEQUENCE_OPERATION_TYPES.has(op.type) ? next : followPartChanges(design, next);
+}
+
+function applyOperationOnly(design: DesignDocument, op: DesignOperation, catalogue: Catalogue): DesignDocument {
   switch (op.type) {
     case 'addProfile':
       return addProfile(design, op.payload.profile, catalogue);
@@ -383,6 +394,22 @@ export function applyOperation(design: DesignDocument, op: DesignOperation, cata
       return autoEndCaps(design, catalogue);
     case 'addFeetToFreeBottomEnds':
       return addFeetToFreeBottomEnds(design, op.payload?.kind ?? 'leveling-foot', catalogue);
+    case 'moveStep':
+      return moveStep(design, op.payload.stepId, op.payload.toIndex);
+    case 'moveStepBefore':
+      return moveStepBefore(design, op.payload.stepId, op.payload.beforeStepId);
+    case 'moveStepAfter':
+      return moveStepAfter(design, op.payload.stepId, op.payload.afterStepId);
+    case 'mergeSteps':
+      return mergeSteps(design, op.payload.stepIds);
+    case 'splitStep':
+      return splitStep(design, op.payload.stepId, op.payload.partIds, op.payload.newStepId);
+    case 'movePartsToStep':
+      return movePartsToStep(design, op.payload.partIds, op.payload.stepId);
+    case 'updateStep':
+      return updateStep(design, op.payload.stepId, op.payload.changes);
+    case 'regenerateSequence':
+      return regenerateSequence(design);
     default: {
       const never: never = op;
       throw new OperationError(`Unknown operation ${(never as { type: string }).type}`);

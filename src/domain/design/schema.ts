@@ -14,7 +14,8 @@ export { accessoryKindSchema, jointKindSchema, machiningKindSchema, type Accesso
 import { unsafeTextReason, type SafeTextOptions } from '../text/safeText';
 
 /**
- * The Slotwise design document, version 1.
+ * The Slotwise design document, version 2 (version 2 adds the assembly sequence fields: a step's
+ * kind, build orientation and caution, and whether the designer edited the order).
  *
  * Space: millimetres, right-handed, Y up (three.js convention). Every length in the document is
  * in millimetres; `units` is only the designer's display preference.
@@ -26,7 +27,7 @@ import { unsafeTextReason, type SafeTextOptions } from '../text/safeText';
  * angled braces can come later without a format change; the editor keeps it axis-aligned for now.
  */
 
-export const CURRENT_SCHEMA_VERSION = 2 as const;
+export const CURRENT_SCHEMA_VERSION = 3 as const;
 
 const id = z
   .string()
@@ -214,6 +215,14 @@ export const accessorySchema = z.object({
 export type Accessory = z.infer<typeof accessorySchema>;
 
 export const buildOrientationSchema = z.enum(['as-placed', 'lying-on-back', 'upside-down', 'on-side']);
+export type BuildOrientation = z.infer<typeof buildOrientationSchema>;
+
+/**
+ * What a step does: place parts, slide captured panels or T-nuts into open slots, turn the piece
+ * over, join a finished sub-assembly, or finish (feet, caps, gaskets).
+ */
+export const stepKindSchema = z.enum(['place', 'slide-in', 'flip', 'join', 'finish']);
+export type StepKind = z.infer<typeof stepKindSchema>;
 
 export const subAssemblySchema = z.object({
   id,
@@ -234,6 +243,12 @@ export const assemblyStepSchema = z.object({
   subAssemblyId: id.optional(),
   insertionDirection: unitVectorSchema.optional(),
   notes: safeText(2000, { multiline: true, allowEmpty: true }).optional(),
+  /** Version 2: what the step does (see stepKindSchema). */
+  kind: stepKindSchema.default('place'),
+  /** Version 2: the orientation the piece is in during this step; omitted = the sub-assembly's build orientation. */
+  orientation: buildOrientationSchema.optional(),
+  /** Version 2: a caution the designer wrote for this step (derived cautions are added by the core). */
+  caution: safeText(500, { multiline: true, allowEmpty: true }).optional(),
 });
 export type AssemblyStep = z.infer<typeof assemblyStepSchema>;
 
@@ -330,7 +345,10 @@ export const designDocumentSchema = z.object({
   panels: list(panelSchema, L.maxPanels, 'panels').default([]),
   accessories: list(accessorySchema, L.maxAccessories, 'accessories').default([]),
   subAssemblies: list(subAssemblySchema, L.maxSubAssemblies, 'sub-assemblies').default([]),
+  /** The assembly sequence in build order (version 2 saves the designer's order with each revision). */
   steps: list(assemblyStepSchema, L.maxSteps, 'assembly steps').default([]),
+  /** Version 2: true once the designer changed the generated order; regenerating then asks first. */
+  sequenceEdited: z.boolean().default(false),
   loadCases: list(loadCaseSchema, L.maxLoadCases, 'load cases').default([]),
 });
 export type DesignDocument = z.infer<typeof designDocumentSchema>;

@@ -14,7 +14,7 @@ describe('Outputs dock', () => {
     const user = userEvent.setup();
     renderWithStore(<OutputsDock />, storeWithAnalysis());
     const tabs = screen.getAllByRole('tab');
-    expect(tabs.map((tab) => tab.textContent)).toEqual(['Parts', 'Cuts', 'Bars', 'Tools', 'Weight', 'Price', 'Loads']);
+    expect(tabs.map((tab) => tab.textContent)).toEqual(['Parts', 'Cuts', 'Bars', 'Tools', 'Weight', 'Price', 'Loads', 'Sequence']);
     expect(tabs[0]).toHaveAttribute('aria-selected', 'true');
     expect(tabs.filter((tab) => tab.tabIndex === 0)).toEqual([tabs[0]]);
     tabs[0].focus();
@@ -24,7 +24,7 @@ describe('Outputs dock', () => {
     expect(screen.getByRole('tabpanel')).toHaveAttribute('aria-labelledby', screen.getByRole('tab', { name: 'Cuts' }).id);
     expect(screen.getByRole('table', { name: 'Cut list' })).toBeInTheDocument();
     await user.keyboard('{End}');
-    expect(screen.getByRole('tab', { name: 'Loads' })).toHaveFocus();
+    expect(screen.getByRole('tab', { name: 'Sequence' })).toHaveFocus();
     await user.keyboard('{ArrowRight}');
     expect(screen.getByRole('tab', { name: 'Parts' })).toHaveAttribute('aria-selected', 'true');
   });

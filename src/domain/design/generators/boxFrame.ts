@@ -1,7 +1,7 @@
 /** A plain rectangular box frame, optionally walled or closed with captured panels. */
 import { z } from 'zod';
 import type { Catalogue } from '../../catalogue/types';
-import { buildFrame, capturedSheet, levelByLevelSteps, type FrameFace } from './frameBuilder';
+import { buildFrame, capturedSheet, withGeneratedSteps, type FrameFace } from './frameBuilder';
 import { baseParamsShape, checkCapturedMaterial, checkFrameSize, checkMaterial, panelMaterialId, sizesFor } from './params';
 import type { GeneratorDefinition } from './types';
 
@@ -49,6 +49,6 @@ export const boxFrameGenerator: GeneratorDefinition<typeof boxFrameParamsSchema>
       },
       catalogue,
     );
-    return { ...frame.design, steps: levelByLevelSteps(frame, ['Bottom', 'Top']) };
+    return withGeneratedSteps(frame, catalogue);
   },
 };

@@ -5,9 +5,10 @@
  */
 import { z } from 'zod';
 import type { Catalogue } from '../../catalogue/types';
+import { generateSteps } from '../../assembly/generateSteps';
 import { createIdAllocator } from '../ids';
-import type { AssemblyStep, SubAssembly, Vec3 } from '../schema';
-import { buildFrame, capturedSheet, type BuiltFrame } from './frameBuilder';
+import type { SubAssembly, Vec3 } from '../schema';
+import { buildFrame, capturedSheet } from './frameBuilder';
 import { baseParamsShape, checkCapturedMaterial, checkFrameSize, checkMaterial, panelMaterialId, sizesFor } from './params';
 import type { GeneratorDefinition } from './types';
 
@@ -34,53 +35,6 @@ export const cabinetParamsSchema = z
     }
   });
 export type CabinetParams = z.infer<typeof cabinetParamsSchema>;
-
-function cabinetSteps(frame: BuiltFrame, names: string[], subs: { left: SubAssembly; right: SubAssembly }): AssemblyStep[] {
-  const ids = createIdAllocator(frame.design);
-  const steps: AssemblyStep[] = [];
-  const step = (title: string, partIds: string[], extra: Partial<AssemblyStep> = {}) => {
-    const parts = partIds.filter(Boolean);
-    if (parts.length) steps.push({ id: ids.next('step'), title, partIds: parts, ...extra });
-  };
-  const jointsOf = (railId: string) => frame.jointsOfRail.get(railId) ?? [];
-  for (const side of ['left', 'right'] as const) {
-    const sub = side === 'left' ? subs.left : subs.right;
-    const [front, back] = side === 'left' ? [frame.posts.frontLeft, frame.posts.backLeft] : [frame.posts.frontRight, frame.posts.backRight];
-    const label = side === 'left' ? 'Left' : 'Right';
-    step(`${label} side: lay out the two uprights`, [front, back], { subAssemblyId: sub.id, insertionDirection: [0, 1, 0] });
-    frame.rails.forEach((r, k) => {
-      if (k > 0) {
-        const wall = frame.walls[k - 1]?.[side];
-        if (wall) step(`${label} side: slide in the panel below the ${names[k].toLowerCase()} rail`, [wall], { subAssemblyId: sub.id, insertionDirection: [0, -1, 0] });
-      }
-      step(`${label} side: ${names[k].toLowerCase()} rail`, [r[side], ...jointsOf(r[side])], { subAssemblyId: sub.id, insertionDirection: [0, -1, 0] });
-    });
-  }
-  step('Stand the left side up', [], {});
-  const crossMembers = frame.rails.flatMap((r) => [r.back, r.front]);
-  // Each cross member's first joint meets the left uprights (rails run from left to right).
-  step('Join the cross members to the left side', [...crossMembers, ...crossMembers.map((id) => jointsOf(id)[0])], {
-    insertionDirection: [-1, 0, 0],
-    notes: 'Support the cross members until the right side is on.',
-  });
-  const backPanels = frame.walls.map((b) => b.back).filter((x): x is string => !!x);
-  const shelves = frame.shelves.filter((x): x is string => !!x);
-  step('Slide the shelves and the back panel in from the open right side', [...shelves, ...backPanels], {
-    insertionDirection: [-1, 0, 0],
-    notes: 'They must be in before the right side closes their slots.',
-  });
-  step('Bring the right side in and fasten it', crossMembers.map((id) => jointsOf(id)[1]), {
-    subAssemblyId: subs.right.id,
-    insertionDirection: [-1, 0, 0],
-    notes: 'Two people: keep the side square while it slides onto the panels.',
-  });
-  const doorParts = frame.design.accessories.filter((a) => a.panelId && frame.doors.includes(a.panelId)).map((a) => a.id);
-  if (frame.doors.length) step('Hang the doors', [...frame.doors, ...doorParts], { insertionDirection: [0, 0, 1] });
-  const feet = frame.design.accessories.filter((a) => a.kind === 'leveling-foot' || a.kind === 'caster').map((a) => a.id);
-  step('Screw in the feet and level the cabinet', feet, { insertionDirection: [0, 1, 0], notes: 'Tip the cabinet with a helper; never work under a raised frame.' });
-  step('Press on the end caps', frame.design.accessories.filter((a) => a.kind === 'end-cap').map((a) => a.id), { insertionDirection: [0, -1, 0] });
-  return steps.filter((s) => s.partIds.length > 0);
-}
 
 export const cabinetGenerator: GeneratorDefinition<typeof cabinetParamsSchema> = {
   id: 'cabinet',
@@ -131,6 +85,6 @@ export const cabinetGenerator: GeneratorDefinition<typeof cabinetParamsSchema> =
     };
     const subs = { left: sideOf('left', [1, 0, 0]), right: sideOf('right', [-1, 0, 0]) };
     const design = { ...frame.design, subAssemblies: [subs.left, subs.right] };
-    return { ...design, steps: cabinetSteps({ ...frame, design }, names, subs) };
+    return { ...design, steps: generateSteps(design, catalogue) };
   },
 };

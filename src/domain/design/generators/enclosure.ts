@@ -1,7 +1,7 @@
 /** An enclosure: compartments stacked one above the other, walls and top captured, hinged doors in front. */
 import { z } from 'zod';
 import type { Catalogue } from '../../catalogue/types';
-import { buildFrame, capturedSheet, levelByLevelSteps } from './frameBuilder';
+import { buildFrame, capturedSheet, withGeneratedSteps } from './frameBuilder';
 import { baseParamsShape, checkCapturedMaterial, checkFrameSize, checkMaterial, panelMaterialId, sizesFor } from './params';
 import type { GeneratorDefinition } from './types';
 
@@ -60,6 +60,6 @@ export const enclosureGenerator: GeneratorDefinition<typeof enclosureParamsSchem
       },
       catalogue,
     );
-    return { ...frame.design, steps: levelByLevelSteps(frame, names) };
+    return withGeneratedSteps(frame, catalogue);
   },
 };

@@ -12,6 +12,7 @@ import { createIdAllocator, type IdAllocator } from '../ids';
 import { addJoints, type JointInput } from '../operations';
 import { thickestFittingThickness } from '../slotLimits';
 import type { Accessory, AssemblyStep, DesignDocument, LoadCase, Panel, Profile, SubAssembly, Vec3 } from '../schema';
+import { generateSteps } from '../../assembly/generateSteps';
 
 export type FrameFace = 'back' | 'left' | 'right' | 'front';
 export type RailSide = 'back' | 'left' | 'right' | 'front';
@@ -266,45 +267,9 @@ export function buildFrame(plan: FramePlan, catalogue: Catalogue): BuiltFrame {
   return { design, posts, rails, jointsOfRail, shelves, walls, doors, top, system, post, rail };
 }
 
-/** Assembly steps for a frame built upright, level by level, panels before the member that closes their slot. */
-export function levelByLevelSteps(frame: BuiltFrame, levelNames: string[]): AssemblyStep[] {
-  const ids = createIdAllocator(frame.design);
-  const steps: AssemblyStep[] = [];
-  const step = (title: string, partIds: string[], insertionDirection?: Vec3, notes?: string) => {
-    const parts = partIds.filter(Boolean);
-    if (parts.length === 0) return;
-    steps.push({ id: ids.next('step'), title, partIds: parts, ...(insertionDirection ? { insertionDirection } : {}), ...(notes ? { notes } : {}) });
-  };
-  const railWithJoints = (railId: string) => [railId, ...(frame.jointsOfRail.get(railId) ?? [])];
-  const { posts } = frame;
-  step('Stand the four uprights', [posts.backLeft, posts.backRight, posts.frontLeft, posts.frontRight], [0, 1, 0], 'Put drop-in T-nuts in the slots as you go; brace the uprights until the first level of rails is on.');
-  frame.rails.forEach((r, k) => {
-    if (k > 0) {
-      const band = frame.walls[k - 1] ?? {};
-      step(
-        `Slide in the panels below the ${levelNames[k].toLowerCase()} rails`,
-        [band.back, band.left, band.right, band.front].filter((x): x is string => !!x),
-        [0, -1, 0],
-        'Captured panels go down the uprights\u2019 slots before the rails above close them.',
-      );
-    }
-    const shelf = frame.shelves[k];
-    if (shelf) {
-      step(`${levelNames[k]} rails: back and sides`, [...railWithJoints(r.back), ...railWithJoints(r.left), ...railWithJoints(r.right)], [0, 0, 1]);
-      step(`Slide the ${levelNames[k].toLowerCase()} shelf in from the front`, [shelf], [0, 0, 1], 'The shelf must be in before the front rail closes the slot.');
-      step(`${levelNames[k]} rail: front`, railWithJoints(r.front), [0, 0, 1]);
-    } else {
-      step(`${levelNames[k]} rails`, [...railWithJoints(r.back), ...railWithJoints(r.left), ...railWithJoints(r.right), ...railWithJoints(r.front)], [0, 0, 1]);
-    }
-  });
-  if (frame.top) step('Fit the top', [frame.top], [0, -1, 0], 'Screw the top down into T-nuts in the top rails.');
-  const doorParts = frame.design.accessories.filter((a) => a.panelId && frame.doors.includes(a.panelId)).map((a) => a.id);
-  if (frame.doors.length) step('Hang the doors', [...frame.doors, ...doorParts], [0, 0, 1], 'Check the doors swing clear before tightening the hinges.');
-  const feet = frame.design.accessories.filter((a) => a.kind === 'leveling-foot' || a.kind === 'caster').map((a) => a.id);
-  step('Screw in the feet and level the frame', feet, [0, 1, 0], 'Tip the frame with a helper; never work under a raised frame.');
-  const caps = frame.design.accessories.filter((a) => a.kind === 'end-cap').map((a) => a.id);
-  step('Press on the end caps', caps, [0, -1, 0]);
-  return steps;
+/** The built frame with its generated assembly steps (see `src/domain/assembly`). */
+export function withGeneratedSteps(frame: BuiltFrame, catalogue: Catalogue): DesignDocument {
+  return { ...frame.design, steps: generateSteps(frame.design, catalogue) };
 }
 
 export function withLoadCases(design: DesignDocument, loadCases: LoadCase[]): DesignDocument {

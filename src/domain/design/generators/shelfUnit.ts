@@ -1,7 +1,7 @@
 /** A shelf unit: N evenly spaced levels, each with a captured shelf; back or side walls optional. */
 import { z } from 'zod';
 import type { Catalogue } from '../../catalogue/types';
-import { buildFrame, capturedSheet, levelByLevelSteps, type FrameFace } from './frameBuilder';
+import { buildFrame, capturedSheet, withGeneratedSteps, type FrameFace } from './frameBuilder';
 import { baseParamsShape, checkCapturedMaterial, checkFrameSize, checkMaterial, panelMaterialId, sizesFor } from './params';
 import type { GeneratorDefinition } from './types';
 
@@ -58,6 +58,6 @@ export const shelfUnitGenerator: GeneratorDefinition<typeof shelfUnitParamsSchem
       },
       catalogue,
     );
-    return { ...frame.design, steps: levelByLevelSteps(frame, names) };
+    return withGeneratedSteps(frame, catalogue);
   },
 };

@@ -1,7 +1,7 @@
 /** A table: legs, a top frame with a face-mounted top, and an optional lower frame with a shelf. */
 import { z } from 'zod';
 import type { Catalogue } from '../../catalogue/types';
-import { buildFrame, capturedSheet, levelByLevelSteps, type FrameLevel } from './frameBuilder';
+import { buildFrame, capturedSheet, withGeneratedSteps, type FrameLevel } from './frameBuilder';
 import { baseParamsShape, checkCapturedMaterial, checkFrameSize, checkMaterial, panelMaterialId, sizesFor } from './params';
 import type { GeneratorDefinition } from './types';
 
@@ -74,6 +74,6 @@ export const tableGenerator: GeneratorDefinition<typeof tableParamsSchema> = {
       },
       catalogue,
     );
-    return { ...frame.design, steps: levelByLevelSteps(frame, names) };
+    return withGeneratedSteps(frame, catalogue);
   },
 };

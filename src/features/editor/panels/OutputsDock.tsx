@@ -12,6 +12,7 @@ import { LoadsTab } from './LoadsTab';
 import { PartsTab } from './PartsTab';
 import { PriceTab } from './PriceTab';
 import { ToolsTab } from './ToolsTab';
+import { SequencePanel } from '../sequence/SequencePanel';
 import { WeightTab } from './WeightTab';
 import { addLoadCaseCommand, removeLoadCaseCommand, updateSettingsCommand, type StockSettingsPatch } from './panelCommands';
 
@@ -23,9 +24,10 @@ export const OUTPUT_TABS: DockTab[] = [
   { id: 'weight', label: 'Weight' },
   { id: 'price', label: 'Price' },
   { id: 'loads', label: 'Loads' },
+  { id: 'sequence', label: 'Sequence' },
 ];
 
-export type OutputTabId = 'parts' | 'cuts' | 'bars' | 'tools' | 'weight' | 'price' | 'loads';
+export type OutputTabId = 'parts' | 'cuts' | 'bars' | 'tools' | 'weight' | 'price' | 'loads' | 'sequence';
 
 export function isEmptyDesign(design: DesignDocument): boolean {
   return design.profiles.length === 0 && design.panels.length === 0 && design.accessories.length === 0;
@@ -151,6 +153,7 @@ export function DockBody({ tab, design, analysis, analysedSettings, running, uni
       </p>
     );
   }
+  if (tab === 'sequence') return <SequencePanel />;
   switch (tab) {
     case 'parts':
       return <PartsTab lines={analysis.bom} units={units} designName={design.name} />;

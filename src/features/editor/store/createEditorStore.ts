@@ -1,6 +1,6 @@
 import { createStore } from 'zustand/vanilla';
 import { temporal } from 'zundo';
-import { designDocumentSchema, type DesignDocument, CURRENT_SCHEMA_VERSION } from '@/domain/design/schema';
+import { CURRENT_SCHEMA_VERSION, designDocumentSchema, type DesignDocument } from '@/domain/design/schema';
 import { createAnalysisSlice } from './analysisSlice';
 import { createDesignSlice, HISTORY_LIMIT } from './designSlice';
 import { createSelectionSlice } from './selectionSlice';
