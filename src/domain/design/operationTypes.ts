@@ -2,7 +2,7 @@
  * The inputs of the design operations and their serialisable form, `DesignOperation`
  * (type + payload), which findings carry as fixes and the editor replays. Lengths mm.
  */
-import type { Accessory, AccessoryKind, Axis, Cutout, Joint, JointKind, JointMember, Panel, Vec3 } from './schema';
+import type { Accessory, AccessoryKind, Axis, Cutout, DesignDocument, DesignSettings, Joint, JointKind, JointMember, LoadCase, Panel, Vec3 } from './schema';
 
 export class OperationError extends Error {
   constructor(message: string) {
@@ -82,6 +82,9 @@ export interface HingedDoorInput extends DoorOpeningInput {
   hingeSide?: 'left' | 'right';
 }
 
+export type SettingsChanges = Partial<Pick<DesignSettings, 'stockLength' | 'kerf' | 'endTrim' | 'minReusableOffcut'>>;
+export type JointChanges = Partial<Pick<Joint, 'fastenerHead' | 'tNut' | 'quantity'>>;
+
 export type DesignOperation =
   | { type: 'addProfile'; payload: { profile: ProfileInput } }
   | { type: 'updateProfile'; payload: { profileId: string; changes: ProfileChanges } }
@@ -101,6 +104,12 @@ export type DesignOperation =
   | { type: 'addSlidingDoors'; payload: { doors: SlidingDoorsInput } }
   | { type: 'addHingedDoor'; payload: { door: HingedDoorInput } }
   | { type: 'autoEndCaps'; payload?: Record<string, never> }
-  | { type: 'addFeetToFreeBottomEnds'; payload?: { kind?: 'leveling-foot' | 'caster' } };
+  | { type: 'addFeetToFreeBottomEnds'; payload?: { kind?: 'leveling-foot' | 'caster' } }
+  | { type: 'updateSettings'; payload: { changes: SettingsChanges } }
+  | { type: 'addLoadCase'; payload: { loadCase: LoadCase } }
+  | { type: 'removeLoadCase'; payload: { loadCaseId: string } }
+  | { type: 'updateJoint'; payload: { jointId: string; changes: JointChanges } }
+  | { type: 'insertDesign'; payload: { design: DesignDocument; offset?: Vec3 } }
+  | { type: 'replaceDesign'; payload: { design: DesignDocument } };
 
 export type DesignOperationType = DesignOperation['type'];
