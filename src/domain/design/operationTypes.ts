@@ -2,7 +2,7 @@
  * The inputs of the design operations and their serialisable form, `DesignOperation`
  * (type + payload), which findings carry as fixes and the editor replays. Lengths mm.
  */
-import type { Accessory, AccessoryKind, AssemblyStep, Axis, Cutout, Joint, JointKind, JointMember, Panel, Vec3 } from './schema';
+import type { Accessory, AccessoryKind, AssemblyStep, Axis, Cutout, DesignDocument, DesignSettings, Joint, JointKind, JointMember, LoadCase, Panel, Vec3 } from './schema';
 
 export class OperationError extends Error {
   constructor(message: string) {
@@ -90,6 +90,9 @@ export interface HingedDoorInput extends DoorOpeningInput {
   hingeSide?: 'left' | 'right';
 }
 
+export type SettingsChanges = Partial<Pick<DesignSettings, 'stockLength' | 'kerf' | 'endTrim' | 'minReusableOffcut'>>;
+export type JointChanges = Partial<Pick<Joint, 'fastenerHead' | 'tNut' | 'quantity'>>;
+
 export type DesignOperation =
   | { type: 'addProfile'; payload: { profile: ProfileInput } }
   | { type: 'updateProfile'; payload: { profileId: string; changes: ProfileChanges } }
@@ -110,6 +113,12 @@ export type DesignOperation =
   | { type: 'addHingedDoor'; payload: { door: HingedDoorInput } }
   | { type: 'autoEndCaps'; payload?: Record<string, never> }
   | { type: 'addFeetToFreeBottomEnds'; payload?: { kind?: 'leveling-foot' | 'caster' } }
+  | { type: 'updateSettings'; payload: { changes: SettingsChanges } }
+  | { type: 'addLoadCase'; payload: { loadCase: LoadCase } }
+  | { type: 'removeLoadCase'; payload: { loadCaseId: string } }
+  | { type: 'updateJoint'; payload: { jointId: string; changes: JointChanges } }
+  | { type: 'insertDesign'; payload: { design: DesignDocument; offset?: Vec3 } }
+  | { type: 'replaceDesign'; payload: { design: DesignDocument } }
   // Assembly sequence edits (src/domain/assembly/sequenceOperations.ts).
   | { type: 'moveStep'; payload: { stepId: string; toIndex: number } }
   | { type: 'moveStepBefore'; payload: { stepId: string; beforeStepId: string } }
@@ -119,6 +128,7 @@ export type DesignOperation =
   | { type: 'movePartsToStep'; payload: { partIds: string[]; stepId: string } }
   | { type: 'updateStep'; payload: { stepId: string; changes: StepChanges } }
   | { type: 'regenerateSequence'; payload?: Record<string, never> };
+
 
 /** Operations that edit the assembly sequence rather than the parts. */
 export const SEQUENCE_OPERATION_TYPES: ReadonlySet<string> = new Set(['moveStep', 'moveStepBefore', 'moveStepAfter', 'mergeSteps', 'splitStep', 'movePartsToStep', 'updateStep', 'regenerateSequence']);

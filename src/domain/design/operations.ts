@@ -8,6 +8,7 @@ import { connectorFor, defaultCatalogue, getConnector, getSystem } from '../cata
 import type { Catalogue } from '../catalogue/types';
 import { normalize } from '../geometry/vectors';
 import { addHingedDoor, addSlidingDoors } from './doorOperations';
+import { addLoadCase, insertDesign, removeLoadCase, replaceDesign, updateJoint, updateSettings } from './documentOperations';
 import { addFeetToFreeBottomEnds, autoEndCaps } from './endTreatments';
 import { createIdAllocator, type IdAllocator } from './ids';
 import { withJointMachining } from './jointMachining';
@@ -394,6 +395,18 @@ function applyOperationOnly(design: DesignDocument, op: DesignOperation, catalog
       return autoEndCaps(design, catalogue);
     case 'addFeetToFreeBottomEnds':
       return addFeetToFreeBottomEnds(design, op.payload?.kind ?? 'leveling-foot', catalogue);
+    case 'updateSettings':
+      return updateSettings(design, op.payload.changes);
+    case 'addLoadCase':
+      return addLoadCase(design, op.payload.loadCase);
+    case 'removeLoadCase':
+      return removeLoadCase(design, op.payload.loadCaseId);
+    case 'updateJoint':
+      return updateJoint(design, op.payload.jointId, op.payload.changes);
+    case 'insertDesign':
+      return insertDesign(design, op.payload.design, op.payload.offset);
+    case 'replaceDesign':
+      return replaceDesign(design, op.payload.design);
     case 'moveStep':
       return moveStep(design, op.payload.stepId, op.payload.toIndex);
     case 'moveStepBefore':

@@ -73,8 +73,8 @@ describe('editor commands', () => {
       type: 'group',
       label: 'Edit',
       commands: [
-        { type: 'update', collection: 'profiles', id: 'p1', patch: { length: 800 } },
-        { type: 'update', collection: 'panels', id: 'panel-1', patch: { thickness: 6 } },
+        { type: 'operation', label: 'a', operation: { type: 'updateProfile', payload: { profileId: 'p1', changes: { length: 800 } } } },
+        { type: 'operation', label: 'b', operation: { type: 'updatePanel', payload: { panelId: 'panel-1', changes: { thickness: 6 } } } },
       ],
     });
   });

@@ -1,4 +1,5 @@
 export { CommandRefusedError, type EditorCommand } from './EditorCommand';
+export { commandFromJSON, type CommandJSON } from './commandFromJSON';
 export { groupCommand } from './groupCommand';
 export { operationCommand } from './operationCommand';
 export { replaceDesignCommand } from './replaceDesignCommand';
