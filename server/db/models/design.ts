@@ -8,6 +8,10 @@ export class DesignModel extends Model<InferAttributes<DesignModel>, InferCreati
   /** Set when the design is deleted; archived designs are hidden but their revisions are kept. */
   declare archivedAt: CreationOptional<Date | null>;
   declare latestRevision: number;
+  /** The latest revision's profile count, author and thumbnail flag, so the list reads this row only. */
+  declare profileCount: CreationOptional<number>;
+  declare hasThumbnail: CreationOptional<boolean>;
+  declare updatedBy: CreationOptional<number | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -23,6 +27,9 @@ export function initDesignModel(sequelize: Sequelize): typeof DesignModel {
       createdBy: { type: DataTypes.INTEGER, allowNull: false },
       archivedAt: { type: DataTypes.DATE, allowNull: true },
       latestRevision: { type: DataTypes.INTEGER, allowNull: false },
+      profileCount: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+      hasThumbnail: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
+      updatedBy: { type: DataTypes.INTEGER, allowNull: true },
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
     },

@@ -15,14 +15,14 @@ import {
   type SummaryRow,
 } from './present';
 
+// Reads the designs row and its author only: a revision row is never touched, because its columns
+// after the document sit behind megabytes of overflow pages for a large design.
 const SUMMARY_SELECT = `
   SELECT d.id AS id, d.name AS name, d.system_id AS systemId, d.latest_revision AS latestRevision,
          d.updated_at AS updatedAt, u.id AS updatedById, u.display_name AS updatedByName,
-         (r.thumbnail IS NOT NULL) AS hasThumbnail,
-         r.profile_count AS profileCount
+         d.has_thumbnail AS hasThumbnail, d.profile_count AS profileCount
     FROM designs d
-    JOIN design_revisions r ON r.design_id = d.id AND r.number = d.latest_revision
-    JOIN users u ON u.id = r.created_by
+    JOIN users u ON u.id = COALESCE(d.updated_by, d.created_by)
    WHERE d.archived_at IS NULL`;
 
 const REVISION_SELECT = `
@@ -91,7 +91,15 @@ export function createDesignsService(db: Database) {
       const input: NewRevision = { ...extras, document };
       const { id, createdAt } = await db.write(async (transaction) => {
         const design = await Design.create(
-          { name: document.name, systemId: document.systemId, createdBy: author.id, latestRevision: 1 },
+          {
+            name: document.name,
+            systemId: document.systemId,
+            createdBy: author.id,
+            latestRevision: 1,
+            updatedBy: author.id,
+            profileCount: document.profiles.length,
+            hasThumbnail: Boolean(extras.thumbnail),
+          },
           { transaction },
         );
         const row = await DesignRevision.create(
@@ -143,6 +151,9 @@ export function createDesignsService(db: Database) {
           { transaction },
         );
         design.latestRevision = next;
+        design.updatedBy = author.id;
+        design.profileCount = input.document.profiles.length;
+        design.hasThumbnail = Boolean(input.thumbnail);
         design.name = input.document.name;
         design.systemId = input.document.systemId;
         await design.save({ transaction });
