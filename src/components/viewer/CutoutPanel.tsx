@@ -13,7 +13,7 @@ interface CutoutPanelProps {
 
 /** A sheet with round cut-outs: its rectangle with holes, extruded to its thickness; one mesh. */
 export function CutoutPanel({ panel }: CutoutPanelProps) {
-  const { resources, pickables } = useScene();
+  const { resources, pickables, drawn } = useScene();
   const invalidate = useThree((s) => s.invalidate);
   const geometryKey = `cutout:${panel.id}:${panel.rect.width}:${panel.rect.height}:${panel.thickness}:${JSON.stringify(panel.cutouts)}`;
   const geometry = useMemo(() => resources.ownedGeometry(geometryKey, () => cutoutGeometry(panel)), [resources, geometryKey]); // eslint-disable-line react-hooks/exhaustive-deps
@@ -26,8 +26,15 @@ export function CutoutPanel({ panel }: CutoutPanelProps) {
     mesh.matrixAutoUpdate = false;
     panelBasis(panel, mesh.matrix);
     mesh.userData.partId = panel.id;
+    const entry = { object: mesh, partIds: [panel.id], base: Float32Array.from(mesh.matrix.elements) };
+    drawn.batches.add(entry);
+    drawn.version++;
     invalidate();
-  }, [mesh, geometry, panel, resources, invalidate]);
+    return () => {
+      drawn.batches.delete(entry);
+      drawn.version++;
+    };
+  }, [mesh, geometry, panel, resources, invalidate, drawn]);
 
   useEffect(() => {
     pickables.add(mesh);

@@ -92,6 +92,8 @@ export function DesignViewer({
     anchors: { current: new Map() },
     aimCamera: { current: null },
     gizmoBusy: { current: false },
+    drawn: { batches: new Set(), version: 0 },
+    playerProbe: { current: null },
   }));
   useEffect(() => () => shared.resources.dispose(), [shared]);
 

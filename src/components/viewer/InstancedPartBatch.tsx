@@ -18,7 +18,7 @@ function capacityFor(count: number): number {
 export function InstancedPartBatch({ data, geometry, material, pickable }: Required<PartBatchProps>) {
   const highlight = useHighlight();
   const invalidate = useThree((s) => s.invalidate);
-  const { pickables } = useScene();
+  const { pickables, drawn } = useScene();
   const count = data.partIds.length;
   const capacity = capacityFor(count);
 
@@ -40,8 +40,16 @@ export function InstancedPartBatch({ data, geometry, material, pickable }: Requi
     mesh.userData.partIds = data.partIds;
     mesh.computeBoundingSphere();
     mesh.computeBoundingBox();
+    // The step player moves instances from these laid-out matrices.
+    const entry = { object: mesh, partIds: data.partIds, base: data.matrices };
+    drawn.batches.add(entry);
+    drawn.version++;
     invalidate();
-  }, [mesh, data, count, invalidate]);
+    return () => {
+      drawn.batches.delete(entry);
+      drawn.version++;
+    };
+  }, [mesh, data, count, invalidate, drawn]);
 
   useLayoutEffect(() => {
     // Colours follow selection, hover and findings: written into the instance colours, no re-layout.

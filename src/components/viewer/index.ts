@@ -13,3 +13,4 @@ export { SceneResources } from './sceneResources';
 export { gridStepsFor } from './gridSteps';
 export { designFootprint, type Footprint } from './footprint';
 export type { SlotwiseSceneHook } from './SceneTestHook';
+export * from './player';

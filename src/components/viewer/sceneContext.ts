@@ -23,6 +23,24 @@ export interface SceneShared {
   aimCamera: { current: ((direction: THREE.Vector3) => void) | null };
   /** True while a tool handle (the editor's move gizmo) is hovered or dragged: clicks are not picks. */
   gizmoBusy: { current: boolean };
+  /** Drawn part meshes with their laid-out matrices, for the step player to move imperatively. */
+  drawn: DrawnRegistry;
+  /** The step player's per-frame work, forced to rewrite its step (benchmarks time it through the test hook). */
+  playerProbe: { current: (() => void) | null };
+}
+
+/** One drawn batch: an instanced mesh (one instance per entry of `partIds`) or a single mesh of one part. */
+export interface DrawnBatch {
+  object: THREE.Object3D;
+  partIds: readonly string[];
+  /** The laid-out matrices, 16 floats per instance (column-major). */
+  base: Float32Array;
+}
+
+/** The batches drawn right now; `version` changes whenever one is added, removed or re-laid out. */
+export interface DrawnRegistry {
+  batches: Set<DrawnBatch>;
+  version: number;
 }
 
 export const SceneContext = createContext<SceneShared | null>(null);
