@@ -8,6 +8,7 @@ import type { DesignDocument } from '@/domain/design/schema';
 import { CameraDirector } from './CameraDirector';
 import { DesignParts } from './DesignParts';
 import { FindingMarkers } from './FindingMarkers';
+import { LevelOfDetail } from './LevelOfDetail';
 import { designFootprint } from './footprint';
 import { renderModeFromUrl } from './renderMode';
 import { HighlightContext, PartClickContext, SceneContext, type SceneShared } from './sceneContext';
@@ -142,6 +143,7 @@ export function DesignViewer({
               <OrbitControls makeDefault enableDamping={false} zoomToCursor minDistance={40} maxDistance={60_000} />
               <CameraDirector requests={[cameraRequest, ownRequest]} frameKey={frameKey} />
               {viewPlan && <ViewPlanSync markerRef={markerRef} />}
+              <LevelOfDetail profileCount={design.profiles.length} />
               <SceneTestHook />
               {children}
             </Canvas>

@@ -33,6 +33,8 @@ export class StepAnimator {
   private flip: { from: THREE.Quaternion; to: THREE.Quaternion; startedAt: number } | null = null;
   private orientation = new THREE.Quaternion();
   private needsFull = true;
+  /** True when the piece stands as placed (no turn): matrices are copied, not multiplied. */
+  private upright = true;
   private settledStep = -1;
   private readonly center = new THREE.Vector3();
   private readonly orient = new THREE.Matrix4();
@@ -164,7 +166,8 @@ export class StepAnimator {
   }
 
   private updateOrientationMatrix(): void {
-    if (this.orientation.equals(identity)) {
+    this.upright = this.orientation.equals(identity);
+    if (this.upright) {
       this.orient.identity();
       return;
     }
@@ -214,17 +217,13 @@ export class StepAnimator {
     const step = view.steps[stepIndex];
     if (!step) return;
     const factor = Math.max(view.explode, 1 - eased);
-    const touched = new Set<THREE.Object3D>();
     for (const motion of step.parts) {
       const list = this.instancesOf.get(motion.partId);
       if (!list) continue;
-      for (const { batch, index } of list) {
-        this.writeInstance(batch, index, factor === 0 ? null : motion, factor);
-        touched.add(batch.object);
-      }
+      for (let k = 0; k < list.length; k++) this.writeInstance(list[k].batch, list[k].index, factor === 0 ? null : motion, factor);
     }
-    for (const object of touched) {
-      const mesh = object as THREE.InstancedMesh;
+    for (const batch of this.drawn.batches) {
+      const mesh = batch.object as THREE.InstancedMesh;
       if (mesh.isInstancedMesh) mesh.instanceMatrix.needsUpdate = true;
     }
   }
@@ -249,6 +248,19 @@ export class StepAnimator {
       array.set(ZERO, i * 16);
       return;
     }
+    if (this.upright) {
+      // The common path, no allocation: copy the seat and push the translation back.
+      const base = batch.base;
+      const o = i * 16;
+      for (let k = 0; k < 16; k++) array[o + k] = base[o + k];
+      if (motion && factor) {
+        const d = motion.offset * factor;
+        array[o + 12] -= motion.insertion[0] * d;
+        array[o + 13] -= motion.insertion[1] * d;
+        array[o + 14] -= motion.insertion[2] * d;
+      }
+      return;
+    }
     this.composed(batch.base, i, factor ?? 0, motion);
     array.set(this.tmp2.elements, i * 16);
   }
@@ -262,7 +274,7 @@ export class StepAnimator {
       m.elements[13] -= motion.insertion[1] * d;
       m.elements[14] -= motion.insertion[2] * d;
     }
-    if (!this.orientation.equals(identity)) m.premultiply(this.orient);
+    if (!this.upright) m.premultiply(this.orient);
   }
 
   private ghostFor(batch: DrawnBatch, mesh: THREE.InstancedMesh): THREE.InstancedMesh {
