@@ -9,7 +9,7 @@ interface ViewerSheetProps {
 }
 
 /** Heights of the sheet's body when pulled up, as a share of the window height. */
-const OPEN_SHARE = 0.55;
+const OPEN_SHARE = 0.36;
 
 /**
  * The phone and tablet sheet under the canvas: the player's controls stay in reach; pull the
