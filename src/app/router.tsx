@@ -13,6 +13,8 @@ const pageSkeleton = <PageSkeleton />;
 const SignInPage = lazyPage(() => import('@/features/auth/components/SignInPage'), pageSkeleton);
 const DesignsPage = lazyPage(() => import('@/features/designs/components/DesignsPage'), pageSkeleton);
 const EditorRoute = lazyPage(() => import('@/features/editor/EditorRoute'), <EditorSkeleton />);
+// The read-only viewer: the shared viewer layer without the editor's code.
+const ViewerRoute = lazyPage(() => import('@/features/viewer/ViewerRoute'), <EditorSkeleton label="Opening the viewer…" />);
 const PeoplePage = lazyPage(() => import('@/features/people/components/PeoplePage'), pageSkeleton);
 const AccountPage = lazyPage(() => import('@/features/account/components/AccountPage'), pageSkeleton);
 const WorkbenchPage = lazyPage(() => import('@/features/workbench/components/WorkbenchPage'), pageSkeleton);
@@ -57,7 +59,10 @@ export const routes: RouteObject[] = [
                   {
                     path: 'designs/:designId',
                     element: <RequireRole roles={['owner', 'designer']} />,
-                    children: [{ index: true, Component: EditorRoute }],
+                    children: [
+                      { index: true, Component: EditorRoute },
+                      { path: 'view', Component: ViewerRoute },
+                    ],
                   },
                 ],
               },

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { cutListToCsv } from '@/features/editor/panels/csv';
+import { cutListToCsv } from '@/components/outputs/csv';
 import { escapeCsvFormula, toCsv } from '@/domain/outputs/csv';
 import type { CutListGroup } from '@/domain/analysisTypes';
 

@@ -15,6 +15,8 @@ export interface SlotwiseSceneHook {
   worldToScreen(point: [number, number, number]): { x: number; y: number };
   /** Median time of `frames` synchronous renders (each waited for with a 1-pixel read), ms. */
   frameTimeMs(frames?: number): number;
+  /** Median script time of `frames` step-player frames (matrices of the current step rewritten, no render), ms; null without a player. */
+  playerFrameMs(frames?: number): number | null;
   /** Profiles currently drawn (instances or meshes), and the render mode. */
   stats(): { profilesDrawn: number; renderMode: string; objects: number };
   /** Geometries, materials and textures the scene cache holds, and the renderer's memory figures. */
@@ -32,7 +34,7 @@ export function SceneTestHook() {
   const gl = useThree((s) => s.gl);
   const scene = useThree((s) => s.scene);
   const camera = useThree((s) => s.camera);
-  const { resources, renderMode } = useScene();
+  const { resources, renderMode, playerProbe } = useScene();
 
   useEffect(() => {
     const render = () => {
@@ -86,6 +88,18 @@ export function SceneTestHook() {
         times.sort((a, b) => a - b);
         return times[Math.floor(times.length / 2)];
       },
+      playerFrameMs(frames = 30) {
+        const probe = playerProbe.current;
+        if (!probe) return null;
+        const times: number[] = [];
+        for (let i = 0; i < frames; i++) {
+          const started = performance.now();
+          probe();
+          times.push(performance.now() - started);
+        }
+        times.sort((a, b) => a - b);
+        return times[Math.floor(times.length / 2)];
+      },
       stats() {
         let profilesDrawn = 0;
         let objects = 0;
@@ -104,7 +118,7 @@ export function SceneTestHook() {
     return () => {
       if (window.__slotwiseScene === hook) delete window.__slotwiseScene;
     };
-  }, [gl, scene, camera, resources, renderMode]);
+  }, [gl, scene, camera, resources, renderMode, playerProbe]);
 
   return null;
 }

@@ -29,6 +29,21 @@ export class SceneResources {
     return geometry;
   }
 
+  /**
+   * The lighter stand-in for a variant's section at a distance: its outer square with one shallow
+   * notch per slot face, no chambers (about 80 triangles instead of several hundred).
+   */
+  lightProfileGeometry(variantId: string): THREE.BufferGeometry | null {
+    const key = `profile-light:${variantId}`;
+    const cached = this.geometries.get(key);
+    if (cached) return cached;
+    const variant = this.catalogue.variants.find((v) => v.id === variantId);
+    if (!variant) return null;
+    const geometry = createProfileSectionGeometry({ outline: lightOutline(variant.width, variant.height), holes: [] });
+    this.geometries.set(key, geometry);
+    return geometry;
+  }
+
   hardwareGeometry(shape: HardwareShape): THREE.BufferGeometry {
     return this.cached(`hardware:${shape}`, () => createHardwareGeometry(shape));
   }
@@ -128,4 +143,36 @@ export class SceneResources {
         return new THREE.MeshStandardMaterial({ color: '#0b7a75', metalness: 0.3, roughness: 0.5, transparent: true, opacity: 0.55, depthWrite: false });
     }
   }
+}
+
+/** A w × h rectangle (mm, centred) with a slot notch in the middle of each 20 mm cell of every face. */
+function lightOutline(width: number, height: number): [number, number][] {
+  const hw = width / 2;
+  const hh = height / 2;
+  const cell = Math.min(width, height);
+  const notch = cell * 0.22;
+  const depth = cell * 0.12;
+  const points: [number, number][] = [];
+  // Walk the four faces counter-clockwise, adding a notch at each cell centre.
+  const face = (from: [number, number], to: [number, number], inward: [number, number]) => {
+    const length = Math.hypot(to[0] - from[0], to[1] - from[1]);
+    const ux = (to[0] - from[0]) / length;
+    const uy = (to[1] - from[1]) / length;
+    const cells = Math.max(1, Math.round(length / cell));
+    points.push(from);
+    for (let c = 0; c < cells; c++) {
+      const mid = ((c + 0.5) * length) / cells;
+      const a = mid - notch / 2;
+      const b = mid + notch / 2;
+      points.push([from[0] + ux * a, from[1] + uy * a]);
+      points.push([from[0] + ux * a + inward[0] * depth, from[1] + uy * a + inward[1] * depth]);
+      points.push([from[0] + ux * b + inward[0] * depth, from[1] + uy * b + inward[1] * depth]);
+      points.push([from[0] + ux * b, from[1] + uy * b]);
+    }
+  };
+  face([-hw, -hh], [hw, -hh], [0, 1]);
+  face([hw, -hh], [hw, hh], [-1, 0]);
+  face([hw, hh], [-hw, hh], [0, -1]);
+  face([-hw, hh], [-hw, -hh], [1, 0]);
+  return points;
 }
