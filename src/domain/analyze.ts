@@ -8,6 +8,7 @@ import { defaultCatalogue } from './catalogue';
 import type { Catalogue } from './catalogue/types';
 import { indexCatalogue } from './checks/catalogueIndex';
 import { buildAnalysisContext, type AnalysisContext } from './checks/context';
+import { frameGroupFindings } from './checks/frameGroupFindings';
 import { interferenceFindings } from './checks/interferenceFindings';
 import { jointFindings } from './checks/jointFindings';
 import { panelFitFindings } from './checks/panelFitFindings';
@@ -59,6 +60,7 @@ export function analyzeDesign(design: DesignDocument, catalogue: Catalogue = def
   lap('interference');
   findings.push(...sequenceFindings(ctx));
   lap('sequence');
+  findings.push(...frameGroupFindings(ctx));
 
   const hardware = hardwareSummary(ctx);
   const sheets = panelSheets(ctx);

@@ -82,6 +82,17 @@ export interface HingedDoorInput extends DoorOpeningInput {
   hingeSide?: 'left' | 'right';
 }
 
+/** A frame starter run as a frame group (see frameGroups.ts); params in mm. */
+export interface FrameGroupInput {
+  generatorId: string;
+  params: Record<string, number | string | boolean | null>;
+  placement: 'replace' | 'beside';
+  /** Where the starter's origin goes, mm. */
+  origin?: Vec3;
+  id?: string;
+  name?: string;
+}
+
 export type DesignOperation =
   | { type: 'addProfile'; payload: { profile: ProfileInput } }
   | { type: 'updateProfile'; payload: { profileId: string; changes: ProfileChanges } }
@@ -101,6 +112,9 @@ export type DesignOperation =
   | { type: 'addSlidingDoors'; payload: { doors: SlidingDoorsInput } }
   | { type: 'addHingedDoor'; payload: { door: HingedDoorInput } }
   | { type: 'autoEndCaps'; payload?: Record<string, never> }
-  | { type: 'addFeetToFreeBottomEnds'; payload?: { kind?: 'leveling-foot' | 'caster' } };
+  | { type: 'addFeetToFreeBottomEnds'; payload?: { kind?: 'leveling-foot' | 'caster' } }
+  | { type: 'addFrameGroup'; payload: { group: FrameGroupInput } }
+  | { type: 'regenerateFrameGroup'; payload: { groupId: string; params: Record<string, number | string | boolean | null> } }
+  | { type: 'renameFrameGroup'; payload: { groupId: string; name: string } };
 
 export type DesignOperationType = DesignOperation['type'];

@@ -9,6 +9,7 @@ import type { Catalogue } from '../catalogue/types';
 import { normalize } from '../geometry/vectors';
 import { addHingedDoor, addSlidingDoors } from './doorOperations';
 import { addFeetToFreeBottomEnds, autoEndCaps } from './endTreatments';
+import { addFrameGroup, pruneFrameGroups, regenerateFrameGroup, renameFrameGroup } from './frameGroups';
 import { createIdAllocator, type IdAllocator } from './ids';
 import { withJointMachining } from './jointMachining';
 import { arrayParts, duplicateParts, mirrorParts, refreshJointPositions, rotateParts90, translateParts } from './moveOperations';
@@ -36,6 +37,7 @@ import type {
 
 export { newId, createIdAllocator } from './ids';
 export { addHingedDoor, addSlidingDoors, SLIDING_LEAF_OVERLAP_MM, MIN_SLIDING_OPENING_WIDTH_MM, MIN_DOOR_OPENING_MM } from './doorOperations';
+export { addFrameGroup, regenerateFrameGroup, renameFrameGroup, frameGroupOfPart, frameGroupsOf } from './frameGroups';
 export { autoEndCaps, addFeetToFreeBottomEnds, freeEnds, bottomEnds } from './endTreatments';
 export * from './operationTypes';
 export { arrayParts, copyParts, duplicateParts, mirrorParts, refreshJointPositions, rotateParts90, translateParts } from './moveOperations';
@@ -177,7 +179,7 @@ export function removeParts(design: DesignDocument, ids: string[]): DesignDocume
           !(l.kind === 'uniform' && l.panelId !== undefined && panelsGone.has(l.panelId)),
       ),
     }));
-  return {
+  return pruneFrameGroups({
     ...design,
     profiles,
     joints: design.joints.filter((j) => !jointsGone.has(j.id)),
@@ -186,7 +188,7 @@ export function removeParts(design: DesignDocument, ids: string[]): DesignDocume
     subAssemblies,
     steps,
     loadCases,
-  };
+  });
 }
 
 
@@ -383,6 +385,12 @@ export function applyOperation(design: DesignDocument, op: DesignOperation, cata
       return autoEndCaps(design, catalogue);
     case 'addFeetToFreeBottomEnds':
       return addFeetToFreeBottomEnds(design, op.payload?.kind ?? 'leveling-foot', catalogue);
+    case 'addFrameGroup':
+      return addFrameGroup(design, op.payload.group, catalogue);
+    case 'regenerateFrameGroup':
+      return regenerateFrameGroup(design, op.payload.groupId, op.payload.params, catalogue);
+    case 'renameFrameGroup':
+      return renameFrameGroup(design, op.payload.groupId, op.payload.name);
     default: {
       const never: never = op;
       throw new OperationError(`Unknown operation ${(never as { type: string }).type}`);
