@@ -7,7 +7,7 @@
 import type { Finding } from '../analysisTypes';
 import type { Joint, ProfileEnd } from '../design/schema';
 import { accessoriesAt, allDesignIds, jointsAt, type AnalysisContext, type ProfileInfo } from './context';
-import { findingId, profileName } from './describe';
+import { capitalise, countOf, findingId, jointName, panelName, profileName } from './describe';
 import { useDropInTNutsFix } from './fixes';
 
 const CHECK = 'sequence';
@@ -42,7 +42,7 @@ export function sequenceFindings(ctx: AnalysisContext): Finding[] {
           check: CHECK,
           severity: 'error',
           partIds: [joint.id, m.profileId],
-          message: `Joint ${joint.id} is made in ${stepTitle(js)}, before profile ${m.profileId} is placed in ${stepTitle(ps)}.`,
+          message: `${capitalise(jointName(ctx, joint))} is made in ${stepTitle(js)}, before ${profileName(ctx.profileById.get(m.profileId))} is placed in ${stepTitle(ps)}.`,
         });
       }
     }
@@ -77,7 +77,7 @@ export function sequenceFindings(ctx: AnalysisContext): Finding[] {
         check: CHECK,
         severity: 'error',
         partIds: [info.panel.id, ...info.bounding.map((b) => b.profile.id)],
-        message: `Panel ${info.panel.id} is captured in slots but is placed in ${stepTitle(ps)}, after its frame is closed in ${stepTitle(closedAt)}. Place the panel before the last joint of its frame.`,
+        message: `${capitalise(panelName(info.panel))} is captured in slots but is placed in ${stepTitle(ps)}, after its frame is closed in ${stepTitle(closedAt)}. Place the panel before the last joint of its frame.`,
       });
     }
   }
@@ -126,7 +126,7 @@ function checkSlideInTNuts(
       check: CHECK,
       severity: 'error',
       partIds: [joint.id, info.profile.id],
-      message: `Joint ${joint.id} uses slide-in T-nuts in ${profileName(info, info.profile.id)}, but both its ends are closed before ${stepTitle(jointStep)} (in ${stepTitle(startClosed as number)} and ${stepTitle(endClosed as number)}). Use drop-in T-nuts, or slide the T-nuts in before those steps.`,
+      message: `${capitalise(jointName(ctx, joint))} uses slide-in T-nuts in ${profileName(info, info.profile.id)}, but both its ends are closed before ${stepTitle(jointStep)} (in ${stepTitle(startClosed as number)} and ${stepTitle(endClosed as number)}). Use drop-in T-nuts, or slide the T-nuts in before those steps.`,
       ...(fix ? { fix } : {}),
     });
   }
@@ -145,7 +145,7 @@ function checkReferences(ctx: AnalysisContext, out: Finding[]): void {
         check: CHECK,
         severity: 'error',
         partIds: [step.id, ...unknown],
-        message: `Assembly step "${step.title}" names ${unknown.join(', ')}, which ${unknown.length === 1 ? 'is' : 'are'} not in the design.`,
+        message: `Assembly step "${step.title}" names ${unknown.length === 1 ? 'a part that is' : `${countOf(unknown.length, 'part')} that are`} not in the design.`,
       });
     }
     if (step.subAssemblyId && !subIds.has(step.subAssemblyId)) {
@@ -154,7 +154,7 @@ function checkReferences(ctx: AnalysisContext, out: Finding[]): void {
         check: CHECK,
         severity: 'error',
         partIds: [step.id],
-        message: `Assembly step "${step.title}" refers to sub-assembly ${step.subAssemblyId}, which is not in the design.`,
+        message: `Assembly step "${step.title}" refers to a sub-assembly that is not in the design.`,
       });
     }
   }
@@ -166,7 +166,7 @@ function checkReferences(ctx: AnalysisContext, out: Finding[]): void {
         check: CHECK,
         severity: 'error',
         partIds: [sub.id, ...unknown],
-        message: `Sub-assembly "${sub.name}" names ${unknown.join(', ')}, which ${unknown.length === 1 ? 'is' : 'are'} not in the design.`,
+        message: `Sub-assembly "${sub.name}" names ${unknown.length === 1 ? 'a part that is' : `${countOf(unknown.length, 'part')} that are`} not in the design.`,
       });
     }
   }

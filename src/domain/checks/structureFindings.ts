@@ -12,7 +12,7 @@ import { panelAxes } from '../geometry/panelGeometry';
 import { pointAlongProfile } from '../geometry/profileGeometry';
 import { dominantAxis, dot, type Vec3 } from '../geometry/vectors';
 import { memberAlong, type AnalysisContext, type PanelInfo, type ProfileInfo } from './context';
-import { findingId, formatNumber, mm, profileName } from './describe';
+import { findingId, formatNumber, mm, panelName, profileName } from './describe';
 import { footprintLeverArm } from './footprint';
 
 const CHECK = 'structure';
@@ -204,7 +204,7 @@ function applyLoad(ctx: AnalysisContext, loadCase: LoadCase, load: Load, addBeam
       check: CHECK,
       severity: 'error',
       partIds: [id],
-      message: `Load case "${loadCase.name}" puts a load on ${what} ${id}, which is not in the design.`,
+      message: `Load case "${loadCase.name}" puts a load on a ${what} that is not in the design. Remove the load or pick another ${what}.`,
     });
     return null;
   };
@@ -227,12 +227,12 @@ function applyLoad(ctx: AnalysisContext, loadCase: LoadCase, load: Load, addBeam
         check: CHECK,
         severity: 'warning',
         partIds: [panel.panel.id],
-        message: `In load case "${loadCase.name}", panel ${panel.panel.id} carries ${formatNumber(load.totalForce, 0)} N but Slotwise found no profiles under it to carry the load.`,
+        message: `In load case "${loadCase.name}", ${panelName(panel.panel)} carries ${formatNumber(load.totalForce, 0)} N but Slotwise found no profiles under it to carry the load.`,
       });
     }
     for (const s of supports) {
       const mid = clampAlong(s, dot(subtract(panel.panel.rect.center, s.startPoint), s.profile.direction));
-      addBeam(s, load.totalForce / supports.length, down, 'uniform', mid, `part of the load on panel ${panel.panel.id}`, [panel.panel.id]);
+      addBeam(s, load.totalForce / supports.length, down, 'uniform', mid, `part of the load on ${panelName(panel.panel)}`, [panel.panel.id]);
     }
     const c = panel.panel.rect.center;
     return { vertical: load.totalForce, point: [c[0], c[1], c[2]] };
@@ -341,7 +341,7 @@ function legChecks(ctx: AnalysisContext, loadCase: LoadCase, legs: ProfileInfo[]
         check: CHECK,
         severity: utilisation > 1 ? 'error' : 'warning',
         partIds: [leg.profile.id],
-        message: `In load case "${loadCase.name}", leg ${leg.profile.id} carries about ${formatNumber(share, 0)} N against an estimated buckling load of ${formatNumber(pcr, 0)} N (${formatNumber(utilisation * 100, 0)} %, fixed at the floor and free at the top). Brace the legs or use a larger profile.`,
+        message: `In load case "${loadCase.name}", ${profileName(leg)} carries about ${formatNumber(share, 0)} N against an estimated buckling load of ${formatNumber(pcr, 0)} N (${formatNumber(utilisation * 100, 0)} %, fixed at the floor and free at the top). Brace the legs or use a larger profile.`,
         data: { loadN: round(share), bucklingLoadN: round(pcr), utilisation: round(utilisation) },
       });
     }
