@@ -49,10 +49,7 @@ export function jointName(ctx: { profileById: Map<string, ProfileInfo> }, joint:
   return `the ${kind} joining ${names.length > 2 ? `${names.slice(0, -1).join(', ')} and ${names[names.length - 1]}` : names.join(' and ')}`;
 }
 
-/** "1 note", "2 notes": a count with its noun, plural when the count is not 1. */
-export function countOf(count: number, singular: string, plural = `${singular}s`): string {
-  return `${formatNumber(count, 0)} ${count === 1 ? singular : plural}`;
-}
+export { countOf } from '../words';
 
 const END_WORDS: Record<0 | 1 | 2, [string, string]> = {
   0: ['left', 'right'],

@@ -1,5 +1,6 @@
 import { useState } from 'react';
 import { ChevronDown, ChevronUp } from 'lucide-react';
+import { countOf } from '@/domain/words';
 import { useEditorStore } from '../store/editorStore';
 import { FindingsPanel } from '../panels/FindingsPanel';
 import { OutputsDock } from '../panels/OutputsDock';
@@ -9,7 +10,7 @@ export function OutputsArea() {
   const [open, setOpen] = useState(true);
   const counts = useEditorStore((state) => state.analysis?.counts);
   const status = useEditorStore((state) => state.analysisStatus);
-  const summary = counts ? `${counts.error} errors · ${counts.warning} warnings · ${counts.note} notes` : status === 'running' ? 'Checking…' : '';
+  const summary = counts ? `${countOf(counts.error, 'error')} · ${countOf(counts.warning, 'warning')} · ${countOf(counts.note, 'note')}` : status === 'running' ? 'Checking…' : '';
   return (
     <section aria-label="Checks and outputs" className="flex shrink-0 flex-col border-t border-paper-line bg-paper-raised">
       <button
