@@ -27,7 +27,8 @@ export function insertDesignCommand(label: string, inserted: DesignDocument, off
   };
 }
 
-function besideOffset(current: DesignDocument, inserted: DesignDocument): Vec3 {
+/** Where an added frame goes: beside the current parts, to +X, with a gap. mm. */
+export function besideOffset(current: DesignDocument, inserted: DesignDocument): Vec3 {
   const here = partBounds(current, 'all');
   const there = partBounds(inserted, 'all');
   if (!here || !there) return [0, 0, 0];

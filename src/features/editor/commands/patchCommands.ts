@@ -59,3 +59,21 @@ function updatePartCommand<C extends PartCollection>(
     },
   };
 }
+
+/** The units the design is shown in: saved with the design, so it opens the way it was made. */
+export function setDesignUnitsCommand(units: DesignDocument['units']): EditorCommand {
+  let previous: DesignDocument['units'] | null = null;
+  return {
+    label: units === 'in' ? 'Show inches' : 'Show millimetres',
+    apply(design) {
+      previous = design.units;
+      return { ...design, units };
+    },
+    undo(design) {
+      return previous ? { ...design, units: previous } : design;
+    },
+    toJSON() {
+      return { type: 'set-units', units };
+    },
+  };
+}

@@ -7,8 +7,8 @@ import { defaultCatalogue } from '@/domain/catalogue';
 import { generators, type GeneratorDefinition } from '@/domain/design/generators';
 import type { DesignDocument } from '@/domain/design/schema';
 import { cn } from '@/lib/cn';
-import { insertDesignCommand } from '../commands/insertDesignCommand';
-import { replaceDesignCommand } from '../commands/replaceDesignCommand';
+import { operationCommand } from '../commands';
+import { besideOffset } from '../commands/insertDesignCommand';
 import { useEditorStore, useEditorStoreApi } from '../store/editorStore';
 import type { DisplayUnits } from '../store/types';
 import { defaultFormValues, generatorFields, generatorFormSchema, type GeneratorFieldSpec, type GeneratorFormValues } from './generatorFields';
@@ -72,10 +72,18 @@ function GeneratorForm({ generator, units, systemId, onDone }: { generator: Gene
       return setFailure(error instanceof Error ? error.message : 'The frame could not be made from these sizes.');
     }
     const current = store.getState().design;
-    const command =
-      placement === 'replace'
-        ? replaceDesignCommand(`Replace with a ${generator.name.toLowerCase()}`, { ...generated, name: current.name, units: current.units, metadata: current.metadata })
-        : insertDesignCommand(`Add a ${generator.name.toLowerCase()}`, generated);
+    // One command: the starter runs as a frame group that keeps its parameters, so it can be resized later.
+    const command = operationCommand(placement === 'replace' ? `Replace with a ${generator.name.toLowerCase()}` : `Add a ${generator.name.toLowerCase()}`, {
+      type: 'addFrameGroup',
+      payload: {
+        group: {
+          generatorId: generator.id,
+          params: jsonParams(params),
+          placement: placement === 'replace' ? 'replace' : 'beside',
+          ...(placement === 'replace' ? {} : { origin: besideOffset(current, generated) }),
+        },
+      },
+    });
     if (!store.getState().execute(command)) return setFailure(store.getState().lastRefusal?.message ?? 'The frame could not be added.');
     store.getState().clearSelection();
     store.getState().setTool('select');
@@ -119,8 +127,27 @@ function GeneratorForm({ generator, units, systemId, onDone }: { generator: Gene
   );
 }
 
-function GeneratorField({ field, register, error }: { field: GeneratorFieldSpec; register: ReturnType<typeof useForm<GeneratorFormValues>>['register']; error?: string }) {
-  const id = `generator-${field.name}`;
+/** Starter parameters as plain JSON values (mm, counts, ids, switches). */
+export function jsonParams(params: Record<string, unknown>): Record<string, number | string | boolean | null> {
+  const out: Record<string, number | string | boolean | null> = {};
+  for (const [key, value] of Object.entries(params)) {
+    if (typeof value === 'number' || typeof value === 'string' || typeof value === 'boolean' || value === null) out[key] = value;
+  }
+  return out;
+}
+
+export function GeneratorField({
+  field,
+  register,
+  error,
+  idPrefix = 'generator',
+}: {
+  field: GeneratorFieldSpec;
+  register: ReturnType<typeof useForm<GeneratorFormValues>>['register'];
+  error?: string;
+  idPrefix?: string;
+}) {
+  const id = `${idPrefix}-${field.name}`;
   const errorId = `${id}-error`;
   const describedBy = error ? errorId : undefined;
   const control =
