@@ -26,10 +26,12 @@ export interface PartsTabProps {
   lines: BomLine[];
   units: LengthUnit;
   designName: string;
+  selectedIds?: ReadonlySet<string>;
+  onSelectParts?: (ids: string[], mode: 'replace' | 'add') => void;
 }
 
 /** The bill of materials, in sections by category, with a totals row and a CSV download. */
-export function PartsTab({ lines, units, designName }: PartsTabProps) {
+export function PartsTab({ lines, units, designName, selectedIds, onSelectParts }: PartsTabProps) {
   const columns = useMemo<ColumnDef<BomLine, any>[]>(
     () => [
       { id: 'code', header: 'Code', accessorKey: 'code', cell: (c) => <code className="text-xs">{c.getValue()}</code> },
@@ -83,6 +85,9 @@ export function PartsTab({ lines, units, designName }: PartsTabProps) {
         data={lines}
         columns={columns}
         rowKey={(line) => `${line.category}:${line.code}`}
+        rowPartIds={(line) => line.partIds}
+        selectedIds={selectedIds}
+        onSelectParts={onSelectParts}
         groupBy={(line) => line.category}
         groupOrder={BOM_CATEGORY_ORDER}
         renderGroupHeader={(key, rows) => `${BOM_CATEGORY_NAMES[key] ?? key} · ${rows.length} ${rows.length === 1 ? 'line' : 'lines'}`}
