@@ -23,7 +23,7 @@ export function GeneratorDialog({ open, onClose }: { open: boolean; onClose: () 
   const generator = (generators as readonly GeneratorDefinition[]).find((candidate) => candidate.id === kind) ?? generators[0];
   return (
     <Dialog open={open} title="Frame starters" description="A complete frame with joints, panels and feet, sized by you. Both choices can be undone." onClose={onClose}>
-      <div role="radiogroup" aria-label="Frame kind" className="mb-4 grid grid-cols-2 gap-2">
+      <div role="radiogroup" aria-label="Frame kind" className="mb-3 grid grid-cols-3 gap-2">
         {(generators as readonly GeneratorDefinition[]).map((candidate) => (
           <button
             key={candidate.id}
@@ -92,22 +92,23 @@ function GeneratorForm({ generator, units, systemId, onDone }: { generator: Gene
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4">
-      <p className="text-sm text-ink-soft">{generator.description}</p>
-      <div className="grid grid-cols-2 gap-3">
+    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-3">
+      <p className="text-xs text-ink-soft">{generator.description}</p>
+      {/* The sizes scroll inside the dialog so its buttons stay on screen at 1440 × 900 and below. */}
+      <div className="grid max-h-[min(40vh,360px)] grid-cols-2 gap-3 overflow-y-auto pr-1" data-testid="generator-fields">
         {fields.map((field) => (
           <GeneratorField key={field.name} field={field} register={register} error={errors[field.name]?.message as string | undefined} />
         ))}
       </div>
-      <fieldset className="flex flex-col gap-1">
-        <legend className="mb-1 text-sm font-medium text-ink">Where it goes</legend>
+      <fieldset className="flex flex-row flex-wrap gap-x-4">
+        <legend className="text-sm font-medium text-ink">Where it goes</legend>
         <label className="flex min-h-11 items-center gap-2 text-sm">
           <input type="radio" name="placement" className="size-4 accent-accent" checked={placement === 'replace'} onChange={() => setPlacement('replace')} />
-          Replace the current design
+          Replace the design
         </label>
         <label className="flex min-h-11 items-center gap-2 text-sm">
           <input type="radio" name="placement" className="size-4 accent-accent" checked={placement === 'insert'} onChange={() => setPlacement('insert')} />
-          Add it beside the current design
+          Add it beside
         </label>
       </fieldset>
       {failure ? (
