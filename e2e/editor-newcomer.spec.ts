@@ -79,8 +79,9 @@ test.describe('the editor as a newcomer meets it', () => {
     const railRow = cuts.locator('tbody tr[aria-selected]').filter({ hasText: '1320 mm' }).first();
     await railRow.click();
     await expect(railRow).toHaveAttribute('aria-selected', 'true');
-    await expect(inspector(page)).toContainText('2 selected');
-    await expect(page.getByRole('listbox', { name: 'Parts' }).getByRole('option', { selected: true })).toHaveCount(2);
+    // The 1320 mm group holds the four long rails (top and lower, front and back).
+    await expect(inspector(page)).toContainText('4 selected');
+    await expect(page.getByRole('listbox', { name: 'Parts' }).getByRole('option', { selected: true })).toHaveCount(4);
 
     // 6. Keyboard only: find one upright in the parts list, select it, change its length.
     await page.keyboard.press('Escape');
