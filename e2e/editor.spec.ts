@@ -22,6 +22,8 @@ async function clickWorld(page: Page, point: Vec3): Promise<void> {
 async function drawProfile(page: Page, from: Vec3, to: Vec3): Promise<void> {
   await clickWorld(page, from);
   await clickWorld(page, to);
+  // Drawing chains profiles end to end; Escape ends the chain and keeps the draw tool.
+  await page.keyboard.press('Escape');
 }
 
 

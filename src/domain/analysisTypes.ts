@@ -11,7 +11,7 @@ export type Severity = 'error' | 'warning' | 'note';
 export type Vec3Tuple = [number, number, number];
 
 /** Names of the checks, as they appear in `Finding.check`. */
-export type CheckName = 'joints' | 'panel-fit' | 'interference' | 'sequence' | 'structure';
+export type CheckName = 'joints' | 'panel-fit' | 'interference' | 'sequence' | 'structure' | 'frame-group';
 
 export interface FindingFix {
   /** What the fix does, in words for a button ("Add an end cap"). */

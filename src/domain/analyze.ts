@@ -9,6 +9,7 @@ import type { Catalogue } from './catalogue/types';
 import { indexCatalogue } from './checks/catalogueIndex';
 import { buildAnalysisContext, type AnalysisContext } from './checks/context';
 import { capFindings } from './checks/findingCap';
+import { frameGroupFindings } from './checks/frameGroupFindings';
 import { interferenceFindings } from './checks/interferenceFindings';
 import { jointFindings } from './checks/jointFindings';
 import { panelFitFindings } from './checks/panelFitFindings';
@@ -64,6 +65,7 @@ export function analyzeDesign(design: DesignDocument, catalogue: Catalogue = def
   lap('interference');
   append(sequenceFindings(ctx));
   lap('sequence');
+  append(frameGroupFindings(ctx));
 
   const hardware = hardwareSummary(ctx);
   const sheets = panelSheets(ctx);

@@ -34,7 +34,7 @@ describe('joint check', () => {
     design.accessories = design.accessories.filter((a) => a.id !== 'L1-cap');
     const open = withReason(design, 'open-end');
     expect(open).toHaveLength(1);
-    expect(open[0].message).toBe('The top end of profile L1 is not joined to anything and has no end cap.');
+    expect(open[0].message).toBe('The top end of the 900 mm profile standing upright is not joined to anything and has no end cap.');
     expect(open[0].fix?.operation.type).toBe('addAccessory');
     const fixed = applyOperation(design, open[0].fix!.operation);
     expect(withReason(fixed, 'open-end')).toHaveLength(0);

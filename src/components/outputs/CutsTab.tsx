@@ -12,10 +12,13 @@ export interface CutsTabProps {
   items: CutListItem[];
   units: LengthUnit;
   designName: string;
+  /** Selected part ids (rows holding them are highlighted) and the row-click handler. */
+  selectedIds?: ReadonlySet<string>;
+  onSelectParts?: (ids: string[], mode: 'replace' | 'add') => void;
 }
 
 /** The cut list: interchangeable pieces together, in sections by profile variant. */
-export function CutsTab({ groups, items, units, designName }: CutsTabProps) {
+export function CutsTab({ groups, items, units, designName, selectedIds, onSelectParts }: CutsTabProps) {
   const pieceLabels = useMemo(() => Object.fromEntries(items.map((item) => [item.id, item.label || item.id])), [items]);
   // eslint-disable-next-line @typescript-eslint/no-explicit-any -- TanStack Table's value type differs per column
   const columns = useMemo<ColumnDef<CutListGroup, any>[]>(
@@ -75,6 +78,9 @@ export function CutsTab({ groups, items, units, designName }: CutsTabProps) {
         data={groups}
         columns={columns}
         rowKey={(group) => group.groupKey}
+        rowPartIds={(group) => group.profileIds}
+        selectedIds={selectedIds}
+        onSelectParts={onSelectParts}
         groupBy={(group) => group.variantId}
         renderGroupHeader={(variantId, rows) => `${variantName(variantId)} · ${rows.reduce((sum, group) => sum + group.quantity, 0)} pieces`}
         totals={['Total', '', showLength(totalLength, units), `${pieceCount} pcs`, '', '', '']}

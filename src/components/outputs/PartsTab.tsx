@@ -26,10 +26,12 @@ export interface PartsTabProps {
   lines: BomLine[];
   units: LengthUnit;
   designName: string;
+  selectedIds?: ReadonlySet<string>;
+  onSelectParts?: (ids: string[], mode: 'replace' | 'add') => void;
 }
 
 /** The bill of materials, in sections by category, with a totals row and a CSV download. */
-export function PartsTab({ lines, units, designName }: PartsTabProps) {
+export function PartsTab({ lines, units, designName, selectedIds, onSelectParts }: PartsTabProps) {
   // eslint-disable-next-line @typescript-eslint/no-explicit-any -- TanStack Table's value type differs per column
   const columns = useMemo<ColumnDef<BomLine, any>[]>(
     () => [
@@ -84,6 +86,9 @@ export function PartsTab({ lines, units, designName }: PartsTabProps) {
         data={lines}
         columns={columns}
         rowKey={(line) => `${line.category}:${line.code}`}
+        rowPartIds={(line) => line.partIds}
+        selectedIds={selectedIds}
+        onSelectParts={onSelectParts}
         groupBy={(line) => line.category}
         groupOrder={BOM_CATEGORY_ORDER}
         renderGroupHeader={(key, rows) => `${BOM_CATEGORY_NAMES[key] ?? key} · ${rows.length} ${rows.length === 1 ? 'line' : 'lines'}`}

@@ -32,10 +32,15 @@ export interface SortableTableProps<T> {
   /** Cells of a totals row, one per column. */
   totals?: ReactNode[];
   rowKey: (row: T) => string;
+  /** The parts a row stands for: with `onSelectParts`, a row click (or Enter) selects them. */
+  rowPartIds?: (row: T) => string[];
+  /** Selected part ids: rows holding any of them are highlighted (aria-selected). */
+  selectedIds?: ReadonlySet<string>;
+  onSelectParts?: (ids: string[], mode: 'replace' | 'add') => void;
 }
 
 /** A compact table with sortable headers (aria-sort) and optional grouped sections. */
-export function SortableTable<T>({ caption, data, columns, groupBy, groupOrder, renderGroupHeader, totals, rowKey }: SortableTableProps<T>) {
+export function SortableTable<T>({ caption, data, columns, groupBy, groupOrder, renderGroupHeader, totals, rowKey, rowPartIds, selectedIds, onSelectParts }: SortableTableProps<T>) {
   const [sorting, setSorting] = useState<SortingState>([]);
   const table = useReactTable({
     data,
@@ -105,8 +110,31 @@ export function SortableTable<T>({ caption, data, columns, groupBy, groupOrder, 
                 </th>
               </tr>
             )}
-            {section.rows.map((row) => (
-              <tr key={row.id} className="border-b border-paper-line/60">
+            {section.rows.map((row) => {
+              const ids = rowPartIds?.(row.original) ?? [];
+              const linked = Boolean(onSelectParts) && ids.length > 0;
+              const selected = linked && selectedIds ? ids.some((id) => selectedIds.has(id)) : undefined;
+              return (
+              <tr
+                key={row.id}
+                aria-selected={linked ? selected : undefined}
+                tabIndex={linked ? 0 : undefined}
+                onClick={linked ? (event) => onSelectParts!(ids, event.shiftKey || event.ctrlKey || event.metaKey ? 'add' : 'replace') : undefined}
+                onKeyDown={
+                  linked
+                    ? (event) => {
+                        if (event.key !== 'Enter' && event.key !== ' ') return;
+                        event.preventDefault();
+                        onSelectParts!(ids, event.shiftKey ? 'add' : 'replace');
+                      }
+                    : undefined
+                }
+                className={cn(
+                  'border-b border-paper-line/60',
+                  linked && 'cursor-pointer hover:bg-paper-sunk focus-visible:outline focus-visible:outline-2 focus-visible:-outline-offset-2 focus-visible:outline-accent',
+                  selected && 'bg-accent-soft hover:bg-accent-soft',
+                )}
+              >
                 {row.getVisibleCells().map((cell) => (
                   <td
                     key={cell.id}
@@ -116,7 +144,8 @@ export function SortableTable<T>({ caption, data, columns, groupBy, groupOrder, 
                   </td>
                 ))}
               </tr>
-            ))}
+              );
+            })}
           </Fragment>
         ))}
       </tbody>

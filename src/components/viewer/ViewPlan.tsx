@@ -94,7 +94,7 @@ export function ViewPlan({ footprint, onView, onFit, markerRef }: ViewPlanProps)
       <div className="pointer-events-auto flex gap-1">
         <PlanButton label="Top" title="Look from above" onClick={() => onView('top')} />
         <PlanButton label="¾" title="Three-quarter view from the front" onClick={() => onView('iso')} />
-        <PlanButton label="Fit" title="Fit the whole design in view" onClick={onFit} />
+        <PlanButton label="All" title="Show the whole design in view" onClick={onFit} />
       </div>
     </div>
   );

@@ -1,5 +1,5 @@
 /** Wording shared by the checks: part names, profile ends, numbers with units. */
-import type { ProfileEnd } from '../design/schema';
+import type { Joint, Panel, ProfileEnd } from '../design/schema';
 import { dominantAxis } from '../geometry/vectors';
 import type { ProfileInfo } from './context';
 
@@ -20,10 +20,36 @@ export function formatNumber(value: number, decimals = 1): string {
   return `${negative ? '-' : ''}${grouped}${trimmed ? `.${trimmed}` : ''}`;
 }
 
-export function profileName(info: ProfileInfo | undefined, id: string): string {
+/**
+ * The name people read for a profile: its label ("Lower rail, back"), or else its length and the
+ * way it runs. Never the internal id, which only the software reads.
+ */
+export function profileName(info: ProfileInfo | undefined, _id?: string): string {
   const label = info?.profile.label;
-  return label ? `profile ${id} (${label})` : `profile ${id}`;
+  if (label) return label;
+  if (!info) return 'a profile that is not in the design';
+  return `the ${formatNumber(info.profile.length)} mm profile ${RUN_WORDS[dominantAxis(info.profile.direction)]}`;
 }
+
+const RUN_WORDS: Record<0 | 1 | 2, string> = { 0: 'running left to right', 1: 'standing upright', 2: 'running front to back' };
+
+const ROLE_WORDS: Record<Panel['role'], string> = { panel: 'panel', door: 'door', shelf: 'shelf' };
+
+/** The name people read for a panel: its label, or else its size and role ("the 600 × 400 mm panel"). */
+export function panelName(panel: Panel | undefined): string {
+  if (!panel) return 'a panel that is not in the design';
+  if (panel.label) return panel.label;
+  return `the ${formatNumber(panel.rect.width)} × ${formatNumber(panel.rect.height)} mm ${ROLE_WORDS[panel.role] ?? 'panel'}`;
+}
+
+/** The name people read for a joint: its kind and the profiles it joins ("the corner bracket joining A and B"). */
+export function jointName(ctx: { profileById: Map<string, ProfileInfo> }, joint: Joint): string {
+  const names = joint.members.map((m) => profileName(ctx.profileById.get(m.profileId)));
+  const kind = joint.kind.replace(/-/g, ' ');
+  return `the ${kind} joining ${names.length > 2 ? `${names.slice(0, -1).join(', ')} and ${names[names.length - 1]}` : names.join(' and ')}`;
+}
+
+export { countOf } from '../words';
 
 /** Lower and higher end along each axis. The design format's front is −Z, so the lower z end is the front. */
 const END_WORDS: Record<0 | 1 | 2, [string, string]> = {

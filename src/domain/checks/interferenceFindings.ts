@@ -8,7 +8,7 @@ import type { Finding } from '../analysisTypes';
 import { boxPenetration, type Box } from '../geometry/box';
 import { UniformGrid } from '../geometry/spatialGrid';
 import { INTERFERENCE_TOLERANCE_MM, areJoined, type AnalysisContext } from './context';
-import { findingId, mm, profileName } from './describe';
+import { capitalise, findingId, mm, panelName, profileName } from './describe';
 import { MAX_COUNTED_FINDINGS, MAX_FINDINGS_PER_CHECK, moreFindingsFinding } from './findingCap';
 
 const CHECK = 'interference';
@@ -61,7 +61,7 @@ function narrowPhase(ctx: AnalysisContext, a: Solid, b: Solid, out: Finding[], o
 }
 
 function describe(ctx: AnalysisContext, s: Solid): string {
-  if (s.kind === 'panel') return `Panel ${s.id}`;
+  if (s.kind === 'panel') return capitalise(panelName(ctx.panelById.get(s.id)?.panel));
   const text = profileName(ctx.profileById.get(s.id), s.id);
   return text.charAt(0).toUpperCase() + text.slice(1);
 }

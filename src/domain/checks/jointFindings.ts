@@ -10,7 +10,7 @@ import type { Connector, ConnectorMachining } from '../catalogue/types';
 import { sectionHalfExtentAlong } from '../geometry/profileGeometry';
 import { scale } from '../geometry/vectors';
 import { CONTACT_TOLERANCE_MM, accessoriesAt, areJoined, jointsAt, memberEnd, memberPoint, type AnalysisContext, type ProfileInfo } from './context';
-import { capitalise, endPhrase, findingId, mm, profileName } from './describe';
+import { capitalise, countOf, endPhrase, findingId, jointName, mm, profileName } from './describe';
 import { distancePointToBox, faceFacing, firstProfileAtPoint, pointOffFace, projectAlong } from './geometryQueries';
 import { addEndCapFix, addMachiningFix } from './fixes';
 
@@ -46,7 +46,7 @@ function checkJoint(ctx: AnalysisContext, joint: Joint, out: Finding[]): void {
       check: CHECK,
       severity: 'error',
       partIds: [joint.id, ...missing],
-      message: `Joint ${joint.id} refers to ${missing.length === 1 ? 'profile' : 'profiles'} ${missing.join(', ')}, which ${missing.length === 1 ? 'is' : 'are'} not in the design.`,
+      message: `A ${joint.kind.replace(/-/g, ' ')} refers to ${missing.length === 1 ? 'a profile that is' : `${missing.length} profiles that are`} not in the design. Remove the joint or join existing profiles.`,
     });
     return;
   }
@@ -58,7 +58,7 @@ function checkJoint(ctx: AnalysisContext, joint: Joint, out: Finding[]): void {
       check: CHECK,
       severity: 'error',
       partIds: [joint.id, ...memberIds],
-      message: `Joint ${joint.id} uses connector "${joint.connectorId}", which is not in the catalogue.`,
+      message: `${capitalise(jointName(ctx, joint))} uses a connector that is not in the catalogue. Pick another connector.`,
     });
     return;
   }
@@ -68,7 +68,7 @@ function checkJoint(ctx: AnalysisContext, joint: Joint, out: Finding[]): void {
       check: CHECK,
       severity: 'warning',
       partIds: [joint.id, ...memberIds],
-      message: `Joint ${joint.id} is drawn as a ${joint.kind.replace(/-/g, ' ')} but its connector is a ${connector.name}.`,
+      message: `${capitalise(jointName(ctx, joint))} is drawn as a ${joint.kind.replace(/-/g, ' ')} but its connector is a ${connector.name}.`,
     });
   }
   for (const info of infos) {
@@ -79,7 +79,7 @@ function checkJoint(ctx: AnalysisContext, joint: Joint, out: Finding[]): void {
         check: CHECK,
         severity: 'error',
         partIds: [joint.id, info.profile.id],
-        message: `The ${connector.name} in joint ${joint.id} does not fit ${profileName(info, info.profile.id)}, which is ${info.system?.name ?? systemId}. Use a connector made for that system.`,
+        message: `The ${connector.name} in ${jointName(ctx, joint)} does not fit ${profileName(info, info.profile.id)}, which is ${info.system?.name ?? systemId}. Use a connector made for that system.`,
       });
     }
   }
@@ -105,7 +105,7 @@ function checkMembersMeet(joint: Joint, connector: Connector, infos: ProfileInfo
       check: CHECK,
       severity: 'error',
       partIds: [joint.id, ...infos.map((i) => i.profile.id)],
-      message: `Joint ${joint.id} (${connector.name}) joins ${infos.map((i) => i.profile.id).join(' and ')}, but they are ${mm(gap)} apart. Move the profiles together or remove the joint.`,
+      message: `The ${connector.name} joins ${infos.map((i) => profileName(i)).join(' and ')}, but they are ${mm(gap)} apart. Move the profiles together or remove the joint.`,
       data: { gapMm: round(gap) },
     });
   }
@@ -160,7 +160,7 @@ function requireMachining(
     check: CHECK,
     severity: 'error',
     partIds: [info.profile.id, joint.id],
-    message: `${capitalise(profileName(info, info.profile.id))} needs ${need.kind === 'end-tap' ? 'an' : 'an'} ${what} (Ø ${mm(need.diameter)}${need.tapSize ? `, ${need.tapSize} thread` : ''}) ${where} for the ${connector.name} in joint ${joint.id}; the cut list does not have it.`,
+    message: `${capitalise(profileName(info, info.profile.id))} needs ${need.kind === 'end-tap' ? 'an' : 'an'} ${what} (Ø ${mm(need.diameter)}${need.tapSize ? `, ${need.tapSize} thread` : ''}) ${where} for its ${connector.name}; the cut list does not have it.`,
     ...(fix ? { fix } : {}),
     data: { offsetMm: round(offset), diameterMm: need.diameter },
   });
@@ -180,7 +180,7 @@ function checkCounts(ctx: AnalysisContext, joint: Joint, connector: Connector, i
       check: CHECK,
       severity: 'warning',
       partIds: [joint.id],
-      message: `Joint ${joint.id} lists ${joint.quantity} ${connector.name}s; a profile has only four faces. Check the quantity.`,
+      message: `${capitalise(jointName(ctx, joint))} lists ${joint.quantity} ${connector.name}s; a profile has only four faces. Check the quantity.`,
     });
   }
   const unknownScrews = connector.fasteners.filter((f) => !ctx.catalogue.fasteners.has(f.fastenerId));
@@ -190,7 +190,7 @@ function checkCounts(ctx: AnalysisContext, joint: Joint, connector: Connector, i
       check: CHECK,
       severity: 'warning',
       partIds: [joint.id],
-      message: `The ${connector.name} in joint ${joint.id} lists screws the catalogue does not have (${unknownScrews.map((f) => f.fastenerId).join(', ')}); the bill of materials leaves them out.`,
+      message: `The ${connector.name} in ${jointName(ctx, joint)} lists ${countOf(unknownScrews.length, 'screw')} the catalogue does not have; the bill of materials leaves them out.`,
     });
   }
   if (connector.tNutCount > 0) {
@@ -201,7 +201,7 @@ function checkCounts(ctx: AnalysisContext, joint: Joint, connector: Connector, i
         check: CHECK,
         severity: 'warning',
         partIds: [joint.id],
-        message: `The catalogue has no ${joint.tNut} T-nut for ${systemId}, so joint ${joint.id}'s T-nuts are not in the bill of materials.`,
+        message: `The catalogue has no ${joint.tNut} T-nut for ${(infos[1] ?? infos[0]).system?.name ?? 'this profile system'}, so the T-nuts of ${jointName(ctx, joint)} are not in the bill of materials.`,
       });
     }
   }
@@ -254,7 +254,7 @@ function checkThreadedEnd(info: ProfileInfo, end: ProfileEnd, closers: { id: str
     check: CHECK,
     severity: 'error',
     partIds: [info.profile.id, threaded.id],
-    message: `The ${word} ${threaded.id} screws into ${endPhrase(info, end)}, but that end is not tapped${info.system ? ` (${info.system.endTapSize})` : ''}. Add an end tap to the cut list.`,
+    message: `The ${word} screws into ${endPhrase(info, end)}, but that end is not tapped${info.system ? ` (${info.system.endTapSize})` : ''}. Add an end tap to the cut list.`,
   });
 }
 
@@ -299,12 +299,13 @@ function checkSlotClaims(ctx: AnalysisContext, out: Finding[]): void {
       const c = list[i];
       if (c.lo < reach.hi - 0.5) {
         const both = [reach.joint.id, c.joint.id].sort();
+        const bothJoints = reach.joint.id < c.joint.id ? [reach.joint, c.joint] : [c.joint, reach.joint];
         out.push({
           id: findingId(CHECK, 'slot-claimed-twice', [metId, faceText, ...both]),
           check: CHECK,
           severity: reach.exact && c.exact ? 'error' : 'warning',
           partIds: [metId, ...both],
-          message: `Joints ${both[0]} and ${both[1]} both need the slot on face ${faceText} of profile ${metId} between ${mm(Math.max(c.lo, reach.lo))} and ${mm(Math.min(c.hi, reach.hi))} from its start. Move one joint or put its connector on another face.`,
+          message: `${capitalise(jointName(ctx, bothJoints[0]))} and ${jointName(ctx, bothJoints[1])} both need the slot on face ${faceText} of ${profileName(ctx.profileById.get(metId))} between ${mm(Math.max(c.lo, reach.lo))} and ${mm(Math.min(c.hi, reach.hi))} from its start. Move one joint or put its connector on another face.`,
         });
       }
       if (c.hi > reach.hi) reach = c;
@@ -324,7 +325,7 @@ function checkAccessHolesUncovered(ctx: AnalysisContext, out: Finding[]): void {
         check: CHECK,
         severity: 'error',
         partIds: [info.profile.id, other.profile.id],
-        message: `The ${MACHINING_WORDS[m.kind]} ${m.id} on face ${m.face} of ${profileName(info, info.profile.id)} is covered by ${profileName(other, other.profile.id)}, so the hex key cannot reach the screw. Put the hole on a free face.`,
+        message: `The ${MACHINING_WORDS[m.kind]} on face ${m.face} of ${profileName(info, info.profile.id)} is covered by ${profileName(other, other.profile.id)}, so the hex key cannot reach the screw. Put the hole on a free face.`,
       });
     }
   }

@@ -9,7 +9,7 @@ import { sectionHalfExtentAlong } from '../geometry/profileGeometry';
 import { dominantAxis } from '../geometry/vectors';
 import type { AnalysisContext, PanelInfo } from './context';
 import { sheetThicknessTolerance } from '../catalogue/materials';
-import { findingId, formatNumber, mm } from './describe';
+import { capitalise, countOf, findingId, formatNumber, mm, panelName } from './describe';
 import { addGasketFix, setPanelThicknessFix } from './fixes';
 
 const CHECK = 'panel-fit';
@@ -34,7 +34,7 @@ export function panelFitFindings(ctx: AnalysisContext): Finding[] {
         check: CHECK,
         severity: 'error',
         partIds: [panel.id],
-        message: `Panel ${panel.id} uses material "${panel.materialId}", which is not in the catalogue.`,
+        message: `${capitalise(panelName(panel))} uses a material that is not in the catalogue. Pick another material.`,
       });
     }
     if (panel.mounting !== 'captured') continue;
@@ -44,7 +44,7 @@ export function panelFitFindings(ctx: AnalysisContext): Finding[] {
         check: CHECK,
         severity: 'error',
         partIds: [panel.id],
-        message: `Panel ${panel.id} is captured in slots but does not name the four profiles around it. Pick its frame or mount it on a face.`,
+        message: `${capitalise(panelName(panel))} is captured in slots but does not name the four profiles around it. Pick its frame or mount it on a face.`,
       });
       continue;
     }
@@ -58,7 +58,7 @@ export function panelFitFindings(ctx: AnalysisContext): Finding[] {
         check: CHECK,
         severity: 'note',
         partIds: [panel.id, ...notch.jointIds],
-        message: `Panel ${panel.id} needs a ${mm(notch.size)} square notch at ${notch.corners} ${notch.corners === 1 ? 'corner' : 'corners'}, where connectors sit in the slot (joints ${notch.jointIds.join(', ')}). Cut size ${formatNumber(info.sheetWidth)} × ${formatNumber(info.sheetHeight)} mm.`,
+        message: `${capitalise(panelName(panel))} needs a ${mm(notch.size)} square notch at ${countOf(notch.corners, 'corner')}, where connectors sit in the slot (${countOf(notch.jointIds.length, 'joint')}). Cut size ${formatNumber(info.sheetWidth)} × ${formatNumber(info.sheetHeight)} mm.`,
         data: { notchMm: notch.size, corners: notch.corners, sheetWidthMm: round(info.sheetWidth), sheetHeightMm: round(info.sheetHeight) },
       });
     }
@@ -87,7 +87,7 @@ function checkThickness(ctx: AnalysisContext, info: PanelInfo, out: Finding[]): 
       check: CHECK,
       severity: 'error',
       partIds: [panel.id, ...info.bounding.map((b) => b.profile.id)],
-      message: `${formatNumber(panel.thickness)} mm ${materialName} is thicker than the ${formatNumber(slotOpening)} mm slot opening of the ${systemName} profiles around panel ${panel.id}; it will not go into the slot.${instead}`,
+      message: `${formatNumber(panel.thickness)} mm ${materialName} is thicker than the ${formatNumber(slotOpening)} mm slot opening of the ${systemName} profiles around ${panelName(panel)}; it will not go into the slot.${instead}`,
       ...(fix ? { fix } : {}),
       data: { thicknessMm: panel.thickness, slotOpeningMm: slotOpening },
     });
@@ -116,7 +116,7 @@ function checkThickness(ctx: AnalysisContext, info: PanelInfo, out: Finding[]): 
       check: CHECK,
       severity: 'warning',
       partIds: [panel.id],
-      message: `${formatNumber(panel.thickness)} mm ${materialName} is much thinner than the ${formatNumber(slotOpening)} mm slot and will rattle: panel ${panel.id} needs a gasket or retainer strip, ${formatNumber(gasketLength / 1000, 2)} m for its four edges.`,
+      message: `${formatNumber(panel.thickness)} mm ${materialName} is much thinner than the ${formatNumber(slotOpening)} mm slot and will rattle: ${panelName(panel)} needs a gasket or retainer strip, ${formatNumber(gasketLength / 1000, 2)} m for its four edges.`,
       ...(fix ? { fix } : {}),
       data: { thicknessMm: panel.thickness, slotOpeningMm: slotOpening, gasketLengthMm: gasketLength },
     });
@@ -183,7 +183,7 @@ function checkOpening(info: PanelInfo, out: Finding[]): void {
       check: CHECK,
       severity: 'error',
       partIds: ids,
-      message: `The four profiles named around panel ${panel.id} do not form a rectangle in the panel's plane.`,
+      message: `The four profiles named around ${panelName(panel)} do not form a rectangle in the panel's plane.`,
     });
     return;
   }
@@ -193,7 +193,7 @@ function checkOpening(info: PanelInfo, out: Finding[]): void {
       check: CHECK,
       severity: 'error',
       partIds: ids,
-      message: `Panel ${panel.id} is ${mm(opening.offPlane)} out of line with the slots of its frame; a captured panel sits in the slot centre.`,
+      message: `${capitalise(panelName(panel))} is ${mm(opening.offPlane)} out of line with the slots of its frame; a captured panel sits in the slot centre.`,
       data: { offsetMm: round(opening.offPlane) },
     });
   }
@@ -205,7 +205,7 @@ function checkOpening(info: PanelInfo, out: Finding[]): void {
       check: CHECK,
       severity: 'warning',
       partIds: ids,
-      message: `Panel ${panel.id} is drawn ${formatNumber(panel.rect.width)} × ${formatNumber(panel.rect.height)} mm, but its frame's clear opening is ${formatNumber(opening.width)} × ${formatNumber(opening.height)} mm. Resize the panel to the opening.`,
+      message: `${capitalise(panelName(panel))} is drawn ${formatNumber(panel.rect.width)} × ${formatNumber(panel.rect.height)} mm, but its frame's clear opening is ${formatNumber(opening.width)} × ${formatNumber(opening.height)} mm. Resize the panel to the opening.`,
       data: { openingWidthMm: round(opening.width), openingHeightMm: round(opening.height) },
     });
   }

@@ -1,6 +1,7 @@
 /**
- * Inserting one design into another: every id of the inserted design renamed so nothing clashes,
- * and the whole piece moved by an offset (mm), by default beside the current frame along +X.
+ * Adds another design's parts to a design: every id that would clash is renamed, references
+ * follow the new names, and every position moves by `offset` (mm). Frame starters and the
+ * frame-group regeneration use it; the editor's "add beside" command wraps it.
  */
 import { createIdAllocator, type IdAllocator } from './ids';
 import { partBounds } from './partBounds';
@@ -19,27 +20,45 @@ export function besideOffset(current: DesignDocument, inserted: DesignDocument):
 
 const move = (point: Vec3, offset: Vec3): Vec3 => [point[0] + offset[0], point[1] + offset[1], point[2] + offset[2]];
 
-/** The current design plus `inserted`'s parts, renamed and moved. Settings, name and units stay the current design's. */
-export function mergeDesign(current: DesignDocument, inserted: DesignDocument, offset: Vec3): DesignDocument {
+export interface MergeResult {
+  design: DesignDocument;
+  /** Inserted id → the id it has in the merged design. */
+  renamed: Map<string, string>;
+}
+
+/**
+ * The current design plus `inserted`'s parts, renamed and moved by `offset` (mm). Settings, name
+ * and units stay the current design's. `preferred` names the id an inserted part should get when
+ * that id is free (regeneration keeps the ids people selected and referred to).
+ */
+export function mergeDesignParts(current: DesignDocument, inserted: DesignDocument, offset: Vec3, preferred?: ReadonlyMap<string, string>): MergeResult {
   const taken = createIdAllocator(current);
   // New names come from an allocator that knows both designs' ids, so a kept id is never handed out again.
   const ids: IdAllocator = createIdAllocator(unionOfParts(current, inserted));
+  const claimed = new Set<string>();
   const renamed = new Map<string, string>();
   const rename = (id: string) => {
     let next = renamed.get(id);
     if (!next) {
-      next = taken.has(id) ? ids.next(id.replace(/-\d+$/, '') || 'part') : id;
+      const wish = preferred?.get(id);
+      if (wish !== undefined && !taken.has(wish) && !claimed.has(wish)) next = wish;
+      else if (taken.has(id) || claimed.has(id)) {
+        const prefix = id.replace(/-\d+$/, '') || 'part';
+        do next = ids.next(prefix);
+        while (claimed.has(next));
+      } else next = id;
+      claimed.add(next);
       renamed.set(id, next);
     }
     return next;
   };
-  // Claim every id first, so references below resolve to the same new name.
-  for (const list of [inserted.profiles, inserted.joints, inserted.panels, inserted.accessories, inserted.subAssemblies, inserted.steps, inserted.loadCases]) {
-    for (const part of list) rename(part.id);
-  }
+  // Claim wished ids first, so a plain id of the inserted design cannot take one before its owner.
+  const tops = [inserted.profiles, inserted.joints, inserted.panels, inserted.accessories, inserted.subAssemblies, inserted.steps, inserted.loadCases];
+  for (const list of tops) for (const part of list) if (preferred?.has(part.id)) rename(part.id);
+  for (const list of tops) for (const part of list) rename(part.id);
   const map = (id: string) => renamed.get(id) ?? id;
 
-  return {
+  const design: DesignDocument = {
     ...current,
     profiles: [
       ...current.profiles,
@@ -103,6 +122,17 @@ export function mergeDesign(current: DesignDocument, inserted: DesignDocument, o
       })),
     ],
   };
+  return { design, renamed };
+}
+
+/** `mergeDesignParts` without the rename map. */
+export function mergeDesign(current: DesignDocument, inserted: DesignDocument, offset: Vec3): DesignDocument {
+  return mergeDesignParts(current, inserted, offset).design;
+}
+
+/** Every top-level id of a design's parts, steps and load cases (what a frame group owns). */
+export function topLevelIds(design: DesignDocument): string[] {
+  return [design.profiles, design.joints, design.panels, design.accessories, design.subAssemblies, design.steps, design.loadCases].flatMap((list) => list.map((part) => part.id));
 }
 
 function unionOfParts(a: DesignDocument, b: DesignDocument): DesignDocument {

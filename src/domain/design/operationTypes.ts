@@ -92,6 +92,16 @@ export interface HingedDoorInput extends DoorOpeningInput {
 
 export type SettingsChanges = Partial<Pick<DesignSettings, 'stockLength' | 'kerf' | 'endTrim' | 'minReusableOffcut'>>;
 export type JointChanges = Partial<Pick<Joint, 'fastenerHead' | 'tNut' | 'quantity'>>;
+/** A frame starter run as a frame group (see frameGroups.ts); params in mm. */
+export interface FrameGroupInput {
+  generatorId: string;
+  params: Record<string, number | string | boolean | null>;
+  placement: 'replace' | 'beside';
+  /** Where the starter's origin goes, mm. */
+  origin?: Vec3;
+  id?: string;
+  name?: string;
+}
 
 export type DesignOperation =
   | { type: 'addProfile'; payload: { profile: ProfileInput } }
@@ -127,7 +137,11 @@ export type DesignOperation =
   | { type: 'splitStep'; payload: { stepId: string; partIds: string[]; newStepId?: string } }
   | { type: 'movePartsToStep'; payload: { partIds: string[]; stepId: string } }
   | { type: 'updateStep'; payload: { stepId: string; changes: StepChanges } }
-  | { type: 'regenerateSequence'; payload?: Record<string, never> };
+  | { type: 'regenerateSequence'; payload?: Record<string, never> }
+  | { type: 'addFrameGroup'; payload: { group: FrameGroupInput } }
+  | { type: 'regenerateFrameGroup'; payload: { groupId: string; params: Record<string, number | string | boolean | null> } }
+  | { type: 'renameFrameGroup'; payload: { groupId: string; name: string } };
+  ;
 
 
 /** Operations that edit the assembly sequence rather than the parts. */

@@ -10,6 +10,7 @@ import { normalize } from '../geometry/vectors';
 import { addHingedDoor, addSlidingDoors } from './doorOperations';
 import { addLoadCase, insertDesign, removeLoadCase, replaceDesign, updateJoint, updateSettings } from './documentOperations';
 import { addFeetToFreeBottomEnds, autoEndCaps } from './endTreatments';
+import { pruneFrameGroups } from './frameGroupMembers';
 import { createIdAllocator, type IdAllocator } from './ids';
 import { withJointMachining } from './jointMachining';
 import { arrayParts, duplicateParts, mirrorParts, refreshJointPositions, rotateParts90, translateParts } from './moveOperations';
@@ -180,7 +181,7 @@ export function removeParts(design: DesignDocument, ids: string[]): DesignDocume
           !(l.kind === 'uniform' && l.panelId !== undefined && panelsGone.has(l.panelId)),
       ),
     }));
-  return {
+  return pruneFrameGroups({
     ...design,
     profiles,
     joints: design.joints.filter((j) => !jointsGone.has(j.id)),
@@ -189,7 +190,7 @@ export function removeParts(design: DesignDocument, ids: string[]): DesignDocume
     subAssemblies,
     steps,
     loadCases,
-  };
+  });
 }
 
 
@@ -423,6 +424,12 @@ function applyOperationOnly(design: DesignDocument, op: DesignOperation, catalog
       return updateStep(design, op.payload.stepId, op.payload.changes);
     case 'regenerateSequence':
       return regenerateSequence(design);
+    case 'addFrameGroup':
+    case 'regenerateFrameGroup':
+    case 'renameFrameGroup':
+      // Frame groups run the starters, which are built from these operations: applyDesignOperation
+      // (applyDesignOperation.ts) handles them, so this module need not import the starters.
+      throw new OperationError(`${op.type} is applied by applyDesignOperation`);
     default: {
       const never: never = op;
       throw new OperationError(`Unknown operation ${(never as { type: string }).type}`);

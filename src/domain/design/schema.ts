@@ -306,6 +306,29 @@ export const offcutOnHandSchema = z.object({
 });
 export type OffcutOnHand = z.infer<typeof offcutOnHandSchema>;
 
+/**
+ * A frame group: the parts a frame starter made, with the parameters that made them (mm), so
+ * changing a parameter regenerates those parts. `partIds` lists every top-level id the starter
+ * made (profiles, joints, panels, accessories, sub-assemblies, steps, load cases); `origin` is
+ * where the starter's own origin sits in the design. `unfit` lists the parts added by hand that
+ * the last regeneration had to take out, with the reason, for the frame-group check to report.
+ */
+export const frameGroupSchema = z.object({
+  id,
+  name: z.string().min(1).max(80),
+  /** The starter that made it, e.g. "table". */
+  generatorId: id,
+  /** The starter's parameters, lengths in mm. */
+  params: z.record(z.string().max(64), z.union([z.number(), z.string().max(200), z.boolean(), z.null()])),
+  origin: vec3Schema.default([0, 0, 0]),
+  partIds: z.array(id).max(20000).default([]),
+  unfit: z
+    .array(z.object({ label: z.string().max(200), reason: z.string().max(400) }))
+    .max(200)
+    .default([]),
+});
+export type FrameGroup = z.infer<typeof frameGroupSchema>;
+
 export const designSettingsSchema = z.object({
   alloyId: id.default('6063-T5'),
   /** Bar length for the design's own system, mm; left at 3,000 the system's own bar lengths apply. */
@@ -350,6 +373,8 @@ export const designDocumentSchema = z.object({
   /** Version 2: true once the designer changed the generated order; regenerating then asks first. */
   sequenceEdited: z.boolean().default(false),
   loadCases: list(loadCaseSchema, L.maxLoadCases, 'load cases').default([]),
+  /** Frame groups made by the starters; absent in documents made before they existed. */
+  frameGroups: list(frameGroupSchema, 1000, 'frame groups').optional(),
 });
 export type DesignDocument = z.infer<typeof designDocumentSchema>;
 /** The document as written by hand or by an older client: defaults not yet filled in. */

@@ -61,10 +61,10 @@ export function billOfMaterials(ctx: AnalysisContext, hardware: HardwareSummary,
     const key = `panel|${p.materialId}|${p.thickness}|${w}|${hgt}|${s.notch.corners}|${p.cutouts.length}`;
     let line = lines.get(key);
     if (!line) {
-      const name = s.info.material?.name ?? p.materialId;
+      const name = s.info.material?.name ?? 'Sheet';
       line = {
-        code: `${p.materialId}-${p.thickness}`,
-        description: `${name} ${p.thickness} mm, ${w} × ${hgt} mm${s.notch.corners > 0 ? `, ${s.notch.corners} corner notches ${s.notch.size} mm` : ''}${p.cutouts.length > 0 ? `, ${p.cutouts.length} cut-outs` : ''}`,
+        code: sheetCode(p.materialId, p.thickness),
+        description: `${sheetName(name, p.thickness)}, ${w} × ${hgt} mm${s.notch.corners > 0 ? `, ${s.notch.corners} corner ${s.notch.corners === 1 ? 'notch' : 'notches'} ${s.notch.size} mm` : ''}${p.cutouts.length > 0 ? `, ${p.cutouts.length} ${p.cutouts.length === 1 ? 'cut-out' : 'cut-outs'}` : ''}`,
         category: 'panel',
         quantity: 0,
         unit: 'pcs',
@@ -103,4 +103,14 @@ function round3(v: number): number {
 }
 function round4(v: number): number {
   return Math.round(v * 10000) / 10000;
+}
+
+/** Our part code for a sheet: "SW-SHT-PLYWOOD-6" (material and thickness in mm), never the catalogue id. */
+export function sheetCode(materialId: string, thickness: number): string {
+  return `SW-SHT-${materialId.toUpperCase().replace(/[^A-Z0-9]+/g, '')}-${String(thickness).replace('.', '_')}`;
+}
+
+/** "Plywood 6 mm", without repeating a thickness the material's name already gives. */
+export function sheetName(materialName: string, thickness: number): string {
+  return materialName.includes(`${thickness} mm`) ? materialName : `${materialName} ${thickness} mm`;
 }

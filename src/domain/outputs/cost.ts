@@ -4,6 +4,7 @@
  */
 import type { BomLine, CostCategory, CostLine, CostSummary } from '../analysisTypes';
 import type { AnalysisContext } from '../checks/context';
+import { sheetCode, sheetName } from './bom';
 import type { PanelSheet } from './panelSheets';
 
 export function costSummary(ctx: AnalysisContext, bom: BomLine[], sheets: PanelSheet[]): CostSummary {
@@ -19,8 +20,8 @@ export function costSummary(ctx: AnalysisContext, bom: BomLine[], sheets: PanelS
     const p = s.info.panel;
     const key = `${p.materialId}-${p.thickness}`;
     const line = panelLines.get(key) ?? {
-      code: key,
-      description: `${s.info.material?.name ?? p.materialId} ${p.thickness} mm sheet`,
+      code: sheetCode(p.materialId, p.thickness),
+      description: `${sheetName(s.info.material?.name ?? 'Sheet', p.thickness)} sheet`,
       category: 'panel' as const,
       quantity: 0,
       unit: 'm²' as const,
@@ -37,7 +38,7 @@ export function costSummary(ctx: AnalysisContext, bom: BomLine[], sheets: PanelS
   }
   if (ctx.profiles.length > 0) {
     lines.push({
-      code: 'cut',
+      code: 'SW-SVC-CUT',
       description: 'Saw cut to length',
       category: 'cutting',
       quantity: ctx.profiles.length,
@@ -51,7 +52,7 @@ export function costSummary(ctx: AnalysisContext, bom: BomLine[], sheets: PanelS
   for (const [kind, count] of [...machiningCounts.entries()].sort()) {
     const unitPrice = prices.perMachining[kind as keyof typeof prices.perMachining] ?? 0;
     lines.push({
-      code: `machining-${kind}`,
+      code: `SW-SVC-${kind.toUpperCase()}`,
       description: `Machining: ${kind.replace(/-/g, ' ')}`,
       category: 'machining',
       quantity: count,

@@ -47,7 +47,7 @@ describe('profile inspector', () => {
     await user.type(lengthBox(), '750{Enter}');
     expect(store.getState().design.profiles[0].length).toBe(750);
     expect(store.temporal.getState().pastStates).toHaveLength(1);
-    expect(store.getState().historyLabel).toBe('Set length of p1 to 750 mm');
+    expect(store.getState().historyLabel).toBe('Set length of the profile to 750 mm');
     act(() => store.getState().undo());
     expect(store.getState().design.profiles[0].length).toBe(500);
     expect(lengthBox()).toHaveValue('500 mm');

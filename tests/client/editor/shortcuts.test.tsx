@@ -1,3 +1,4 @@
+import { editorShortcuts, SHOW_ALL, TOOL_SHORTCUTS } from '@/features/editor/hooks/shortcutList';
 // @vitest-environment jsdom
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { cleanup, render, screen } from '@testing-library/react';
@@ -26,11 +27,17 @@ function setup() {
 }
 
 describe('editor keys', () => {
-  it('D draws, V picks, and Escape clears the selection before it leaves a tool', async () => {
+  it('each tool answers to the first letter of its own name: D draws, F fills, M measures, P picks; Escape clears the selection before it leaves a tool', async () => {
     const { store, user } = setup();
     await user.keyboard('d');
     expect(store.getState().tool).toBe('draw-profile');
+    await user.keyboard('f');
+    expect(store.getState().tool).toBe('fill-opening');
+    await user.keyboard('m');
+    expect(store.getState().tool).toBe('measure');
     await user.keyboard('v');
+    expect(store.getState().tool, 'V is not ours').toBe('measure');
+    await user.keyboard('p');
     expect(store.getState().tool).toBe('select');
     store.getState().setTool('draw-profile');
     store.getState().select(['p1']);
@@ -52,13 +59,13 @@ describe('editor keys', () => {
     expect(store.getState().design.profiles[0].length).toBe(800);
   });
 
-  it('number keys turn the camera, F frames everything, and the action keys reach their handlers', async () => {
+  it('number keys turn the camera, A shows all, and the action keys reach their handlers', async () => {
     const { store, handlers, user } = setup();
     await user.keyboard('2');
     expect(store.getState().viewRequest?.view).toBe('top');
     await user.keyboard('4');
     expect(store.getState().viewRequest?.view).toBe('iso');
-    await user.keyboard('f');
+    await user.keyboard('a');
     expect(store.getState().frameRequest?.ids).toBe('all');
     await user.keyboard('{Delete}{Control>}d{/Control}?{Control>}s{/Control}');
     expect(handlers.deleteSelection).toHaveBeenCalledTimes(1);
@@ -76,5 +83,14 @@ describe('editor keys', () => {
     expect(handlers.deleteSelection).not.toHaveBeenCalled();
     await user.keyboard('{Control>}s{/Control}');
     expect(handlers.save).toHaveBeenCalledTimes(1);
+  });
+
+  it('the tool keys are the first letters of the tool names, all different, and the sheet lists them', () => {
+    const keys = TOOL_SHORTCUTS.map((t) => t.key);
+    expect(TOOL_SHORTCUTS.map((t) => t.label.charAt(0))).toEqual(keys);
+    expect(new Set([...keys, SHOW_ALL.key]).size).toBe(keys.length + 1);
+    const sheet = editorShortcuts('Ctrl').flatMap((entry) => entry.keys);
+    for (const key of [...keys, SHOW_ALL.key]) expect(sheet).toContain(key);
+    expect(sheet).not.toContain('V');
   });
 });

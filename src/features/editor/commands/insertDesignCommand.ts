@@ -11,3 +11,5 @@ export { INSERT_GAP_MM, mergeDesign } from '@/domain/design/mergeDesign';
 export function insertDesignCommand(label: string, inserted: DesignDocument, offset?: Vec3): EditorCommand {
   return operationCommand(label, { type: 'insertDesign', payload: { design: inserted, ...(offset ? { offset } : {}) } });
 }
+
+export { besideOffset } from '@/domain/design/mergeDesign';

@@ -1,4 +1,5 @@
-import { applyOperation, type DesignOperation } from '@/domain/design/operations';
+import { applyDesignOperation } from '@/domain/design/applyDesignOperation';
+import type { DesignOperation } from '@/domain/design/operations';
 import type { DesignDocument } from '@/domain/design/schema';
 import type { EditorCommand } from './EditorCommand';
 
@@ -13,7 +14,7 @@ export function operationCommand(label: string, op: DesignOperation): EditorComm
     label,
     apply(design) {
       before = design;
-      return applyOperation(design, op);
+      return applyDesignOperation(design, op);
     },
     undo(design) {
       return before ?? design;

@@ -1,4 +1,5 @@
 import type { JointChanges, PanelChanges, ProfileChanges } from '@/domain/design/operationTypes';
+import type { DesignDocument } from '@/domain/design/schema';
 import type { EditorCommand } from './EditorCommand';
 import { operationCommand } from './operationCommand';
 
@@ -14,4 +15,22 @@ export function updatePanelCommand(label: string, panelId: string, changes: Pane
 /** Fastener head, T-nut kind and count: joint fields with no machining consequence. */
 export function updateJointCommand(label: string, jointId: string, changes: JointChanges): EditorCommand {
   return operationCommand(label, { type: 'updateJoint', payload: { jointId, changes } });
+}
+
+/** The units the design is shown in: saved with the design, so it opens the way it was made. */
+export function setDesignUnitsCommand(units: DesignDocument['units']): EditorCommand {
+  let previous: DesignDocument['units'] | null = null;
+  return {
+    label: units === 'in' ? 'Show inches' : 'Show millimetres',
+    apply(design) {
+      previous = design.units;
+      return { ...design, units };
+    },
+    undo(design) {
+      return previous ? { ...design, units: previous } : design;
+    },
+    toJSON() {
+      return { type: 'set-units', units };
+    },
+  };
 }

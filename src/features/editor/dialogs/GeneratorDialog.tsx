@@ -7,8 +7,8 @@ import { defaultCatalogue } from '@/domain/catalogue';
 import { generators, type GeneratorDefinition } from '@/domain/design/generators';
 import type { DesignDocument } from '@/domain/design/schema';
 import { cn } from '@/lib/cn';
-import { insertDesignCommand } from '../commands/insertDesignCommand';
-import { replaceDesignCommand } from '../commands/replaceDesignCommand';
+import { operationCommand } from '../commands';
+import { besideOffset } from '../commands/insertDesignCommand';
 import { useEditorStore, useEditorStoreApi } from '../store/editorStore';
 import type { DisplayUnits } from '../store/types';
 import { defaultFormValues, generatorFields, generatorFormSchema, type GeneratorFieldSpec, type GeneratorFormValues } from './generatorFields';
@@ -23,7 +23,7 @@ export function GeneratorDialog({ open, onClose }: { open: boolean; onClose: () 
   const generator = (generators as readonly GeneratorDefinition[]).find((candidate) => candidate.id === kind) ?? generators[0];
   return (
     <Dialog open={open} title="Frame starters" description="A complete frame with joints, panels and feet, sized by you. Both choices can be undone." onClose={onClose}>
-      <div role="radiogroup" aria-label="Frame kind" className="mb-4 grid grid-cols-2 gap-2">
+      <div role="radiogroup" aria-label="Frame kind" className="mb-3 grid grid-cols-3 gap-2">
         {(generators as readonly GeneratorDefinition[]).map((candidate) => (
           <button
             key={candidate.id}
@@ -72,10 +72,18 @@ function GeneratorForm({ generator, units, systemId, onDone }: { generator: Gene
       return setFailure(error instanceof Error ? error.message : 'The frame could not be made from these sizes.');
     }
     const current = store.getState().design;
-    const command =
-      placement === 'replace'
-        ? replaceDesignCommand(`Replace with a ${generator.name.toLowerCase()}`, { ...generated, name: current.name, units: current.units, metadata: current.metadata })
-        : insertDesignCommand(`Add a ${generator.name.toLowerCase()}`, generated);
+    // One command: the starter runs as a frame group that keeps its parameters, so it can be resized later.
+    const command = operationCommand(placement === 'replace' ? `Replace with a ${generator.name.toLowerCase()}` : `Add a ${generator.name.toLowerCase()}`, {
+      type: 'addFrameGroup',
+      payload: {
+        group: {
+          generatorId: generator.id,
+          params: jsonParams(params),
+          placement: placement === 'replace' ? 'replace' : 'beside',
+          ...(placement === 'replace' ? {} : { origin: besideOffset(current, generated) }),
+        },
+      },
+    });
     if (!store.getState().execute(command)) return setFailure(store.getState().lastRefusal?.message ?? 'The frame could not be added.');
     store.getState().clearSelection();
     store.getState().setTool('select');
@@ -84,22 +92,23 @@ function GeneratorForm({ generator, units, systemId, onDone }: { generator: Gene
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4">
-      <p className="text-sm text-ink-soft">{generator.description}</p>
-      <div className="grid grid-cols-2 gap-3">
+    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-3">
+      <p className="text-xs text-ink-soft">{generator.description}</p>
+      {/* The sizes scroll inside the dialog so its buttons stay on screen at 1440 × 900 and below. */}
+      <div className="grid max-h-[min(40vh,360px)] grid-cols-2 gap-3 overflow-y-auto pr-1" data-testid="generator-fields">
         {fields.map((field) => (
           <GeneratorField key={field.name} field={field} register={register} error={errors[field.name]?.message as string | undefined} />
         ))}
       </div>
-      <fieldset className="flex flex-col gap-1">
-        <legend className="mb-1 text-sm font-medium text-ink">Where it goes</legend>
+      <fieldset className="flex flex-row flex-wrap gap-x-4">
+        <legend className="text-sm font-medium text-ink">Where it goes</legend>
         <label className="flex min-h-11 items-center gap-2 text-sm">
           <input type="radio" name="placement" className="size-4 accent-accent" checked={placement === 'replace'} onChange={() => setPlacement('replace')} />
-          Replace the current design
+          Replace the design
         </label>
         <label className="flex min-h-11 items-center gap-2 text-sm">
           <input type="radio" name="placement" className="size-4 accent-accent" checked={placement === 'insert'} onChange={() => setPlacement('insert')} />
-          Add it beside the current design
+          Add it beside
         </label>
       </fieldset>
       {failure ? (
@@ -119,8 +128,27 @@ function GeneratorForm({ generator, units, systemId, onDone }: { generator: Gene
   );
 }
 
-function GeneratorField({ field, register, error }: { field: GeneratorFieldSpec; register: ReturnType<typeof useForm<GeneratorFormValues>>['register']; error?: string }) {
-  const id = `generator-${field.name}`;
+/** Starter parameters as plain JSON values (mm, counts, ids, switches). */
+export function jsonParams(params: Record<string, unknown>): Record<string, number | string | boolean | null> {
+  const out: Record<string, number | string | boolean | null> = {};
+  for (const [key, value] of Object.entries(params)) {
+    if (typeof value === 'number' || typeof value === 'string' || typeof value === 'boolean' || value === null) out[key] = value;
+  }
+  return out;
+}
+
+export function GeneratorField({
+  field,
+  register,
+  error,
+  idPrefix = 'generator',
+}: {
+  field: GeneratorFieldSpec;
+  register: ReturnType<typeof useForm<GeneratorFormValues>>['register'];
+  error?: string;
+  idPrefix?: string;
+}) {
+  const id = `${idPrefix}-${field.name}`;
   const errorId = `${id}-error`;
   const describedBy = error ? errorId : undefined;
   const control =

@@ -63,13 +63,23 @@ export function generatorFields(generator: GeneratorDefinition): GeneratorFieldS
 
 export type GeneratorFormValues = Record<string, string | boolean>;
 
+/**
+ * A metric default restated as an inch size a shop would pick, mm: sizes of a foot or more to the
+ * nearest 6 in (1200 mm → 48 in), smaller ones to the nearest 1/4 in (18 mm → 3/4 in).
+ */
+export function roundedForInches(mm: number): number {
+  const inches = mm / 25.4;
+  const step = inches >= 12 ? 6 : 0.25;
+  return Math.max(step, Math.round(inches / step) * step) * 25.4;
+}
+
 /** Form values from the generator's defaults, lengths written in the person's units. */
 export function defaultFormValues(generator: GeneratorDefinition, fields: GeneratorFieldSpec[], units: LengthUnit, systemId: string): GeneratorFormValues {
   const defaults = generator.defaults as Record<string, unknown>;
   const values: GeneratorFormValues = {};
   for (const field of fields) {
     const value = field.name === 'systemId' ? systemId : defaults[field.name];
-    if (field.type === 'length') values[field.name] = typeof value === 'number' ? formatLength(value, units) : '';
+    if (field.type === 'length') values[field.name] = typeof value === 'number' ? formatLength(units === 'in' ? roundedForInches(value) : value, units) : '';
     else if (field.type === 'count') values[field.name] = value === undefined ? '' : String(value);
     else if (field.type === 'check') values[field.name] = Boolean(value);
     else values[field.name] = value === undefined ? (field.options[0]?.value ?? '') : String(value);

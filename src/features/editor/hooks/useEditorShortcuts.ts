@@ -1,6 +1,7 @@
 import { useEffect, useRef } from 'react';
 import { useEditorStoreApi } from '../store/editorStore';
-import type { EditorView } from '../store/types';
+import type { EditorTool, EditorView } from '../store/types';
+import { SHOW_ALL, TOOL_SHORTCUTS, VIEW_SHORTCUTS } from './shortcutList';
 
 export interface ShortcutHandlers {
   save(): void;
@@ -9,7 +10,8 @@ export interface ShortcutHandlers {
   openShortcutSheet(): void;
 }
 
-const VIEW_KEYS: Record<string, EditorView> = { '1': 'front', '2': 'top', '3': 'side', '4': 'iso' };
+const VIEW_KEYS: Record<string, EditorView> = Object.fromEntries(VIEW_SHORTCUTS.map((v) => [v.key, v.view]));
+const TOOL_KEYS: Record<string, EditorTool> = Object.fromEntries(TOOL_SHORTCUTS.map((t) => [t.key.toLowerCase(), t.tool]));
 
 /** True when the key press belongs to a text field, select or editable element, not to the editor. */
 function isTypingTarget(target: EventTarget | null): boolean {
@@ -65,10 +67,9 @@ export function useEditorShortcuts(handlers: ShortcutHandlers): void {
       }
       if (key === 'Delete' || key === 'Backspace') return run(() => handlersRef.current.deleteSelection());
       if (event.shiftKey) return;
-      if (lower === 'v') return run(() => state.setTool('select'));
-      if (lower === 'd') return run(() => state.setTool('draw-profile'));
-      if (lower === 'o') return run(() => state.setTool('fill-opening'));
-      if (lower === 'f') return run(() => state.requestFrame(state.selection.length > 0 ? state.selection : 'all'));
+      const tool = TOOL_KEYS[lower];
+      if (tool) return run(() => state.setTool(tool));
+      if (lower === SHOW_ALL.key.toLowerCase()) return run(() => state.requestFrame(state.selection.length > 0 ? state.selection : 'all'));
       const view = VIEW_KEYS[key];
       if (view) return run(() => state.requestView(view));
     }

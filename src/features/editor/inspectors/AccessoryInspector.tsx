@@ -13,7 +13,7 @@ export function AccessoryInspector({ accessory }: { accessory: Accessory }) {
   const units = useEditorStore((state) => state.units);
   const part = getAccessoryPart(defaultCatalogue, accessory.partId);
   return (
-    <InspectorSection title={`Accessory ${accessory.id}`}>
+    <InspectorSection title={`Accessory: ${accessory.kind.replace(/-/g, ' ')}`}>
       <dl className="flex flex-col gap-1.5">
         <ValueRow name="Part" value={part?.name ?? accessory.partId} />
         {accessory.profileId ? <ValueRow name="On profile" value={`${accessory.profileId}${accessory.end ? `, ${accessory.end} end` : ''}`} /> : null}

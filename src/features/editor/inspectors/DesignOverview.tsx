@@ -2,6 +2,7 @@ import { defaultCatalogue, getSystem } from '@/domain/catalogue';
 import { formatLength, formatMass } from '@/domain/units';
 import { useEditorStore } from '../store/editorStore';
 import { EndTreatmentActions } from './EndTreatmentActions';
+import { FrameGroupInspector } from './FrameGroupInspector';
 import { InspectorSection, ValueRow } from './InspectorSection';
 import { JointProposals } from './JointProposals';
 
@@ -35,6 +36,9 @@ export function DesignOverview() {
           <p className="text-xs text-ink-muted">Click a part to inspect it; Shift-click adds to the selection.</p>
         )}
       </InspectorSection>
+      {(design.frameGroups ?? []).map((group) => (
+        <FrameGroupInspector key={group.id} group={group} />
+      ))}
       <JointProposals />
       {design.profiles.length > 0 ? <EndTreatmentActions /> : null}
     </>

@@ -45,7 +45,7 @@ export function DoorHardwareActions({ panel }: { panel: Panel }) {
               icon={<DoorOpen aria-hidden className="size-4" />}
               onClick={() =>
                 store.getState().execute(
-                  operationCommand(`${label} to ${panel.id}`, { type: 'addAccessory', payload: { accessory: { kind, partId: part.id, panelId: panel.id, quantity } } }),
+                  operationCommand(`${label} to ${panel.label ?? 'the door'}`, { type: 'addAccessory', payload: { accessory: { kind, partId: part.id, panelId: panel.id, quantity } } }),
                 )
               }
             >

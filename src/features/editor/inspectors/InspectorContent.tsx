@@ -2,6 +2,7 @@ import { useEditorStore } from '../store/editorStore';
 import { AccessoryInspector } from './AccessoryInspector';
 import { DesignOverview } from './DesignOverview';
 import { DoorHardwareActions } from './DoorHardwareActions';
+import { FrameGroupInspector } from './FrameGroupInspector';
 import { FillOpeningInspector } from './FillOpeningInspector';
 import { InspectorSection } from './InspectorSection';
 import { JointInspector } from './JointInspector';
@@ -21,11 +22,13 @@ export function InspectorContent() {
 
   if (selection.length === 1) {
     const id = selection[0];
+    const group = (design.frameGroups ?? []).find((candidate) => candidate.partIds.includes(id));
     const profile = design.profiles.find((candidate) => candidate.id === id);
     if (profile)
       return (
         <div key={id}>
           <ProfileInspector profile={profile} />
+          {group ? <FrameGroupInspector group={group} /> : null}
           <JointProposals profileId={id} />
           <SelectionActions ids={selection} />
         </div>

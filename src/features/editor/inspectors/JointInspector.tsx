@@ -26,7 +26,7 @@ export function JointInspector({ joint }: { joint: Joint }) {
 
   return (
     <>
-      <InspectorSection title={`Joint ${joint.id}`}>
+      <InspectorSection title={`Joint: ${JOINT_KIND_NAMES[joint.kind].toLowerCase()}`}>
         <p className="text-sm text-ink-soft">
           Joins {joint.members.map((member) => `${member.profileId} (${member.at === 'span' ? 'along its length' : `${member.at} end`})`).join(' to ')}.
         </p>
@@ -36,7 +36,7 @@ export function JointInspector({ joint }: { joint: Joint }) {
           value={joint.kind}
           onChange={(value) =>
             store.getState().execute(
-              operationCommand(`Use ${JOINT_KIND_NAMES[value as JointKind].toLowerCase()} at ${joint.id}`, {
+              operationCommand(`Use ${JOINT_KIND_NAMES[value as JointKind].toLowerCase()} at this joint`, {
                 type: 'setJointConnector',
                 payload: { jointId: joint.id, kind: value as JointKind },
               }),
@@ -55,7 +55,7 @@ export function JointInspector({ joint }: { joint: Joint }) {
             id={headId}
             label="Screw head"
             value={joint.fastenerHead}
-            onChange={(value) => store.getState().execute(updateJointCommand(`Use ${value} head screws at ${joint.id}`, joint.id, { fastenerHead: value as Joint['fastenerHead'] }))}
+            onChange={(value) => store.getState().execute(updateJointCommand(`Use ${value} head screws at this joint`, joint.id, { fastenerHead: value as Joint['fastenerHead'] }))}
           >
             <option value="button">Button head</option>
             <option value="socket">Socket head</option>
@@ -65,7 +65,7 @@ export function JointInspector({ joint }: { joint: Joint }) {
             id={nutId}
             label="T-nut"
             value={joint.tNut}
-            onChange={(value) => store.getState().execute(updateJointCommand(`Use ${value} T-nuts at ${joint.id}`, joint.id, { tNut: value as Joint['tNut'] }))}
+            onChange={(value) => store.getState().execute(updateJointCommand(`Use ${value} T-nuts at this joint`, joint.id, { tNut: value as Joint['tNut'] }))}
           >
             <option value="drop-in">Drop-in</option>
             <option value="slide-in">Slide-in</option>
@@ -104,7 +104,7 @@ export function JointInspector({ joint }: { joint: Joint }) {
           variant="secondary"
           icon={<Trash2 aria-hidden className="size-4" />}
           onClick={() => {
-            if (store.getState().execute(operationCommand(`Remove joint ${joint.id}`, { type: 'removeJoint', payload: { jointId: joint.id } }))) {
+            if (store.getState().execute(operationCommand(`Remove the ${JOINT_KIND_NAMES[joint.kind].toLowerCase()}`, { type: 'removeJoint', payload: { jointId: joint.id } }))) {
               store.getState().clearSelection();
             }
           }}

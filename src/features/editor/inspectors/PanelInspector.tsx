@@ -32,7 +32,7 @@ export function PanelInspector({ panel }: { panel: Panel }) {
 
   return (
     <>
-      <InspectorSection title={`Panel ${panel.label ?? panel.id}`}>
+      <InspectorSection title={`Panel ${panel.label ?? `${panel.rect.width.toFixed(0)} × ${panel.rect.height.toFixed(0)} mm`}`}>
         <dl className="flex flex-col gap-1.5">
           <ValueRow name="Opening" value={`${formatLength(panel.rect.width, units)} × ${formatLength(panel.rect.height, units)}`} />
           {panelCut ? <ValueRow name="Cut sheet to" value={`${formatLength(panelCut.width, units)} × ${formatLength(panelCut.height, units)}`} /> : null}
@@ -45,7 +45,7 @@ export function PanelInspector({ panel }: { panel: Panel }) {
           id={materialId}
           label="Material"
           value={panel.materialId}
-          onChange={(value) => update(`Make ${panel.id} ${getPanelMaterial(catalogue, value)?.name ?? value}`, { materialId: value })}
+          onChange={(value) => update(`Make ${panel.label ?? 'the panel'} ${getPanelMaterial(catalogue, value)?.name ?? value}`, { materialId: value })}
         >
           {catalogue.panelMaterials.map((option) => (
             <option key={option.id} value={option.id}>
@@ -58,7 +58,7 @@ export function PanelInspector({ panel }: { panel: Panel }) {
           valueMm={panel.thickness}
           units={units}
           validate={(mm) => (panel.mounting === 'captured' ? capturedThicknessProblem(mm, slot, units) : null)}
-          onCommit={(mm) => update(`Set ${panel.id} thickness to ${formatLength(mm, units)}`, { thickness: mm })}
+          onCommit={(mm) => update(`Set ${panel.label ?? 'the panel'} thickness to ${formatLength(mm, units)}`, { thickness: mm })}
           hint={material ? `Common: ${material.thicknesses.map((t) => formatLength(t, units)).join(', ')}` : undefined}
         />
         <div className="grid grid-cols-2 gap-2">
@@ -66,12 +66,12 @@ export function PanelInspector({ panel }: { panel: Panel }) {
             id={mountingId}
             label="Mounting"
             value={panel.mounting}
-            onChange={(value) => update(`Mount ${panel.id} ${value === 'captured' ? 'in the slots' : 'on the face'}`, { mounting: value as Panel['mounting'] })}
+            onChange={(value) => update(`Mount ${panel.label ?? 'the panel'} ${value === 'captured' ? 'in the slots' : 'on the face'}`, { mounting: value as Panel['mounting'] })}
           >
             <option value="captured">In the slots</option>
             <option value="face">On the face</option>
           </InspectorSelect>
-          <InspectorSelect id={roleId} label="Role" value={panel.role} onChange={(value) => update(`Make ${panel.id} a ${value}`, { role: value as Panel['role'] })}>
+          <InspectorSelect id={roleId} label="Role" value={panel.role} onChange={(value) => update(`Make ${panel.label ?? 'the panel'} a ${value}`, { role: value as Panel['role'] })}>
             <option value="panel">Panel</option>
             <option value="door">Door</option>
             <option value="shelf">Shelf</option>

@@ -37,7 +37,7 @@ export function ProfileInspector({ profile }: { profile: Profile }) {
 
   return (
     <>
-      <InspectorSection title={`Profile ${profile.label ?? profile.id}`}>
+      <InspectorSection title={`Profile ${profile.label ?? formatLength(profile.length, units)}`}>
         <dl className="flex flex-col gap-1.5">
           <ValueRow name="Profile" value={variant?.name ?? profile.variantId} />
           <ValueRow name="Runs" value={describeDirection(profile.direction)} />
@@ -47,7 +47,7 @@ export function ProfileInspector({ profile }: { profile: Profile }) {
           label="Length"
           valueMm={profile.length}
           units={units}
-          onCommit={(mm) => update(`Set length of ${profile.id} to ${formatLength(mm, units)}`, { length: mm })}
+          onCommit={(mm) => update(`Set length of ${profile.label ?? "the profile"} to ${formatLength(mm, units)}`, { length: mm })}
           hint={units === 'in' ? 'Type 23-7/16, 23 7/16 in or 595 mm.' : 'Type 595, 595 mm or 23-7/16 in.'}
         />
       </InspectorSection>

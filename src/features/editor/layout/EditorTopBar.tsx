@@ -22,7 +22,7 @@ export function EditorTopBar({ saving, onSave, onUnitsChange, onOpenShortcuts }:
   return (
     <header className="flex min-h-14 shrink-0 items-center gap-3 border-b border-paper-line bg-paper-raised px-3">
       <div className="flex min-w-0 flex-1 flex-col justify-center">
-        <h1 className="truncate text-base font-semibold leading-tight text-ink" title={name}>
+        <h1 className="min-w-[8rem] truncate text-base font-semibold leading-tight text-ink" title={name}>
           {name}
         </h1>
         <SaveStatus saving={saving} />

@@ -10,7 +10,9 @@ import { LeaveWithoutSavingDialog } from '../saving/LeaveWithoutSavingDialog';
 import { StaleRevisionDialog } from '../saving/StaleRevisionDialog';
 import { useSaveDesign } from '../saving/useSaveDesign';
 import { useUnsavedChangesGuard } from '../saving/useUnsavedChangesGuard';
-import { useEditorStore } from '../store/editorStore';
+import { setDesignUnitsCommand } from '../commands/patchCommands';
+import { useEditorStore, useEditorStoreApi } from '../store/editorStore';
+import type { DisplayUnits } from '../store/types';
 import { CanvasArea } from './CanvasArea';
 import { EditorTopBar } from './EditorTopBar';
 import { InspectorColumn } from './InspectorColumn';
@@ -20,9 +22,16 @@ import { ToolStrip } from './ToolStrip';
 
 /** The editor screen: top bar, tool strip, the model, the inspector and the outputs dock, plus its keys and dialogs. */
 export function EditorWorkspace() {
-  const { units, setUnits } = useUnits();
+  // Lengths show in the design's own units (chosen when it was made, changed with the switch).
+  const { setUnits: savePreference } = useUnits();
+  const store = useEditorStoreApi();
+  const designUnits = useEditorStore((state) => state.design.units);
   const setStoreUnits = useEditorStore((state) => state.setUnits);
-  useEffect(() => setStoreUnits(units), [units, setStoreUnits]);
+  useEffect(() => setStoreUnits(designUnits), [designUnits, setStoreUnits]);
+  const setUnits = (next: DisplayUnits) => {
+    if (store.getState().design.units !== next) store.getState().execute(setDesignUnitsCommand(next));
+    savePreference(next);
+  };
 
   useLiveAnalysis();
   const saveState = useSaveDesign();

@@ -24,7 +24,7 @@ export function DockTabs({ tabs, active, onChange, idPrefix, label }: { tabs: Do
     refs.current[next.id]?.focus();
   }
   return (
-    <div role="tablist" aria-label={label} className="flex min-w-0 flex-wrap gap-x-1">
+    <div role="tablist" aria-label={label} className="flex min-w-0 flex-nowrap gap-x-1 overflow-x-auto">
       {tabs.map((tab) => {
         const selected = tab.id === active;
         return (

@@ -47,6 +47,7 @@ export function OutputsDock({
   const units = useEditorStore((state) => state.units);
   const selection = useEditorStore((state) => state.selection);
   const execute = useEditorStore((state) => state.execute);
+  const select = useEditorStore((state) => state.select);
   const [openState, setOpen] = useState(defaultOpen);
   const open = openState || !collapsible;
   const [active, setActive] = useState<string>(initialTab);
@@ -109,6 +110,7 @@ export function OutputsDock({
               onApplySettings={(patch: StockSettingsPatch) => execute(updateSettingsCommand('Change stock settings', patch))}
               onAddLoadCase={(loadCase: LoadCase) => execute(addLoadCaseCommand(loadCase))}
               onRemoveLoadCase={(id: string) => execute(removeLoadCaseCommand(id))}
+              onSelectParts={select}
             />
           </div>
         </div>
@@ -129,10 +131,13 @@ interface DockBodyProps {
   onApplySettings: (patch: StockSettingsPatch) => void;
   onAddLoadCase: (loadCase: LoadCase) => void;
   onRemoveLoadCase: (id: string) => void;
+  /** Rows of the parts and cuts tables select their parts in the model. */
+  onSelectParts?: (ids: string[], mode: 'replace' | 'add') => void;
 }
 
 /** One tab's content, or the empty / first-run states. */
-export function DockBody({ tab, design, analysis, analysedSettings, running, units, selection, onApplySettings, onAddLoadCase, onRemoveLoadCase }: DockBodyProps) {
+export function DockBody({ tab, design, analysis, analysedSettings, running, units, selection, onApplySettings, onAddLoadCase, onRemoveLoadCase, onSelectParts }: DockBodyProps) {
+  const selectedIds = new Set(selection);
   if (isEmptyDesign(design)) {
     return (
       <div className="py-6 text-center text-sm text-ink-muted">
@@ -152,9 +157,9 @@ export function DockBody({ tab, design, analysis, analysedSettings, running, uni
   if (tab === 'sequence') return <SequencePanel />;
   switch (tab) {
     case 'parts':
-      return <PartsTab lines={analysis.bom} units={units} designName={design.name} />;
+      return <PartsTab lines={analysis.bom} units={units} designName={design.name} selectedIds={selectedIds} onSelectParts={onSelectParts} />;
     case 'cuts':
-      return <CutsTab groups={analysis.cutGroups} items={analysis.cutList} units={units} designName={design.name} />;
+      return <CutsTab groups={analysis.cutGroups} items={analysis.cutList} units={units} designName={design.name} selectedIds={selectedIds} onSelectParts={onSelectParts} />;
     case 'bars':
       return (
         <BarsTab

@@ -18,6 +18,16 @@ interface DrawProfileToolProps {
   snapPixels?: number;
 }
 
+/**
+ * A horizontal profile drawn from the floor sits on it: its axis is lifted by half the section's
+ * height (at roll 0 the section's height is vertical for a horizontal profile). Other starts stay.
+ */
+export function restOnFloor(start: Vec3, direction: Vec3, sectionHeight: number): Vec3 {
+  const half = sectionHeight / 2;
+  if (Math.abs(direction[1]) > 0.5 || start[1] >= half - 1e-6 || start[1] < -1e-6) return start;
+  return [start[0], half, start[2]];
+}
+
 const SNAP_COLOURS = { end: '#0b7a75', 'face-centre': '#285e9e', 'slot-line': '#6a4bb0', grid: '#5d6873', step: '#5d6873' } as const;
 
 /**
@@ -78,6 +88,7 @@ export function DrawProfileTool({ snapPixels = 12 }: DrawProfileToolProps) {
     let lastMove: PointerEvent | null = null;
     let lastTarget: ReturnType<typeof drawTarget> | null = null;
 
+    const sectionHeight = () => catalogue.variants.find((v) => v.id === store.getState().drawSystemVariantId)?.height ?? 0;
     const settings = () => {
       const state = store.getState();
       const distance = controls ? camera.position.distanceTo(controls.target) : 2000;
@@ -107,7 +118,7 @@ export function DrawProfileTool({ snapPixels = 12 }: DrawProfileToolProps) {
         markerMaterial.color.set(SNAP_COLOURS[kind]);
         marker.visible = true;
         if (length > 0) {
-          preview.matrix.copy(profileMatrix({ start: start.current, direction, length, rollDeg: 0 }));
+          preview.matrix.copy(profileMatrix({ start: restOnFloor(start.current, direction, sectionHeight()), direction, length, rollDeg: 0 }));
           preview.visible = true;
         } else preview.visible = false;
         projected.set((start.current[0] + end[0]) / 2, (start.current[1] + end[1]) / 2, (start.current[2] + end[2]) / 2).project(camera);
@@ -139,14 +150,17 @@ export function DrawProfileTool({ snapPixels = 12 }: DrawProfileToolProps) {
       }
       const target = drawTarget(start.current, ray, state.design, catalogue, { step, tolerance, grid });
       if (target.length < step) return;
-      const from = start.current;
-      start.current = null;
-      state.execute(
+      const from = restOnFloor(start.current, target.direction, sectionHeight());
+      const added = state.execute(
         operationCommand(`Draw profile ${formatLength(target.length, state.units)}`, {
           type: 'addProfile',
           payload: { profile: { variantId: state.drawSystemVariantId, start: from, direction: target.direction, length: target.length } },
         }),
       );
+      // Chain: the next profile starts where this one ended, until Escape.
+      start.current = added
+        ? [from[0] + target.direction[0] * target.length, from[1] + target.direction[1] * target.length, from[2] + target.direction[2] * target.length]
+        : null;
       lastMove = e;
       update();
     };

@@ -5,6 +5,7 @@ import { useEditorStore, useEditorStoreApi } from '../store/editorStore';
 import type { EditorView } from '../store/types';
 import { DrawProfileTool } from './DrawProfileTool';
 import { HoverPicker } from './HoverPicker';
+import { MeasureTool } from './MeasureTool';
 import { MoveGizmo } from './MoveGizmo';
 import { OpeningTargets } from './OpeningTargets';
 
@@ -73,6 +74,7 @@ export function EditorCanvas({ catalogue = defaultCatalogue, className }: Editor
     >
       <OpeningTargets />
       <DrawProfileTool />
+      <MeasureTool />
       <MoveGizmo />
       <HoverPicker />
     </DesignViewer>
