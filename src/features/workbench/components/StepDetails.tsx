@@ -5,7 +5,7 @@ import { LOCAL_RULES } from '@/domain/buildInstructions';
 /** What a step needs: parts, hardware, tools and cautions (shared by the step-through and the print view). */
 export function StepDetails({ step }: { step: InstructionStep }) {
   return (
-    <div className="flex flex-col gap-3 text-base">
+    <div className="step-details flex flex-col gap-3 text-base">
       {step.notes ? <p className="text-ink">{step.notes}</p> : null}
       {step.cautions.length > 0 ? (
         <div role="note" className="step-cautions flex gap-2 rounded-lg border border-severity-warning bg-severity-warning-soft px-3 py-2">
