@@ -12,7 +12,7 @@ import { createApp, stopBackgroundWork } from '../server/app';
 import { loadConfig } from '../server/config';
 import { openDatabase } from '../server/db/database';
 import { runMigrations } from '../server/db/migrate';
-import { DEMO_ACCOUNTS, DEMO_PASSWORD, seedDemo } from '../server/db/seed';
+import { DEMO_ACCOUNTS, DEMO_PASSWORD, seedDemo } from '../server/seed';
 import { parseDesignDocument } from '../src/domain/design/parse';
 import { largeFrame } from './largeFrame';
 import type { BenchRow } from './types';

@@ -1,4 +1,5 @@
-// `npm test`: unit + API + component tests (Vitest), then a production build and the
+// `npm test`: lint (ESLint, zero warnings, layer boundaries), then unit + API + component tests
+// (Vitest), then a production build and the
 // end-to-end specs (Playwright in Debian's Chromium). Prints one closing summary line.
 import { spawnSync } from 'node:child_process';
 import { existsSync, readFileSync, mkdirSync, rmSync } from 'node:fs';
@@ -26,6 +27,12 @@ let passed = 0;
 let failed = 0;
 const read = (file) => (existsSync(file) ? JSON.parse(readFileSync(file, 'utf8')) : null);
 
+const lintStatus = run('npx', ['eslint', '.', '--max-warnings', '0']);
+if (lintStatus !== 0) {
+  console.error('Lint failed (see above); the tests still run so every failure shows at once.');
+  failed += 1;
+}
+
 const unitStatus = run('npx', [
   'vitest', 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${join(outDir, 'vitest.json')}`,
 ]);
@@ -51,6 +58,6 @@ if (buildStatus === 0) {
   failed += 1;
 }
 
-const ok = unitStatus === 0 && buildStatus === 0 && e2eStatus === 0;
+const ok = lintStatus === 0 && unitStatus === 0 && buildStatus === 0 && e2eStatus === 0;
 console.log(`\n${passed} passed, ${failed} failed`);
 process.exit(ok ? 0 : 1);

@@ -2,6 +2,7 @@ import { analyzeDesign, type DesignAnalysis } from '../src/domain/analyze';
 import { createEmptyDesign } from '../src/domain/design/create';
 import { parseDesignDocument } from '../src/domain/design/parse';
 import type { DesignDocument } from '../src/domain/design/schema';
+import type { LengthUnit } from '../src/domain/units';
 
 /**
  * The server's door to the shared domain core (relative paths: tsx does not read tsconfig
@@ -19,7 +20,7 @@ export function checkDesignDocument(json: unknown): DocumentCheck {
 }
 
 /** A new, empty design document. */
-export function createEmptyDesignDocument(options: { name: string; systemId: string; units?: 'mm' | 'in' }): DesignDocument {
+export function createEmptyDesignDocument(options: { name: string; systemId: string; units?: LengthUnit }): DesignDocument {
   return createEmptyDesign(options);
 }
 

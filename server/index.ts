@@ -4,7 +4,7 @@ import { createApp, stopBackgroundWork } from './app';
 import { ConfigError, loadConfig } from './config';
 import { openDatabase } from './db/database';
 import { runMigrations } from './db/migrate';
-import { seedDemo } from './db/seed';
+import { seedDemo } from './seed';
 import { consoleLogger as logger } from './logger';
 
 async function start(): Promise<void> {

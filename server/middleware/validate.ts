@@ -1,19 +1,26 @@
 import type { RequestHandler } from 'express';
+import type { ParamsDictionary } from 'express-serve-static-core';
+import type { ParsedQs } from 'qs';
 import type { z } from 'zod';
 import { AppError } from './appError';
 import { describeZodIssues } from './zodFields';
 
-interface Schemas {
-  body?: z.ZodType;
-  query?: z.ZodType;
-  params?: z.ZodType;
+interface Schemas<P extends z.ZodType, B extends z.ZodType, Q extends z.ZodType> {
+  body?: B;
+  query?: Q;
+  params?: P;
 }
+
+/** What a part reads as after `validate`: the schema's output, or Express's default when no schema is given. */
+type Parsed<S extends z.ZodType, Default> = unknown extends z.output<S> ? Default : z.output<S>;
 
 /**
  * Parses the request parts with zod and replaces them with the parsed values, so handlers read
  * clean, defaulted data. Any failure becomes a 400 with `fields` and nothing downstream runs.
  */
-export function validate(schemas: Schemas): RequestHandler {
+export function validate<P extends z.ZodType = z.ZodUnknown, B extends z.ZodType = z.ZodUnknown, Q extends z.ZodType = z.ZodUnknown>(
+  schemas: Schemas<P, B, Q>,
+): RequestHandler<Parsed<P, ParamsDictionary>, unknown, Parsed<B, unknown>, Parsed<Q, ParsedQs>> {
   return (req, _res, next) => {
     for (const part of ['params', 'query', 'body'] as const) {
       const schema = schemas[part];

@@ -12,7 +12,9 @@ export const NEWTONS_PER_POUND_FORCE = 4.4482216152605;
 /** Kilograms in one pound (avoirdupois), exact by definition. */
 export const KILOGRAMS_PER_POUND = 0.45359237;
 
-export type LengthUnit = 'mm' | 'in';
+/** The length units a person reads and types in; the one list (contracts and the design schema use it). */
+export const LENGTH_UNITS = ['mm', 'in'] as const;
+export type LengthUnit = (typeof LENGTH_UNITS)[number];
 
 export type ParsedLength = { ok: true; mm: number } | { ok: false; error: string };
 

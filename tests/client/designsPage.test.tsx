@@ -68,7 +68,7 @@ describe('designs list', () => {
         status: 201,
         body: {
           design: summary({ id: 42, name: (body as { name: string }).name, profileCount: 0 }),
-          revision: { number: 1, createdAt: minutesAgo(0), createdBy: { id: 2, displayName: 'Tomasz Reyes' }, message: null, document: {} },
+          revision: { number: 1, createdAt: minutesAgo(0), createdBy: { id: 2, displayName: 'Tomasz Reyes' }, message: null, thumbnailUrl: null, document: {} },
         },
       }),
     });

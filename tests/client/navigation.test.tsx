@@ -2,7 +2,7 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { cleanup, screen, within } from '@testing-library/react';
 import { AppShell } from '@/app/layout/AppShell';
-import type { Role } from '@/features/auth/api/schemas';
+import type { Role } from '@/domain/contracts';
 import { DEMO_NAMES, makeUser, renderAt } from './testUtils';
 
 afterEach(() => {

@@ -3,7 +3,7 @@ import { afterEach, describe, expect, it, vi } from 'vitest';
 import { cleanup, screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import PeoplePage from '@/features/people/components/PeoplePage';
-import type { Role, User } from '@/features/auth/api/schemas';
+import type { Role, User } from '@/domain/contracts';
 import { makeUser, mockApi, renderRoutes } from './testUtils';
 
 afterEach(() => {

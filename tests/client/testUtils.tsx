@@ -3,7 +3,7 @@ import { QueryClientProvider } from '@tanstack/react-query';
 import { render } from '@testing-library/react';
 import { createMemoryRouter, RouterProvider, type RouteObject } from 'react-router';
 import { vi } from 'vitest';
-import type { Role, User } from '@/features/auth/api/schemas';
+import type { Role, User } from '@/domain/contracts';
 import { createQueryClient } from '@/lib/queryClient';
 
 export interface MockReply {

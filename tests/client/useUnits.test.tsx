@@ -2,7 +2,7 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { cleanup, screen, waitFor } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
-import { useUnits } from '@/features/account/hooks/useUnits';
+import { useUnits } from '@/lib/session/useUnits';
 import { makeUser, mockApi, renderAt } from './testUtils';
 
 afterEach(() => {

@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import {
   MM_PER_INCH,
+  type LengthUnit,
   formatForce,
   formatLength,
   formatMass,
@@ -12,7 +13,7 @@ import {
   poundsForceToNewtons,
 } from '@/domain/units';
 
-function mmOf(text: string, unit: 'mm' | 'in' = 'mm'): number {
+function mmOf(text: string, unit: LengthUnit = 'mm'): number {
   const result = parseLength(text, unit);
   if (!result.ok) throw new Error(result.error);
   return result.mm;

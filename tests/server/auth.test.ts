@@ -1,6 +1,6 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { DEMO_PASSWORD } from '../../server/db/seed';
+import { DEMO_PASSWORD } from '../../server/seed';
 import { buildTestApp, CLIENT, dataSnapshot, demoEmail, sessionIdFromSetCookie, type TestApp } from './helpers/testApp';
 
 const INVALID = {

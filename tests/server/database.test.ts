@@ -8,7 +8,7 @@ import { backupDatabase, defaultBackupPath } from '../../server/db/backup';
 import { openDatabase, type Database } from '../../server/db/database';
 import { runMigrations } from '../../server/db/migrate';
 import { migrations } from '../../server/db/migrations';
-import { seedDemo } from '../../server/db/seed';
+import { seedDemo } from '../../server/seed';
 import { sampleDocument } from './helpers/fixtures';
 import { buildTestApp, CLIENT, rowCounts, TEST_PASSWORD_COST, type TestApp } from './helpers/testApp';
 

@@ -1,11 +1,9 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
 
-export const ROLES = ['owner', 'designer', 'builder', 'customer', 'instructor'] as const;
-export type Role = (typeof ROLES)[number];
-export type Units = 'mm' | 'in';
-export interface UserPreferences {
-  units: Units;
-}
+import { ROLES, type LengthUnit, type Role, type UserPreferences } from '../../../src/domain/contracts';
+
+export { ROLES, type Role, type UserPreferences };
+export type Units = LengthUnit;
 
 export class UserModel extends Model<InferAttributes<UserModel>, InferCreationAttributes<UserModel>> {
   declare id: CreationOptional<number>;
@@ -27,7 +25,7 @@ export function initUserModel(sequelize: Sequelize): typeof UserModel {
       id: { type: DataTypes.INTEGER, primaryKey: true, autoIncrement: true },
       email: { type: DataTypes.STRING(254), allowNull: false, unique: true },
       displayName: { type: DataTypes.STRING(80), allowNull: false },
-      role: { type: DataTypes.STRING(20), allowNull: false, validate: { isIn: [ROLES as unknown as string[]] } },
+      role: { type: DataTypes.STRING(20), allowNull: false, validate: { isIn: [[...ROLES]] } },
       passwordHash: { type: DataTypes.STRING(100), allowNull: false },
       active: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
       preferences: { type: DataTypes.JSON, allowNull: false, defaultValue: { units: 'mm' } },

@@ -1,5 +1,4 @@
 import { Router } from 'express';
-import type { z } from 'zod';
 import { analyze } from '../../domainBridge';
 import { requireAuth } from '../../middleware/requireAuth';
 import { validate } from '../../middleware/validate';
@@ -10,7 +9,7 @@ import { analysisBodySchema } from './schemas';
 export function analysisRouter(): Router {
   const router = Router();
   router.post('/', requireAuth, validate({ body: analysisBodySchema }), async (req, res) => {
-    const { document } = req.body as z.output<typeof analysisBodySchema>;
+    const { document } = req.body;
     const design = await requireValidDocument(document);
     res.json({ analysis: analyze(design) });
   });

@@ -1,6 +1,5 @@
 import { Router, type RequestHandler } from 'express';
 import type { AppPassport } from './passport';
-import type { z } from 'zod';
 import { AppError } from '../../middleware/appError';
 import { requireAuth } from '../../middleware/requireAuth';
 import { validate } from '../../middleware/validate';
@@ -43,12 +42,12 @@ export function authRouter(deps: { auth: AuthService; passport: AppPassport; sig
   });
 
   router.patch('/me', requireAuth, validate({ body: patchMeBodySchema }), async (req, res) => {
-    const user = await auth.updateProfile(req.user!, req.body as z.output<typeof patchMeBodySchema>);
+    const user = await auth.updateProfile(req.user!, req.body);
     res.json({ user: presentUser(user) });
   });
 
   router.post('/me/password', requireAuth, validate({ body: changePasswordBodySchema }), async (req, res) => {
-    const { currentPassword, newPassword } = req.body as z.output<typeof changePasswordBodySchema>;
+    const { currentPassword, newPassword } = req.body;
     await auth.changePassword(req.user!, currentPassword, newPassword, req.sessionID);
     res.status(204).end();
   });

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { lengthUnitSchema } from '../../../src/domain/contracts';
 import { displayNameSchema, newPasswordSchema } from '../users/schemas';
 
 const objectError = { error: (issue: { code: string; keys?: string[] }) => (issue.code === 'unrecognized_keys' ? `Unknown field: ${issue.keys?.join(', ')}` : 'Send a JSON object') };
@@ -15,7 +16,7 @@ export const patchMeBodySchema = z.strictObject(
   {
     displayName: displayNameSchema.optional(),
     preferences: z
-      .strictObject({ units: z.enum(['mm', 'in'], { error: 'Choose mm or in' }) }, objectError)
+      .strictObject({ units: lengthUnitSchema }, objectError)
       .optional(),
   },
   objectError,

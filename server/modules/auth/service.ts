@@ -1,5 +1,5 @@
 import type { Database } from '../../db/database';
-import type { UserModel } from '../../db/models/user';
+import type { UserModel, UserPreferences } from '../../db/models/user';
 import { AppError } from '../../middleware/appError';
 import type { Passwords } from './passwords';
 import { destroySessionsOfUser } from './sessionRevocation';
@@ -24,7 +24,7 @@ export function createAuthService(db: Database, passwords: Passwords) {
       return user && user.active ? user : null;
     },
 
-    async updateProfile(user: UserModel, changes: { displayName?: string; preferences?: { units: 'mm' | 'in' } }): Promise<UserModel> {
+    async updateProfile(user: UserModel, changes: { displayName?: string; preferences?: UserPreferences }): Promise<UserModel> {
       return db.write(async (transaction) => {
         const fresh = await User.findByPk(user.id, { transaction, rejectOnEmpty: true });
         if (changes.displayName !== undefined) fresh.displayName = changes.displayName;

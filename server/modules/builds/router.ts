@@ -1,11 +1,8 @@
 import { Router } from 'express';
-import type { z } from 'zod';
 import { requireAuth, requireRole } from '../../middleware/requireAuth';
 import { validate } from '../../middleware/validate';
-import { buildIdParamsSchema, buildsQuerySchema, changeStateBodySchema, createBuildBodySchema, patchBuildBodySchema, tickBodySchema, type CreateBuildBody, type PatchBuildBody, type TickBody } from './schemas';
+import { buildIdParamsSchema, buildsQuerySchema, changeStateBodySchema, createBuildBodySchema, patchBuildBodySchema, tickBodySchema } from './schemas';
 import type { BuildsService } from './service';
-
-type BuildParams = z.output<typeof buildIdParamsSchema>;
 
 /**
  * /api/builds — owners and designers plan builds and watch progress; builders see and work on the
@@ -17,37 +14,36 @@ export function buildsRouter(builds: BuildsService): Router {
   const staff = requireRole('owner', 'designer');
   const anyBuildRole = requireRole('owner', 'designer', 'builder');
 
-  router.get('/', anyBuildRole, validate({ query: buildsQuerySchema }), async (req, res) => {
-    const query = req.query as unknown as z.output<typeof buildsQuerySchema>;
-    res.json({ builds: await builds.list(req.user!, query.designId) });
+  router.route('/').get(anyBuildRole).get(validate({ query: buildsQuerySchema }), async (req, res) => {
+    res.json({ builds: await builds.list(req.user!, req.query.designId) });
   });
 
-  router.get('/builders', staff, async (_req, res) => {
+  router.route('/builders').get(staff).get(async (_req, res) => {
     res.json({ builders: await builds.assignableBuilders() });
   });
 
-  router.post('/', staff, validate({ body: createBuildBodySchema }), async (req, res) => {
-    res.status(201).json(await builds.create(req.user!, req.body as CreateBuildBody));
+  router.route('/').post(staff).post(validate({ body: createBuildBodySchema }), async (req, res) => {
+    res.status(201).json(await builds.create(req.user!, req.body));
   });
 
-  router.get('/:id', anyBuildRole, validate({ params: buildIdParamsSchema }), async (req, res) => {
-    const { id } = req.params as unknown as BuildParams;
+  router.route('/:id').get(anyBuildRole).get(validate({ params: buildIdParamsSchema }), async (req, res) => {
+    const { id } = req.params;
     res.json(await builds.get(req.user!, id));
   });
 
-  router.patch('/:id', staff, validate({ params: buildIdParamsSchema, body: patchBuildBodySchema }), async (req, res) => {
-    const { id } = req.params as unknown as BuildParams;
-    res.json(await builds.update(req.user!, id, req.body as PatchBuildBody));
+  router.route('/:id').patch(staff).patch(validate({ params: buildIdParamsSchema, body: patchBuildBodySchema }), async (req, res) => {
+    const { id } = req.params;
+    res.json(await builds.update(req.user!, id, req.body));
   });
 
-  router.post('/:id/state', anyBuildRole, validate({ params: buildIdParamsSchema, body: changeStateBodySchema }), async (req, res) => {
-    const { id } = req.params as unknown as BuildParams;
-    res.json(await builds.changeState(req.user!, id, (req.body as z.output<typeof changeStateBodySchema>).state));
+  router.route('/:id/state').post(anyBuildRole).post(validate({ params: buildIdParamsSchema, body: changeStateBodySchema }), async (req, res) => {
+    const { id } = req.params;
+    res.json(await builds.changeState(req.user!, id, req.body.state));
   });
 
-  router.post('/:id/progress', requireRole('builder'), validate({ params: buildIdParamsSchema, body: tickBodySchema }), async (req, res) => {
-    const { id } = req.params as unknown as BuildParams;
-    res.json(await builds.tick(req.user!, id, req.body as TickBody));
+  router.route('/:id/progress').post(requireRole('builder')).post(validate({ params: buildIdParamsSchema, body: tickBodySchema }), async (req, res) => {
+    const { id } = req.params;
+    res.json(await builds.tick(req.user!, id, req.body));
   });
 
   return router;

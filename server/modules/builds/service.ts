@@ -1,5 +1,5 @@
 import { Op, QueryTypes } from 'sequelize';
-import type { BuildDetail, BuildNotice, BuildState, BuildSummary, ProgressRecord, StateChange } from '../../../src/lib/buildApiSchemas';
+import type { BuildDetail, BuildNotice, BuildState, BuildSummary, ProgressRecord, StateChange } from '../../../src/domain/contracts/builds';
 import type { Database } from '../../db/database';
 import { sqliteDateToIso } from '../../db/dates';
 import type { BuildModel } from '../../db/models/build';

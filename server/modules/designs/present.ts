@@ -1,29 +1,10 @@
 import type { DesignDocument } from '../../../src/domain/design/schema';
 import { sqliteDateToIso } from '../../db/dates';
 
-export interface PersonRef {
-  id: number;
-  displayName: string;
-}
+import type { DesignSummary, RevisionMeta } from '../../../src/domain/contracts';
 
-export interface DesignSummary {
-  id: number;
-  name: string;
-  systemId: string;
-  latestRevision: number;
-  updatedAt: string;
-  updatedBy: PersonRef;
-  thumbnailUrl: string | null;
-  profileCount: number;
-}
-
-export interface RevisionMeta {
-  number: number;
-  createdAt: string;
-  createdBy: PersonRef;
-  message: string | null;
-  thumbnailUrl: string | null;
-}
+/** The response shapes are the contract's (`src/domain/contracts/designs.ts`). */
+export type { DesignSummary, PersonRef, RevisionMeta } from '../../../src/domain/contracts';
 
 export interface Revision extends RevisionMeta {
   document: DesignDocument;

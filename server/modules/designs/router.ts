@@ -1,5 +1,4 @@
 import { Router, type RequestHandler } from 'express';
-import type { z } from 'zod';
 import { createEmptyDesignDocument } from '../../domainBridge';
 import type { UserModel } from '../../db/models/user';
 import { requireAuth, requireRole } from '../../middleware/requireAuth';
@@ -8,9 +7,6 @@ import { requireValidDocument } from './documentCheck';
 import { sendRevisionJson } from './revisionJson';
 import { createDesignBodySchema, designIdParamsSchema, revisionParamsSchema, saveRevisionBodySchema } from './schemas';
 import type { DesignsService } from './service';
-
-type DesignParams = z.output<typeof designIdParamsSchema>;
-type RevisionParams = z.output<typeof revisionParamsSchema>;
 
 export interface DesignsRouterOptions {
   /** Whether a builder may read a revision (they are assigned to a build of it). */
@@ -25,18 +21,18 @@ export function designsRouter(designs: DesignsService, options: DesignsRouterOpt
   const router = Router();
   const staff = requireRole('owner', 'designer');
   const staffOrAssignedBuilder: RequestHandler = async (req, res, next) => {
-    const { id, number } = req.params as unknown as RevisionParams;
-    if (req.user?.role === 'builder' && options.builderMayRead && (await options.builderMayRead(req.user, id, number))) return next();
+    const params = revisionParamsSchema.safeParse(req.params);
+    if (req.user?.role === 'builder' && params.success && options.builderMayRead && (await options.builderMayRead(req.user, params.data.id, params.data.number))) return next();
     staff(req, res, next);
   };
   router.use(requireAuth);
 
-  router.get('/', staff, async (_req, res) => {
+  router.route('/').get(staff).get(async (_req, res) => {
     res.json({ designs: await designs.list() });
   });
 
-  router.post('/', staff, validate({ body: createDesignBodySchema }), async (req, res) => {
-    const body = req.body as z.output<typeof createDesignBodySchema>;
+  router.route('/').post(staff).post(validate({ body: createDesignBodySchema }), async (req, res) => {
+    const body = req.body;
     const document =
       body.document === undefined
         ? createEmptyDesignDocument({ name: body.name, systemId: body.systemId, units: body.units })
@@ -46,26 +42,26 @@ export function designsRouter(designs: DesignsService, options: DesignsRouterOpt
     res.status(201).json(await designs.create(req.user!, named));
   });
 
-  router.get('/:id', staff, validate({ params: designIdParamsSchema }), async (req, res) => {
-    const { id } = req.params as unknown as DesignParams;
+  router.route('/:id').get(staff).get(validate({ params: designIdParamsSchema }), async (req, res) => {
+    const { id } = req.params;
     const { design, revision } = await designs.getLatest(id);
     sendRevisionJson(res, { design }, revision.meta, revision.documentJson);
   });
 
-  router.delete('/:id', staff, validate({ params: designIdParamsSchema }), async (req, res) => {
-    const { id } = req.params as unknown as DesignParams;
+  router.route('/:id').delete(staff).delete(validate({ params: designIdParamsSchema }), async (req, res) => {
+    const { id } = req.params;
     await designs.archive(id, req.user!);
     res.status(204).end();
   });
 
-  router.get('/:id/revisions', staff, validate({ params: designIdParamsSchema }), async (req, res) => {
-    const { id } = req.params as unknown as DesignParams;
+  router.route('/:id/revisions').get(staff).get(validate({ params: designIdParamsSchema }), async (req, res) => {
+    const { id } = req.params;
     res.json({ revisions: await designs.listRevisions(id) });
   });
 
-  router.post('/:id/revisions', staff, validate({ params: designIdParamsSchema, body: saveRevisionBodySchema }), async (req, res) => {
-    const { id } = req.params as unknown as DesignParams;
-    const body = req.body as z.output<typeof saveRevisionBodySchema>;
+  router.route('/:id/revisions').post(staff).post(validate({ params: designIdParamsSchema, body: saveRevisionBodySchema }), async (req, res) => {
+    const { id } = req.params;
+    const body = req.body;
     const document = await requireValidDocument(body.document);
     const revision = await designs.saveRevision(id, req.user!, body.baseRevision, {
       document,
@@ -76,14 +72,14 @@ export function designsRouter(designs: DesignsService, options: DesignsRouterOpt
     sendRevisionJson(res, {}, revision.meta, revision.documentJson);
   });
 
-  router.get('/:id/revisions/:number', validate({ params: revisionParamsSchema }), staffOrAssignedBuilder, async (req, res) => {
-    const { id, number } = req.params as unknown as RevisionParams;
+  router.route('/:id/revisions/:number').get(staffOrAssignedBuilder).get(validate({ params: revisionParamsSchema }), async (req, res) => {
+    const { id, number } = req.params;
     const revision = await designs.getRevision(id, number);
     sendRevisionJson(res, {}, revision.meta, revision.documentJson);
   });
 
-  router.get('/:id/revisions/:number/thumbnail', validate({ params: revisionParamsSchema }), staffOrAssignedBuilder, async (req, res) => {
-    const { id, number } = req.params as unknown as RevisionParams;
+  router.route('/:id/revisions/:number/thumbnail').get(staffOrAssignedBuilder).get(validate({ params: revisionParamsSchema }), async (req, res) => {
+    const { id, number } = req.params;
     const png = await designs.getThumbnail(id, number);
     // A revision never changes, so its picture can be cached for good (privately: it needs a session).
     res

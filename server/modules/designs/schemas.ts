@@ -1,8 +1,7 @@
 import { z } from 'zod';
+import { lengthUnitSchema, systemIdSchema } from '../../../src/domain/contracts';
 import { THUMBNAIL_MAX_BYTES, decodeThumbnail } from './thumbnail';
 
-/** Profile systems the catalogue offers (see src/domain/catalogue). */
-export const SYSTEM_IDS = ['inch-1.0', 'inch-1.5', 'metric-20', 'metric-30', 'metric-40', 'metric-45'] as const;
 
 const objectError = {
   error: (issue: { code: string; keys?: string[] }) =>
@@ -28,8 +27,8 @@ export const designNameSchema = z
 export const createDesignBodySchema = z.strictObject(
   {
     name: designNameSchema,
-    systemId: z.enum(SYSTEM_IDS, { error: `Choose a profile system: ${SYSTEM_IDS.join(', ')}` }),
-    units: z.enum(['mm', 'in'], { error: 'Choose mm or in' }).optional(),
+    systemId: systemIdSchema,
+    units: lengthUnitSchema.optional(),
     /** Checked in full by the domain parser in the route (it may migrate older versions). */
     document: z.unknown().optional(),
   },

@@ -1,15 +1,8 @@
+import type { User } from '../../../src/domain/contracts';
 import type { UserModel } from '../../db/models/user';
 
-/** The User shape of the HTTP contract. Never includes the password hash. */
-export interface UserJson {
-  id: number;
-  email: string;
-  displayName: string;
-  role: UserModel['role'];
-  active: boolean;
-  preferences: { units: 'mm' | 'in' };
-  createdAt: string;
-}
+/** The User shape of the HTTP contract (`src/domain/contracts/users.ts`). Never includes the password hash. */
+export type UserJson = User;
 
 export function presentUser(user: UserModel): UserJson {
   const preferences = typeof user.preferences === 'string' ? JSON.parse(user.preferences) : user.preferences;

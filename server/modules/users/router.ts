@@ -1,5 +1,4 @@
 import { Router } from 'express';
-import type { z } from 'zod';
 import { requireRole } from '../../middleware/requireAuth';
 import { validate } from '../../middleware/validate';
 import { presentUser } from './present';
@@ -17,13 +16,13 @@ export function usersRouter(users: UsersService): Router {
   });
 
   router.post('/', validate({ body: createUserBodySchema }), async (req, res) => {
-    const user = await users.create(req.body as z.output<typeof createUserBodySchema>);
+    const user = await users.create(req.body);
     res.status(201).json({ user: presentUser(user) });
   });
 
   router.patch('/:id', validate({ params: userIdParamsSchema, body: patchUserBodySchema }), async (req, res) => {
-    const { id } = req.params as unknown as z.output<typeof userIdParamsSchema>;
-    const user = await users.update(req.user!, id, req.body as z.output<typeof patchUserBodySchema>);
+    const { id } = req.params;
+    const user = await users.update(req.user!, id, req.body);
     res.json({ user: presentUser(user) });
   });
 

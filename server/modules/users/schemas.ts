@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { ROLES } from '../../db/models/user';
+import { ROLES } from '../../../src/domain/contracts';
 
 export const emailSchema = z
   .string({ error: 'Enter an email address' })

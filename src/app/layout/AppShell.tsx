@@ -1,7 +1,7 @@
 import type { ReactNode } from 'react';
 import { Link } from 'react-router';
-import type { User } from '@/features/auth/api/schemas';
-import { homePathFor } from '@/features/auth/roles';
+import type { User } from '@/domain/contracts';
+import { homePathFor } from '@/lib/session/roles';
 import { cn } from '@/lib/cn';
 import { RailNav } from './RailNav';
 import { SignedInPerson } from './SignedInPerson';

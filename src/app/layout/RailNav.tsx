@@ -1,5 +1,5 @@
 import { NavLink } from 'react-router';
-import type { Role } from '@/features/auth/api/schemas';
+import type { Role } from '@/domain/contracts';
 import { cn } from '@/lib/cn';
 import { NAV_ITEMS_BY_ROLE } from './navItems';
 

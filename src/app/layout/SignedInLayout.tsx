@@ -1,5 +1,5 @@
 import { Outlet } from 'react-router';
-import { useCurrentUser } from '@/features/auth/api/getCurrentUser';
+import { useCurrentUser } from '@/lib/session/currentUser';
 import { AppShell } from './AppShell';
 
 /** Route element for signed-in pages (sits inside RequireRole, so the user is known). */

@@ -1,7 +1,7 @@
 import { LogOut } from 'lucide-react';
-import type { User } from '@/features/auth/api/schemas';
+import type { User } from '@/domain/contracts';
 import { useSignOut } from '@/features/auth/api/signOut';
-import { ROLE_LABELS } from '@/features/auth/roles';
+import { ROLE_LABELS } from '@/lib/session/roles';
 import { cn } from '@/lib/cn';
 
 function initialsOf(displayName: string): string {

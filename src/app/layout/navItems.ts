@@ -1,5 +1,5 @@
 import { CircleUser, GraduationCap, Hammer, LayoutGrid, MessagesSquare, Users, type LucideIcon } from 'lucide-react';
-import type { Role } from '@/features/auth/api/schemas';
+import type { Role } from '@/domain/contracts';
 
 export interface NavItem {
   to: string;

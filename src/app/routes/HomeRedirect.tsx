@@ -1,6 +1,6 @@
 import { Navigate } from 'react-router';
-import { useCurrentUser } from '@/features/auth/api/getCurrentUser';
-import { homePathFor } from '@/features/auth/roles';
+import { useCurrentUser } from '@/lib/session/currentUser';
+import { homePathFor } from '@/lib/session/roles';
 
 /** "/" sends each role to its own start page. */
 export function HomeRedirect() {

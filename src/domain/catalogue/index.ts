@@ -21,7 +21,7 @@ import type {
   TNutKind,
   TNutPart,
 } from './types';
-import type { AccessoryKind, JointKind } from '../design/schema';
+import type { AccessoryKind, JointKind } from './partKinds';
 import { buildVariants } from './variants';
 
 export * from './types';

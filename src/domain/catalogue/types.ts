@@ -9,12 +9,13 @@
 import type { ScrewHead, ScrewSize } from './fastenerStandards';
 import type { Alloy, PanelMaterialSpec } from './materials';
 import type { SectionProperties, Point2 } from '../structure/sectionProperties';
-import type { AccessoryKind, JointKind, MachiningKind } from '../design/schema';
+import type { AccessoryKind, JointKind, MachiningKind } from './partKinds';
 
 export type { ScrewHead, ScrewSize } from './fastenerStandards';
 
-export type SystemId = 'inch-1.0' | 'inch-1.5' | 'metric-20' | 'metric-30' | 'metric-40' | 'metric-45';
-export const SYSTEM_IDS: readonly SystemId[] = ['inch-1.0', 'inch-1.5', 'metric-20', 'metric-30', 'metric-40', 'metric-45'];
+/** The one list of profile system ids (the API contract's `systemIdSchema` is built from it). */
+export const SYSTEM_IDS = ['inch-1.0', 'inch-1.5', 'metric-20', 'metric-30', 'metric-40', 'metric-45'] as const;
+export type SystemId = (typeof SYSTEM_IDS)[number];
 
 export type UnitFamily = 'inch' | 'metric';
 export type TNutKind = 'drop-in' | 'slide-in';

@@ -1,10 +1,11 @@
 /** A new, empty design for a profile system, with the system's alloy and demo stock length. */
 import { defaultCatalogue, getSystem } from '../catalogue';
+import type { LengthUnit } from '../units';
 import type { Catalogue } from '../catalogue/types';
 import { CURRENT_SCHEMA_VERSION, designDocumentSchema, type DesignDocument } from './schema';
 
 export function createEmptyDesign(
-  opts: { name: string; systemId: string; units?: 'mm' | 'in' },
+  opts: { name: string; systemId: string; units?: LengthUnit },
   catalogue: Catalogue = defaultCatalogue,
 ): DesignDocument {
   const system = getSystem(catalogue, opts.systemId);

@@ -1,4 +1,16 @@
 import { z } from 'zod';
+import { LENGTH_UNITS } from '../units';
+import {
+  accessoryKindSchema,
+  jointKindSchema,
+  machiningKindSchema,
+  type AccessoryKind,
+  type JointKind,
+  type MachiningKind,
+} from '../catalogue/partKinds';
+
+// The kinds of parts are the catalogue's words; the design document refers to them.
+export { accessoryKindSchema, jointKindSchema, machiningKindSchema, type AccessoryKind, type JointKind, type MachiningKind };
 
 /**
  * The Slotwise design document, version 1.
@@ -37,8 +49,6 @@ export const unitVectorSchema = vec3Schema.refine(
 export const profileEndSchema = z.enum(['start', 'end']);
 export type ProfileEnd = z.infer<typeof profileEndSchema>;
 
-export const machiningKindSchema = z.enum(['access-counterbore', 'access-hole', 'end-tap', 'drill']);
-export type MachiningKind = z.infer<typeof machiningKindSchema>;
 
 export const machiningSchema = z.object({
   id,
@@ -69,15 +79,6 @@ export const profileSchema = z.object({
 });
 export type Profile = z.infer<typeof profileSchema>;
 
-export const jointKindSchema = z.enum([
-  'corner-bracket',
-  'gusset-plate',
-  'concealed-connector',
-  'end-screw',
-  'corner-cube',
-  'hinge',
-]);
-export type JointKind = z.infer<typeof jointKindSchema>;
 
 export const jointMemberSchema = z.object({
   profileId: id,
@@ -143,18 +144,6 @@ export const panelSchema = z.object({
 });
 export type Panel = z.infer<typeof panelSchema>;
 
-export const accessoryKindSchema = z.enum([
-  'leveling-foot',
-  'caster',
-  'end-cap',
-  'door-track',
-  'handle',
-  'latch',
-  'hinge',
-  'gasket',
-  'slot-cover',
-]);
-export type AccessoryKind = z.infer<typeof accessoryKindSchema>;
 
 export const accessorySchema = z.object({
   id,
@@ -245,7 +234,7 @@ export type DesignSettings = z.infer<typeof designSettingsSchema>;
 export const designDocumentSchema = z.object({
   schemaVersion: z.literal(CURRENT_SCHEMA_VERSION),
   name: z.string().trim().min(1, 'A design needs a name').max(120),
-  units: z.enum(['mm', 'in']).default('mm'),
+  units: z.enum(LENGTH_UNITS).default('mm'),
   /** The profile system new profiles use by default, e.g. "metric-40". */
   systemId: id,
   metadata: z

@@ -225,7 +225,7 @@ export function columnGenerationPlan(
     // A few cuts left: exact search packs them better than more rounding.
     if (round > 0 && residual.reduce((sum, count) => sum + count, 0) <= stopAtResidualCuts) break;
     const projectedPool = pool
-      .map((pattern) => active.map((type, row) => Math.min(pattern[type] ?? 0, residual[type])))
+      .map((pattern) => active.map((type) => Math.min(pattern[type] ?? 0, residual[type])))
       .filter((pattern) => pattern.some((count) => count > 0));
     const localPool: number[][] = projectedPool;
     const solution = solveCuttingLp(

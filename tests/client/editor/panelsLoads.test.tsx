@@ -3,6 +3,7 @@ import { afterEach, describe, expect, it } from 'vitest';
 import { cleanup, screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import type { StructureResult } from '@/domain/analysisTypes';
+import type { LengthUnit } from '@/domain/units';
 import { OutputsDock } from '@/features/editor/panels/OutputsDock';
 import { deflectedShape } from '@/features/editor/panels/deflectedShape';
 import { createEditorStore } from '@/features/editor/store/editorStore';
@@ -10,7 +11,7 @@ import { handMadeAnalysis, historyLength, renderWithStore, shelfDesign, storeWit
 
 afterEach(cleanup);
 
-function loadsStore(selection: string[], units: 'mm' | 'in' = 'mm') {
+function loadsStore(selection: string[], units: LengthUnit = 'mm') {
   const store = storeWithAnalysis();
   store.setState({ selection, units });
   return store;

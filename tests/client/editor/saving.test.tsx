@@ -69,7 +69,7 @@ function serve(handler: (method: string, url: string, body: unknown) => Response
 
 describe('saving a design', () => {
   it('posts the design with the revision it was based on and marks it saved', async () => {
-    serve((_method, _url, body) => json(201, { revision: { number: 2, document: (body as { document: unknown }).document, createdAt: new Date().toISOString(), createdBy: person, message: null } }));
+    serve((_method, _url, body) => json(201, { revision: { number: 2, document: (body as { document: unknown }).document, createdAt: new Date().toISOString(), createdBy: person, message: null, thumbnailUrl: null } }));
     const store = setup();
     await userEvent.click(screen.getByRole('button', { name: 'Save now' }));
     await waitFor(() => expect(store.getState().dirty).toBe(false));
@@ -99,7 +99,7 @@ describe('saving a design', () => {
         ? json(409, { error: { code: 'stale_revision', message: 'Someone saved first.', latestRevision: 3 } })
         : json(200, {
             design: { id: 1, name: 'Their version', systemId: 'metric-40', latestRevision: 3, updatedAt: '2026-01-02T00:00:00Z', updatedBy: { id: 3, displayName: 'Noor Okafor' }, thumbnailUrl: null, profileCount: 2 },
-            revision: { number: 3, document: theirs, createdAt: '2026-01-02T00:00:00Z', createdBy: { id: 3, displayName: 'Noor Okafor' }, message: null },
+            revision: { number: 3, document: theirs, createdAt: '2026-01-02T00:00:00Z', createdBy: { id: 3, displayName: 'Noor Okafor' }, message: null, thumbnailUrl: null },
           }),
     );
     const store = setup();

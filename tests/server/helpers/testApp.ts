@@ -7,7 +7,7 @@ import { createApp, stopBackgroundWork } from '../../../server/app';
 import { loadConfig, type AppConfig } from '../../../server/config';
 import { openDatabase, type Database } from '../../../server/db/database';
 import { runMigrations } from '../../../server/db/migrate';
-import { DEMO_ACCOUNTS, DEMO_PASSWORD, seedDemo } from '../../../server/db/seed';
+import { DEMO_ACCOUNTS, DEMO_PASSWORD, seedDemo } from '../../../server/seed';
 import type { Role } from '../../../server/db/models/user';
 import type { Logger } from '../../../server/logger';
 

@@ -13,7 +13,7 @@ const mm = (what: string) =>
 
 export const baseParamsShape = {
   name: z.string().trim().min(1, 'A design needs a name').max(120).optional(),
-  systemId: z.enum(SYSTEM_IDS as [string, ...string[]], { error: `Pick a profile system: ${SYSTEM_IDS.join(', ')}` }),
+  systemId: z.enum(SYSTEM_IDS, { error: `Pick a profile system: ${SYSTEM_IDS.join(', ')}` }),
   /** Rail variant (e.g. the 40 x 80 profile); uprights stay square. */
   variantId: z.string().optional(),
   width: mm('Width'),

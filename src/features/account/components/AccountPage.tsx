@@ -1,6 +1,6 @@
 import { PageFrame, PageHeader } from '@/components/ui';
-import { useCurrentUser } from '@/features/auth/api/getCurrentUser';
-import { ROLE_LABELS } from '@/features/auth/roles';
+import { useCurrentUser } from '@/lib/session/currentUser';
+import { ROLE_LABELS } from '@/lib/session/roles';
 import { ChangePasswordForm } from './ChangePasswordForm';
 import { DisplayNameForm } from './DisplayNameForm';
 import { UnitsPreference } from './UnitsPreference';

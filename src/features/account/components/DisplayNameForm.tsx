@@ -2,9 +2,9 @@ import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { z } from 'zod';
 import { Button, ErrorNotice, TextField } from '@/components/ui';
-import type { User } from '@/features/auth/api/schemas';
+import type { User } from '@/domain/contracts';
 import { applyServerFieldErrors, messageOf } from '@/lib/formErrors';
-import { useUpdateMe } from '../api/updateMe';
+import { useUpdateMe } from '@/lib/session/updateMe';
 import { SavedNote, Section } from './Section';
 
 const displayNameSchema = z.object({

@@ -1,6 +1,6 @@
 import { ErrorNotice } from '@/components/ui';
 import { messageOf } from '@/lib/formErrors';
-import { useUnits, type Units } from '../hooks/useUnits';
+import { useUnits, type Units } from '@/lib/session/useUnits';
 import { Section } from './Section';
 
 const OPTIONS: { value: Units; label: string; example: string }[] = [

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/apiClient';
-import { authKeys } from './authKeys';
-import { userResponseSchema, type User } from './schemas';
+import { authKeys } from '@/lib/session/authKeys';
+import { userResponseSchema, type User } from '@/domain/contracts';
 
 export interface SignInInput {
   email: string;

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useNavigate } from 'react-router';
 import { apiFetch, ApiError } from '@/lib/apiClient';
-import { authKeys } from './authKeys';
+import { authKeys } from '@/lib/session/authKeys';
 
 /** Ends the session; an already-ended session (401) counts as signed out. */
 export async function signOut(): Promise<void> {

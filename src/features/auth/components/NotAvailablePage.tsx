@@ -1,8 +1,8 @@
 import { Link } from 'react-router';
 import { ShieldBan } from 'lucide-react';
 import { EmptyState } from '@/components/ui';
-import type { Role } from '../api/schemas';
-import { ROLE_LABELS, homePathFor } from '../roles';
+import type { Role } from '@/domain/contracts';
+import { ROLE_LABELS, homePathFor } from '@/lib/session/roles';
 
 /** Shown when a signed-in person opens a page their role does not include. */
 export function NotAvailablePage({ role }: { role: Role }) {

@@ -2,8 +2,8 @@ import type { ReactNode } from 'react';
 import { Navigate, Outlet, useLocation } from 'react-router';
 import { PageSkeleton, ErrorNotice } from '@/components/ui';
 import { messageOf } from '@/lib/formErrors';
-import { useCurrentUser } from '../api/getCurrentUser';
-import type { Role } from '../api/schemas';
+import { useCurrentUser } from '@/lib/session/currentUser';
+import type { Role } from '@/domain/contracts';
 import { NotAvailablePage } from './NotAvailablePage';
 
 export interface RequireRoleProps {

@@ -6,7 +6,7 @@ import { Button, ErrorNotice, TextField } from '@/components/ui';
 import { ApiError } from '@/lib/apiClient';
 import { applyServerFieldErrors, messageOf } from '@/lib/formErrors';
 import { useSignIn } from '../api/signIn';
-import type { User } from '../api/schemas';
+import type { User } from '@/domain/contracts';
 
 const signInFormSchema = z.object({
   email: z.string().trim().min(1, 'Enter your email address.').email('Enter an email address like name@example.com.'),

@@ -1,9 +1,9 @@
 import { Navigate, useNavigate, useSearchParams } from 'react-router';
 import { SlotwiseMark } from '@/components/ui/SlotwiseMark';
 import { PageSkeleton } from '@/components/ui';
-import { useCurrentUser } from '../api/getCurrentUser';
-import type { User } from '../api/schemas';
-import { homePathFor, safeNextPath } from '../roles';
+import { useCurrentUser } from '@/lib/session/currentUser';
+import type { User } from '@/domain/contracts';
+import { homePathFor, safeNextPath } from '@/lib/session/roles';
 import { SignInForm } from './SignInForm';
 import { FrameSketch } from './FrameSketch';
 

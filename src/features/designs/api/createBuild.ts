@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/apiClient';
-import { buildDetailSchema } from '@/lib/buildApiSchemas';
+import { buildDetailSchema } from '@/domain/contracts/builds';
 import { designBuildKeys } from './designBuilds';
 
 export interface CreateBuildInput {

@@ -1,18 +1,16 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { z } from 'zod';
 import { apiFetch } from '@/lib/apiClient';
 import { designKeys } from './designKeys';
-import { designSummarySchema, revisionMetaSchema, type DesignSummary } from './schemas';
+import type { LengthUnit } from '@/domain/contracts';
+import { createDesignResponseSchema, type DesignSummary } from './schemas';
 
 export interface CreateDesignInput {
   name: string;
   systemId: string;
-  units?: 'mm' | 'in';
+  units?: LengthUnit;
 }
 
 // The new revision's document is not needed here (the editor loads it), so only its metadata is read.
-const createDesignResponseSchema = z.object({ design: designSummarySchema, revision: revisionMetaSchema });
-
 export async function createDesign(input: CreateDesignInput): Promise<DesignSummary> {
   const { design } = await apiFetch('/api/designs', { method: 'POST', body: input, schema: createDesignResponseSchema });
   return design;

@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { z } from 'zod';
 import { apiFetch } from '@/lib/apiClient';
-import { buildSummarySchema, type BuildSummary } from '@/lib/buildApiSchemas';
+import { buildSummarySchema, type BuildSummary } from '@/domain/contracts/builds';
 
 /** Builds live under the ['builds'] root shared with the workbench, so either side's changes refresh the other. */
 export const designBuildKeys = {

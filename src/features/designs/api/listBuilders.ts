@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { z } from 'zod';
 import { apiFetch } from '@/lib/apiClient';
-import { personRefSchema } from '@/lib/designApiSchemas';
+import { personRefSchema } from '@/domain/contracts/designs';
 import { designBuildKeys } from './designBuilds';
 
 const responseSchema = z.object({ builders: z.array(personRefSchema) });

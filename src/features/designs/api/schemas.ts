@@ -1,16 +1,9 @@
-import { z } from 'zod';
-
-import { designSummarySchema, personRefSchema, type DesignSummary } from '@/lib/designApiSchemas';
-
-export { designSummarySchema, type DesignSummary };
-
-/** A revision without its document (lists, and answers where the document is not needed). */
-export const revisionMetaSchema = z.object({
-  number: z.number(),
-  createdAt: z.string(),
-  createdBy: personRefSchema,
-  message: z.string().nullable(),
-});
-export type RevisionMeta = z.infer<typeof revisionMetaSchema>;
-
-export const designsListResponseSchema = z.object({ designs: z.array(designSummarySchema) });
+/** The designs endpoints answer with the shared contract's shapes (src/domain/contracts/designs.ts). */
+export {
+  createDesignResponseSchema,
+  designSummarySchema,
+  designsListResponseSchema,
+  revisionMetaSchema,
+  type DesignSummary,
+  type RevisionMeta,
+} from '@/domain/contracts';

@@ -1,6 +1,6 @@
 import { Link } from 'react-router';
 import { Hammer, Trash } from 'lucide-react';
-import { BUILD_STATE_LABELS, type BuildSummary } from '@/lib/buildApiSchemas';
+import { BUILD_STATE_LABELS, type BuildSummary } from '@/domain/contracts/builds';
 import { firstName, formatRelativeTime, pluralize } from '@/lib/format';
 import { profileSystemLabel } from '../profileSystems';
 import type { DesignSummary } from '../api/schemas';

@@ -3,7 +3,9 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useNavigate } from 'react-router';
 import { z } from 'zod';
 import { Button, Dialog, DialogActions, ErrorNotice, SelectField, TextField } from '@/components/ui';
-import { useUnits } from '@/features/account/hooks/useUnits';
+import { lengthUnitSchema } from '@/domain/contracts';
+import { LENGTH_UNITS } from '@/domain/units';
+import { useUnits } from '@/lib/session/useUnits';
 import { applyServerFieldErrors, messageOf } from '@/lib/formErrors';
 import { useCreateDesign } from '../api/createDesign';
 import { PROFILE_SYSTEMS } from '../profileSystems';
@@ -11,7 +13,7 @@ import { PROFILE_SYSTEMS } from '../profileSystems';
 const newDesignSchema = z.object({
   name: z.string().trim().min(1, 'Give the design a name.').max(120, 'Keep the name under 120 characters.'),
   systemId: z.string().min(1, 'Choose a profile system.'),
-  units: z.enum(['mm', 'in']),
+  units: lengthUnitSchema,
 });
 type NewDesignValues = z.infer<typeof newDesignSchema>;
 const FIELDS = ['name', 'systemId', 'units'] as const;
@@ -58,7 +60,7 @@ function NewDesignForm({ onCancel }: { onCancel: () => void }) {
       <fieldset className="flex flex-col gap-1.5">
         <legend className="mb-1.5 text-sm font-medium text-ink">Units shown in the editor</legend>
         <div className="flex gap-2">
-          {(['mm', 'in'] as const).map((option) => (
+          {LENGTH_UNITS.map((option) => (
             <label
               key={option}
               className="flex min-h-11 flex-1 cursor-pointer items-center gap-2 rounded-lg border border-paper-line bg-paper-raised px-3 text-sm has-[:checked]:border-accent has-[:checked]:bg-accent-soft has-[:focus-visible]:outline has-[:focus-visible]:outline-3 has-[:focus-visible]:outline-accent"

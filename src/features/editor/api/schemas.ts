@@ -1,18 +1,12 @@
 import { z } from 'zod';
 import { designDocumentSchema } from '@/domain/design/schema';
 
-import { designSummarySchema, personRefSchema } from '@/lib/designApiSchemas';
+import { designSummarySchema, revisionMetaSchema } from '@/domain/contracts';
 
 export const editorDesignSummarySchema = designSummarySchema;
 
 /** A revision with its document, validated against the design-document schema. */
-export const editorRevisionSchema = z.object({
-  number: z.number(),
-  document: designDocumentSchema,
-  createdAt: z.string(),
-  createdBy: personRefSchema,
-  message: z.string().nullable(),
-});
+export const editorRevisionSchema = revisionMetaSchema.extend({ document: designDocumentSchema });
 export type EditorRevision = z.infer<typeof editorRevisionSchema>;
 
 export const editorDesignResponseSchema = z.object({ design: editorDesignSummarySchema, revision: editorRevisionSchema });

@@ -1,5 +1,5 @@
 import { useEffect, useState } from 'react';
-import { useUnits } from '@/features/account/hooks/useUnits';
+import { useUnits } from '@/lib/session/useUnits';
 import { ErrorNotice } from '@/components/ui';
 import { GeneratorDialog } from '../dialogs/GeneratorDialog';
 import { ShortcutSheetDialog } from '../dialogs/ShortcutSheetDialog';

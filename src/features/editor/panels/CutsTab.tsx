@@ -17,6 +17,7 @@ export interface CutsTabProps {
 /** The cut list: interchangeable pieces together, in sections by profile variant. */
 export function CutsTab({ groups, items, units, designName }: CutsTabProps) {
   const pieceLabels = useMemo(() => Object.fromEntries(items.map((item) => [item.id, item.label || item.id])), [items]);
+  // eslint-disable-next-line @typescript-eslint/no-explicit-any -- TanStack Table's value type differs per column
   const columns = useMemo<ColumnDef<CutListGroup, any>[]>(
     () => [
       {

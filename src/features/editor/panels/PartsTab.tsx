@@ -30,6 +30,7 @@ export interface PartsTabProps {
 
 /** The bill of materials, in sections by category, with a totals row and a CSV download. */
 export function PartsTab({ lines, units, designName }: PartsTabProps) {
+  // eslint-disable-next-line @typescript-eslint/no-explicit-any -- TanStack Table's value type differs per column
   const columns = useMemo<ColumnDef<BomLine, any>[]>(
     () => [
       { id: 'code', header: 'Code', accessorKey: 'code', cell: (c) => <code className="text-xs">{c.getValue()}</code> },

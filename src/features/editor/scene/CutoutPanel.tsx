@@ -3,7 +3,7 @@ import { useThree, type ThreeEvent } from '@react-three/fiber';
 import * as THREE from 'three';
 import type { Panel } from '@/domain/design/schema';
 import { useEditorStoreApi } from '../store/editorStore';
-import { CLICK_SLOP_PX } from './PartBatch';
+import { CLICK_SLOP_PX } from './useSelectOnClick';
 import { panelBasis } from './sceneLayout';
 import { useScene } from './sceneContext';
 

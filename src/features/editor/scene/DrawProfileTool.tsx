@@ -8,7 +8,7 @@ import { drawTarget } from '../snapping/drawTarget';
 import { snapPoint } from '../snapping/snap';
 import { gridStepsFor, unitIncrement } from '../snapping/steps';
 import type { Vec3 } from '@/domain/geometry';
-import { CLICK_SLOP_PX } from './PartBatch';
+import { CLICK_SLOP_PX } from './useSelectOnClick';
 import { mmPerPixel, pointerRay } from './pointerRay';
 import { profileMatrix } from './sceneLayout';
 import { useScene } from './sceneContext';

@@ -13,7 +13,7 @@ import { MoveGizmo } from './MoveGizmo';
 import { OpeningTargets } from './OpeningTargets';
 import { OrientationCube } from './OrientationCube';
 import { OrientationCubeSync } from './OrientationCubeSync';
-import { CLICK_SLOP_PX } from './PartBatch';
+import { CLICK_SLOP_PX } from './useSelectOnClick';
 import { renderModeFromUrl } from './renderMode';
 import { SceneContext, type SceneShared } from './sceneContext';
 import { SceneLights } from './SceneLights';

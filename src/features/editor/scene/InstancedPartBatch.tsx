@@ -2,7 +2,7 @@ import { useEffect, useLayoutEffect, useMemo } from 'react';
 import { useThree } from '@react-three/fiber';
 import * as THREE from 'three';
 import { useEditorStoreApi, type EditorState } from '../store/editorStore';
-import type { PartBatchProps } from './PartBatch';
+import type { PartBatchProps } from './partBatchProps';
 import { colourFor, worstSeverityByPart } from './partHighlight';
 import { useScene } from './sceneContext';
 import { useSelectOnClick } from './useSelectOnClick';

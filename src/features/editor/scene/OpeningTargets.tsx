@@ -2,7 +2,7 @@ import { useMemo } from 'react';
 import type { ThreeEvent } from '@react-three/fiber';
 import { findOpenings } from '@/domain/design/openings';
 import { useEditorStore, useEditorStoreApi } from '../store/editorStore';
-import { CLICK_SLOP_PX } from './PartBatch';
+import { CLICK_SLOP_PX } from './useSelectOnClick';
 import { useScene } from './sceneContext';
 
 /**

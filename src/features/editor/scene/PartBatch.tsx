@@ -1,21 +1,10 @@
-import type * as THREE from 'three';
-import type { PartBatchData } from './batchCollector';
 import { InstancedPartBatch } from './InstancedPartBatch';
 import { PerPartBatch } from './PerPartBatch';
+import type { PartBatchProps } from './partBatchProps';
 import { useScene } from './sceneContext';
 
-export interface PartBatchProps {
-  /** The instances to draw: matrices and the part id of each (required). */
-  data: PartBatchData;
-  /** Shared geometry of every instance, owned by SceneResources (required). */
-  geometry: THREE.BufferGeometry;
-  /** Shared material of every instance, owned by SceneResources (required). */
-  material: THREE.Material;
-  /** Whether clicks and hover pick these parts (default true). */
-  pickable?: boolean;
-}
-
-export { CLICK_SLOP_PX } from './useSelectOnClick';
+// The props live in their own file so the batch components need not import PartBatch back.
+export type { PartBatchProps } from './partBatchProps';
 
 /**
  * One batch of parts sharing a geometry and a material, drawn as ONE InstancedMesh written

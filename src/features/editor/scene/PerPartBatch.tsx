@@ -1,7 +1,7 @@
 import { useEffect, useLayoutEffect, useMemo } from 'react';
 import { useThree } from '@react-three/fiber';
 import * as THREE from 'three';
-import type { PartBatchProps } from './PartBatch';
+import type { PartBatchProps } from './partBatchProps';
 import { useScene } from './sceneContext';
 import { useSelectOnClick } from './useSelectOnClick';
 

@@ -2,7 +2,7 @@
  * Collects part placements into batches: one batch per (geometry, material), later drawn as one
  * InstancedMesh. Pure data plus three.js maths, so layouts are testable in Node.
  */
-import * as THREE from 'three';
+import type * as THREE from 'three';
 import type { HardwareShape } from './hardwareGeometry';
 import type { SurfaceKey } from './sceneResources';
 

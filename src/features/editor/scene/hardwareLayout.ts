@@ -21,10 +21,10 @@ import {
   type ReadonlyVec3,
   type Vec3,
 } from '@/domain/geometry';
-import { BatchCollector, basisMatrix, type BatchRole } from './batchCollector';
+import { type BatchCollector, basisMatrix, type BatchRole } from './batchCollector';
 import { BRACKET_LEG_SHARE, type HardwareShape } from './hardwareGeometry';
 import type { SurfaceKey } from './sceneResources';
-import { perpendicular, type PartAnchor } from './sceneLayout';
+import { perpendicular, type PartAnchor } from './sceneVectors';
 
 type Variants = Map<string, ProfileVariant>;
 type Profiles = Map<string, Profile>;

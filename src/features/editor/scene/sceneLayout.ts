@@ -8,7 +8,6 @@ import type { DesignDocument, Panel, Profile } from '@/domain/design/schema';
 import {
   addScaled,
   cross,
-  dot,
   faceNormal,
   panelAxes,
   panelBox,
@@ -18,20 +17,15 @@ import {
   scale,
   sectionAxes,
   sectionHalfExtentAlong,
-  sub,
-  type ReadonlyVec3,
   type Vec3,
 } from '@/domain/geometry';
 import { BatchCollector, basisMatrix, type PartBatchData } from './batchCollector';
 import { layoutAccessories, layoutJoints } from './hardwareLayout';
+import { unitAxis, type PartAnchor } from './sceneVectors';
 
-/** Where a part is, roughly: a centre and a radius, for badges and camera framing (mm). */
-export interface PartAnchor {
-  center: Vec3;
-  radius: number;
-  /** Tight world box when known (profiles), mm; otherwise the sphere's box is used. */
-  box?: { min: Vec3; max: Vec3 };
-}
+// Shared by hardwareLayout too; they live in sceneVectors so the two layouts do not import each other.
+export { perpendicular, unitAxis, type PartAnchor } from './sceneVectors';
+
 
 export interface SceneLayout {
   batches: PartBatchData[];
@@ -132,16 +126,4 @@ function layoutMachining(collector: BatchCollector, profile: Profile, variant: P
     const y = cross(normal, axes.axis);
     collector.add('machining', { kind: 'hardware', shape: 'disc' }, { kind: 'surface', key: 'machining' }, profile.id, basisMatrix(m, scale(axes.axis, diameter), scale(y, diameter), normal, center));
   }
-}
-
-export function unitAxis(i: 0 | 1 | 2): Vec3 {
-  return i === 0 ? [1, 0, 0] : i === 1 ? [0, 1, 0] : [0, 0, 1];
-}
-
-/** Any unit vector perpendicular to `a`. */
-export function perpendicular(a: ReadonlyVec3): Vec3 {
-  const helper: Vec3 = Math.abs(a[1]) < 0.9 ? [0, 1, 0] : [1, 0, 0];
-  const p = sub(helper, scale(a, dot(helper, a)));
-  const l = Math.hypot(p[0], p[1], p[2]);
-  return [p[0] / l, p[1] / l, p[2] / l];
 }

@@ -2,13 +2,14 @@ import type { StoreApi } from 'zustand';
 import type { TemporalState } from 'zundo';
 import type { DesignAnalysis } from '@/domain/analysisTypes';
 import type { DesignDocument } from '@/domain/design/schema';
+import type { LengthUnit } from '@/domain/units';
 import type { EditorCommand } from '../commands/EditorCommand';
 
 export type EditorTool = 'select' | 'draw-profile' | 'fill-opening' | 'measure';
 export type EditorView = 'front' | 'top' | 'side' | 'iso';
 export type SelectionMode = 'replace' | 'add' | 'toggle';
 export type AnalysisStatus = 'idle' | 'running' | 'ready' | 'error';
-export type DisplayUnits = 'mm' | 'in';
+export type DisplayUnits = LengthUnit;
 
 export interface LoadMeta {
   designId: number | null;

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/apiClient';
-import { userResponseSchema, type Role, type User } from '@/features/auth/api/schemas';
+import { userResponseSchema, type Role, type User } from '@/domain/contracts';
 import { peopleKeys } from './peopleKeys';
 
 export interface CreateUserInput {

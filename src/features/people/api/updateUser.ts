@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/apiClient';
-import { authKeys } from '@/features/auth/api/authKeys';
-import { userResponseSchema, type Role, type User } from '@/features/auth/api/schemas';
+import { authKeys } from '@/lib/session/authKeys';
+import { userResponseSchema, type Role, type User } from '@/domain/contracts';
 import { peopleKeys } from './peopleKeys';
 
 export interface UpdateUserInput {

@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { Button, ConfirmDialog } from '@/components/ui';
-import type { User } from '@/features/auth/api/schemas';
+import type { User } from '@/domain/contracts';
 import { messageOf } from '@/lib/formErrors';
 import { useUpdateUser } from '../api/updateUser';
 

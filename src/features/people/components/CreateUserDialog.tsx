@@ -2,7 +2,7 @@ import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { z } from 'zod';
 import { Button, Dialog, DialogActions, ErrorNotice, SelectField, TextField } from '@/components/ui';
-import { roleSchema } from '@/features/auth/api/schemas';
+import { roleSchema } from '@/domain/contracts';
 import { ApiError } from '@/lib/apiClient';
 import { applyServerFieldErrors, messageOf } from '@/lib/formErrors';
 import { useCreateUser } from '../api/createUser';

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { UserPlus } from 'lucide-react';
 import { Button, ErrorNotice, PageFrame, PageHeader, Skeleton } from '@/components/ui';
-import { useCurrentUser } from '@/features/auth/api/getCurrentUser';
+import { useCurrentUser } from '@/lib/session/currentUser';
 import { messageOf } from '@/lib/formErrors';
 import { useUsers } from '../api/listUsers';
 import { CreateUserDialog } from './CreateUserDialog';

@@ -1,5 +1,5 @@
 import { controlClasses } from '@/components/ui';
-import type { Role, User } from '@/features/auth/api/schemas';
+import type { Role, User } from '@/domain/contracts';
 import { cn } from '@/lib/cn';
 import { messageOf } from '@/lib/formErrors';
 import { useUpdateUser } from '../api/updateUser';

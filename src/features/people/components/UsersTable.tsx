@@ -1,7 +1,7 @@
 import { useMemo, useState } from 'react';
 import { createColumnHelper, flexRender, getCoreRowModel, getSortedRowModel, useReactTable, type SortingState } from '@tanstack/react-table';
-import type { User } from '@/features/auth/api/schemas';
-import { ROLE_LABELS } from '@/features/auth/roles';
+import type { User } from '@/domain/contracts';
+import { ROLE_LABELS } from '@/lib/session/roles';
 import { formatDate } from '@/lib/format';
 import { ActiveToggleCell } from './ActiveToggleCell';
 import { RoleCell } from './RoleCell';

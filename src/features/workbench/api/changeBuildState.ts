@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/apiClient';
-import { buildDetailSchema, type BuildState } from '@/lib/buildApiSchemas';
+import { buildDetailSchema, type BuildState } from '@/domain/contracts/builds';
 import { buildKeys } from './buildKeys';
 
 /** POST /api/builds/:id/state — records the change with who and when. */

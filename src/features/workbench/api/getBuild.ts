@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/apiClient';
-import { buildDetailSchema, type BuildDetail } from '@/lib/buildApiSchemas';
+import { buildDetailSchema, type BuildDetail } from '@/domain/contracts/builds';
 import { buildKeys } from './buildKeys';
 
 /** GET /api/builds/:id — the build, its state history and every progress record on its revision. */

@@ -1,6 +1,6 @@
 import { apiFetch } from '@/lib/apiClient';
-import { tickResponseSchema, type ProgressKind } from '@/lib/buildApiSchemas';
-import { z } from 'zod';
+import { tickResponseSchema, type ProgressKind } from '@/domain/contracts/builds';
+import type { z } from 'zod';
 
 export interface TickInput {
   clientId: string;

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { CloudDownload } from 'lucide-react';
 import { Button } from '@/components/ui';
-import type { BuildDetail } from '@/lib/buildApiSchemas';
+import type { BuildDetail } from '@/domain/contracts/builds';
 
 const CACHE = 'slotwise-builds';
 

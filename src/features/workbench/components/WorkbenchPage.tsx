@@ -1,7 +1,7 @@
 import { Link } from 'react-router';
 import { CalendarClock, Hammer } from 'lucide-react';
 import { EmptyState, ErrorNotice, PageFrame, PageHeader, Skeleton } from '@/components/ui';
-import { BUILD_STATE_LABELS, BUILD_STATE_VALUES, type BuildSummary } from '@/lib/buildApiSchemas';
+import { BUILD_STATE_LABELS, BUILD_STATE_VALUES, type BuildSummary } from '@/domain/contracts/builds';
 import { pluralize } from '@/lib/format';
 import { useMyBuilds } from '../api/listMyBuilds';
 

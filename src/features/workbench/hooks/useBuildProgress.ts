@@ -1,6 +1,6 @@
 import { useCallback, useEffect, useMemo, useState } from 'react';
 import { useQueryClient } from '@tanstack/react-query';
-import type { BuildDetail, BuildNotice, ProgressKind } from '@/lib/buildApiSchemas';
+import type { BuildDetail, BuildNotice, ProgressKind } from '@/domain/contracts/builds';
 import { buildKeys } from '../api/buildKeys';
 import type { QueuedTick } from '../offline/outbox';
 import { tickOutbox } from '../offline/tickOutbox';

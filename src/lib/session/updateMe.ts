@@ -1,11 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/apiClient';
-import { authKeys } from '@/features/auth/api/authKeys';
-import { userResponseSchema, type Units, type User } from '@/features/auth/api/schemas';
+import { authKeys } from './authKeys';
+import { userResponseSchema, type LengthUnit, type User } from '@/domain/contracts';
 
 export interface UpdateMeInput {
   displayName?: string;
-  preferences?: { units: Units };
+  preferences?: { units: LengthUnit };
 }
 
 export async function updateMe(input: UpdateMeInput): Promise<User> {

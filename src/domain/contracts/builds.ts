@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { personRefSchema } from './designApiSchemas';
+import { personRefSchema } from './designs';
 
 /** Response shapes of /api/builds, shared by the workbench and the designs list (see docs/api.md). */
 export const BUILD_STATE_VALUES = ['planned', 'cutting', 'assembling', 'done', 'on-hold'] as const;

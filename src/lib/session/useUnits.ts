@@ -1,9 +1,9 @@
 import { useCallback } from 'react';
-import { useCurrentUser } from '@/features/auth/api/getCurrentUser';
-import type { Units } from '@/features/auth/api/schemas';
-import { useUpdateMe } from '../api/updateMe';
+import { useCurrentUser } from './currentUser';
+import type { LengthUnit } from '@/domain/contracts';
+import { useUpdateMe } from './updateMe';
 
-export type { Units };
+export type Units = LengthUnit;
 
 /**
  * The signed-in person's length units ('mm' | 'in'), backed by their saved preferences.

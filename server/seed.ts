@@ -1,8 +1,8 @@
-import type { Database } from './database';
-import type { Role } from './models/user';
-import { loadDemoDesigns } from '../domainBridge';
-import { createPasswords, DEFAULT_PASSWORD_COST } from '../modules/auth/passwords';
-import { createDesignsService } from '../modules/designs/service';
+import type { Database } from './db/database';
+import type { Role } from './db/models/user';
+import { loadDemoDesigns } from './domainBridge';
+import { createPasswords, DEFAULT_PASSWORD_COST } from './modules/auth/passwords';
+import { createDesignsService } from './modules/designs/service';
 
 /** The invented demo shop, Harbor Lane Fabrication. Every account shares one demo password. */
 export const DEMO_PASSWORD = 'slotwise-demo-2026';

@@ -1,4 +1,4 @@
-import type { Role } from './api/schemas';
+import type { Role } from '@/domain/contracts';
 
 export const ROLE_LABELS: Record<Role, string> = {
   owner: 'Owner',

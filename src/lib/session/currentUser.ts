@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiFetch, ApiError } from '@/lib/apiClient';
 import { authKeys } from './authKeys';
-import { userResponseSchema, type User } from './schemas';
+import { userResponseSchema, type User } from '@/domain/contracts';
 
 /** The signed-in person, or null for an anonymous visitor (401 is an answer here, not a failure). */
 export async function getCurrentUser(signal?: AbortSignal): Promise<User | null> {

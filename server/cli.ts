@@ -1,11 +1,11 @@
-// Database chores: `tsx server/db/cli.ts migrate | seed | backup [file]`.
-import { loadConfig } from '../config';
-import { backupDatabase } from './backup';
-import { openDatabase } from './database';
-import { runMigrations } from './migrate';
+// Database chores: `tsx server/cli.ts migrate | seed | backup [file]`.
+import { loadConfig } from './config';
+import { backupDatabase } from './db/backup';
+import { openDatabase } from './db/database';
+import { runMigrations } from './db/migrate';
 import { seedDemo } from './seed';
 
-const USAGE = 'Usage: tsx server/db/cli.ts migrate | seed | backup [file]';
+const USAGE = 'Usage: tsx server/cli.ts migrate | seed | backup [file]';
 
 async function main(): Promise<number> {
   const [command, argument] = process.argv.slice(2);
