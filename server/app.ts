@@ -15,6 +15,8 @@ import { authRouter } from './modules/auth/router';
 import { createAuthService } from './modules/auth/service';
 import { createSessionMiddleware, type SessionStore } from './modules/auth/sessionMiddleware';
 import { DEFAULT_SIGN_IN_RATE_LIMIT, signInRateLimiter, type SignInRateLimit } from './modules/auth/signInRateLimit';
+import { buildsRouter } from './modules/builds/router';
+import { createBuildsService } from './modules/builds/service';
 import { designsRouter } from './modules/designs/router';
 import { createDesignsService } from './modules/designs/service';
 import { healthRouter } from './modules/health/router';
@@ -88,7 +90,9 @@ export function createApp(deps: AppDependencies): Express {
 
   app.use('/api/auth', authRouter({ auth, passport, signInLimiter: signInRateLimiter(deps.rateLimit ?? DEFAULT_SIGN_IN_RATE_LIMIT) }));
   app.use('/api/users', usersRouter(createUsersService(db, passwords)));
-  app.use('/api/designs', designsRouter(createDesignsService(db)));
+  const builds = createBuildsService(db);
+  app.use('/api/designs', designsRouter(createDesignsService(db), { builderMayRead: builds.builderMayRead }));
+  app.use('/api/builds', buildsRouter(builds));
   app.use('/api/analysis', analysisRouter(analysisPool, config.analysis));
   app.use('/api', apiNotFound);
 

@@ -18,6 +18,9 @@ const ViewerRoute = lazyPage(() => import('@/features/viewer/ViewerRoute'), <Edi
 const PeoplePage = lazyPage(() => import('@/features/people/components/PeoplePage'), pageSkeleton);
 const AccountPage = lazyPage(() => import('@/features/account/components/AccountPage'), pageSkeleton);
 const WorkbenchPage = lazyPage(() => import('@/features/workbench/components/WorkbenchPage'), pageSkeleton);
+const BuildPage = lazyPage(() => import('@/features/workbench/components/BuildPage'), pageSkeleton);
+const PrintInstructionsPage = lazyPage(() => import('@/features/workbench/components/PrintInstructionsPage'), pageSkeleton);
+const PieceLabelsPage = lazyPage(() => import('@/features/workbench/components/PieceLabelsPage'), pageSkeleton);
 const ReviewsPage = lazyPage(() => import('@/features/reviews/components/ReviewsPage'), pageSkeleton);
 const ClassesPage = lazyPage(() => import('@/features/classes/components/ClassesPage'), pageSkeleton);
 const NotFoundPage = lazyPage(() => import('./routes/NotFoundPage'), pageSkeleton);
@@ -43,11 +46,23 @@ export const routes: RouteObject[] = [
                   { path: 'people', element: <RequireRole roles={['owner']} />, children: [{ index: true, Component: PeoplePage }] },
                   { path: 'account', Component: AccountPage },
                   { path: 'workbench', element: <RequireRole roles={['builder']} />, children: [{ index: true, Component: WorkbenchPage }] },
+                  // Builders work on a build; owners and designers open it to watch progress (their ticks are refused).
+                  { path: 'workbench/builds/:buildId', element: <RequireRole roles={['builder', 'owner', 'designer']} />, children: [{ index: true, Component: BuildPage }] },
                   { path: 'reviews', element: <RequireRole roles={['customer']} />, children: [{ index: true, Component: ReviewsPage }] },
                   { path: 'classes', element: <RequireRole roles={['instructor']} />, children: [{ index: true, Component: ClassesPage }] },
                   { path: '*', Component: NotFoundPage },
                 ],
               },
+            ],
+          },
+          {
+            // Printable pages: no navigation around them.
+            path: 'workbench/builds/:buildId',
+            element: <RequireRole roles={['builder', 'owner', 'designer']} />,
+            errorElement: <RouteErrorBoundary />,
+            children: [
+              { path: 'print', Component: PrintInstructionsPage },
+              { path: 'labels', Component: PieceLabelsPage },
             ],
           },
           {

@@ -20,7 +20,7 @@ const signedInAs = (role: Parameters<typeof makeUser>[0]) => mockApi({ 'GET /api
 
 describe('the app route table', () => {
   it("sends the builder from / to the workbench and says honestly that nothing is assigned yet", async () => {
-    signedInAs('builder');
+    mockApi({ 'GET /api/auth/me': { status: 200, body: { user: makeUser('builder') } }, 'GET /api/builds': { status: 200, body: { builds: [] } } });
     const { router } = renderRoutes(routes, '/');
     expect(await screen.findByRole('heading', { name: 'No builds assigned to you yet' }, { timeout: 10_000 })).toBeInTheDocument();
     expect(router.state.location.pathname).toBe('/workbench');

@@ -4,6 +4,8 @@ import * as createUsers from './0001-create-users';
 import * as createSessions from './0002-create-sessions';
 import * as createDesigns from './0003-create-designs';
 import * as designRevisionCounts from './0004-design-revision-counts';
+import * as createBuilds from './0020-create-builds';
+import * as createBuildProgress from './0021-create-build-progress';
 
 /**
  * Every migration, oldest first. Listed by import rather than found by glob so the same list works
@@ -14,4 +16,6 @@ export const migrations: RunnableMigration<QueryInterface>[] = [
   { name: '0002-create-sessions', ...createSessions },
   { name: '0003-create-designs', ...createDesigns },
   { name: '0004-design-revision-counts', ...designRevisionCounts },
+  { name: '0020-create-builds', ...createBuilds },
+  { name: '0021-create-build-progress', ...createBuildProgress },
 ];

@@ -1,4 +1,5 @@
 import type { Sequelize } from 'sequelize';
+import { initBuildModels } from './build';
 import { initDesignModel } from './design';
 import { initDesignRevisionModel } from './designRevision';
 import { initSessionModel } from './session';
@@ -9,7 +10,8 @@ export function defineModels(sequelize: Sequelize) {
   const Design = initDesignModel(sequelize);
   const DesignRevision = initDesignRevisionModel(sequelize);
   const Session = initSessionModel(sequelize);
-  return { User, Design, DesignRevision, Session };
+  const { Build, BuildAssignee, BuildStateChange, BuildProgress } = initBuildModels(sequelize);
+  return { User, Design, DesignRevision, Session, Build, BuildAssignee, BuildStateChange, BuildProgress };
 }
 
 export type Models = ReturnType<typeof defineModels>;
@@ -17,3 +19,4 @@ export { UserModel, ROLES, type Role, type Units, type UserPreferences } from '.
 export { DesignModel } from './design';
 export { DesignRevisionModel } from './designRevision';
 export { SessionModel } from './session';
+export { BuildModel, BUILD_STATES, PROGRESS_KINDS, type BuildState, type ProgressKind } from './build';

@@ -1,22 +1,37 @@
-import { Router } from 'express';
+import { Router, type RequestHandler } from 'express';
 import { createEmptyDesignDocument } from '../../domainBridge';
-import { requireRole } from '../../middleware/requireAuth';
+import type { UserModel } from '../../db/models/user';
+import { requireAuth, requireRole } from '../../middleware/requireAuth';
 import { validate } from '../../middleware/validate';
 import { requireValidDocument } from './documentCheck';
 import { sendRevisionJson } from './revisionJson';
 import { createDesignBodySchema, designIdParamsSchema, revisionParamsSchema, saveRevisionBodySchema } from './schemas';
 import type { DesignsService } from './service';
 
-/** /api/designs — designs and their revisions; owners and designers. */
-export function designsRouter(designs: DesignsService): Router {
-  const router = Router();
-  router.use(requireRole('owner', 'designer'));
+export interface DesignsRouterOptions {
+  /** Whether a builder may read a revision (they are assigned to a build of it). */
+  builderMayRead?: (user: UserModel, designId: number, revision: number) => Promise<boolean>;
+}
 
-  router.get('/', async (_req, res) => {
+/**
+ * /api/designs — designs and their revisions; owners and designers. A builder assigned to a build
+ * may read that build's revision and its picture, and nothing else here.
+ */
+export function designsRouter(designs: DesignsService, options: DesignsRouterOptions = {}): Router {
+  const router = Router();
+  const staff = requireRole('owner', 'designer');
+  const staffOrAssignedBuilder: RequestHandler = async (req, res, next) => {
+    const params = revisionParamsSchema.safeParse(req.params);
+    if (req.user?.role === 'builder' && params.success && options.builderMayRead && (await options.builderMayRead(req.user, params.data.id, params.data.number))) return next();
+    staff(req, res, next);
+  };
+  router.use(requireAuth);
+
+  router.route('/').get(staff).get(async (_req, res) => {
     res.json({ designs: await designs.list() });
   });
 
-  router.post('/', validate({ body: createDesignBodySchema }), async (req, res) => {
+  router.route('/').post(staff).post(validate({ body: createDesignBodySchema }), async (req, res) => {
     const body = req.body;
     const document =
       body.document === undefined
@@ -27,24 +42,24 @@ export function designsRouter(designs: DesignsService): Router {
     res.status(201).json(await designs.create(req.user!, named));
   });
 
-  router.get('/:id', validate({ params: designIdParamsSchema }), async (req, res) => {
+  router.route('/:id').get(staff).get(validate({ params: designIdParamsSchema }), async (req, res) => {
     const { id } = req.params;
     const { design, revision } = await designs.getLatest(id);
     sendRevisionJson(res, { design }, revision.meta, revision.documentJson);
   });
 
-  router.delete('/:id', validate({ params: designIdParamsSchema }), async (req, res) => {
+  router.route('/:id').delete(staff).delete(validate({ params: designIdParamsSchema }), async (req, res) => {
     const { id } = req.params;
     await designs.archive(id, req.user!);
     res.status(204).end();
   });
 
-  router.get('/:id/revisions', validate({ params: designIdParamsSchema }), async (req, res) => {
+  router.route('/:id/revisions').get(staff).get(validate({ params: designIdParamsSchema }), async (req, res) => {
     const { id } = req.params;
     res.json({ revisions: await designs.listRevisions(id) });
   });
 
-  router.post('/:id/revisions', validate({ params: designIdParamsSchema, body: saveRevisionBodySchema }), async (req, res) => {
+  router.route('/:id/revisions').post(staff).post(validate({ params: designIdParamsSchema, body: saveRevisionBodySchema }), async (req, res) => {
     const { id } = req.params;
     const body = req.body;
     const document = await requireValidDocument(body.document);
@@ -57,13 +72,13 @@ export function designsRouter(designs: DesignsService): Router {
     res.status(201).json({ revision: { ...revision.meta, profileCount: document.profiles.length } });
   });
 
-  router.get('/:id/revisions/:number', validate({ params: revisionParamsSchema }), async (req, res) => {
+  router.route('/:id/revisions/:number').get(staffOrAssignedBuilder).get(validate({ params: revisionParamsSchema }), async (req, res) => {
     const { id, number } = req.params;
     const revision = await designs.getRevision(id, number);
     sendRevisionJson(res, {}, revision.meta, revision.documentJson);
   });
 
-  router.get('/:id/revisions/:number/thumbnail', validate({ params: revisionParamsSchema }), async (req, res) => {
+  router.route('/:id/revisions/:number/thumbnail').get(staffOrAssignedBuilder).get(validate({ params: revisionParamsSchema }), async (req, res) => {
     const { id, number } = req.params;
     const png = await designs.getThumbnail(id, number);
     // A revision never changes, so its picture can be cached for good (privately: it needs a session).

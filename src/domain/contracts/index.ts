@@ -7,3 +7,4 @@ export * from './units';
 export * from './systems';
 export * from './users';
 export * from './designs';
+export * from './builds';

@@ -1,5 +1,6 @@
 import { Link } from 'react-router';
-import { Trash } from 'lucide-react';
+import { Hammer, Trash } from 'lucide-react';
+import { BUILD_STATE_LABELS, type BuildSummary } from '@/domain/contracts/builds';
 import { firstName, formatRelativeTime, pluralize } from '@/lib/format';
 import { profileSystemLabel } from '../profileSystems';
 import type { DesignSummary } from '../api/schemas';
@@ -8,10 +9,13 @@ import { DesignThumbnail } from './DesignThumbnail';
 export interface DesignCardProps {
   design: DesignSummary;
   onDelete: (design: DesignSummary) => void;
+  /** Builds of this design, with their progress. */
+  builds?: BuildSummary[];
+  onAssignBuild?: (design: DesignSummary) => void;
 }
 
 /** One design in the list: picture and name open the editor; the bin asks before deleting. */
-export function DesignCard({ design, onDelete }: DesignCardProps) {
+export function DesignCard({ design, onDelete, builds = [], onAssignBuild }: DesignCardProps) {
   return (
     // The ring goes on the whole card when its link has keyboard focus (the title itself is clipped by truncation).
     <li className="group relative flex flex-col overflow-hidden rounded-card border border-paper-line bg-paper-raised transition-shadow hover:shadow-md has-[a:focus-visible]:outline-3 has-[a:focus-visible]:outline-offset-2 has-[a:focus-visible]:outline-[#0b7a75] has-[a:focus-visible]:outline-solid">
@@ -45,6 +49,27 @@ export function DesignCard({ design, onDelete }: DesignCardProps) {
           <Trash aria-hidden className="size-5" />
         </button>
       </div>
+      {onAssignBuild || builds.length > 0 ? (
+        <div className="relative z-10 flex flex-col gap-2 border-t border-paper-line px-4 py-3">
+          {builds.length > 0 ? (
+            <ul aria-label={`Builds of ${design.name}`} className="flex flex-col gap-1 text-sm">
+              {builds.map((build) => (
+                <li key={build.id} data-testid="design-build-progress">
+                  <Link to={`/workbench/builds/${build.id}`} className="underline-offset-2 hover:underline focus-ring">
+                    Build {build.id} · {BUILD_STATE_LABELS[build.state]} · {pluralize(build.progress.cut, 'piece')} cut · {pluralize(build.progress.step, 'step')} done
+                  </Link>
+                  <span className="text-ink-muted"> · {build.builders.map((person) => firstName(person.displayName)).join(', ')}</span>
+                </li>
+              ))}
+            </ul>
+          ) : null}
+          {onAssignBuild ? (
+            <button type="button" onClick={() => onAssignBuild(design)} className="inline-flex min-h-11 items-center gap-2 self-start rounded-lg px-2 text-sm font-medium text-ink-soft hover:bg-paper-sunk hover:text-ink focus-ring">
+              <Hammer aria-hidden className="size-4" /> Assign build
+            </button>
+          ) : null}
+        </div>
+      ) : null}
     </li>
   );
 }

@@ -2,9 +2,11 @@ import { useState } from 'react';
 import { Frame, Plus } from 'lucide-react';
 import { Button, EmptyState, ErrorNotice, PageFrame, PageHeader, Skeleton } from '@/components/ui';
 import { messageOf } from '@/lib/formErrors';
+import { useAllBuilds } from '../api/designBuilds';
 import { useDesigns } from '../api/listDesigns';
 import type { DesignSummary } from '../api/schemas';
 import { DesignCard } from './DesignCard';
+import { AssignBuildDialog } from './AssignBuildDialog';
 import { DeleteDesignDialog } from './DeleteDesignDialog';
 import { NewDesignDialog } from './NewDesignDialog';
 
@@ -12,6 +14,8 @@ export default function DesignsPage() {
   const designs = useDesigns();
   const [creating, setCreating] = useState(false);
   const [deleting, setDeleting] = useState<DesignSummary | null>(null);
+  const [assigning, setAssigning] = useState<DesignSummary | null>(null);
+  const builds = useAllBuilds();
   const newDesignButton = (
     <Button variant="primary" icon={<Plus aria-hidden className="size-4" />} onClick={() => setCreating(true)}>
       New design
@@ -32,12 +36,19 @@ export default function DesignsPage() {
       ) : (
         <ul aria-label="Designs" className="grid grid-cols-1 gap-4 sm:grid-cols-2 xl:grid-cols-3">
           {sortByUpdated(designs.data).map((design) => (
-            <DesignCard key={design.id} design={design} onDelete={setDeleting} />
+            <DesignCard
+              key={design.id}
+              design={design}
+              onDelete={setDeleting}
+              builds={builds.data?.filter((build) => build.designId === design.id)}
+              onAssignBuild={setAssigning}
+            />
           ))}
         </ul>
       )}
       <NewDesignDialog open={creating} onClose={() => setCreating(false)} />
       <DeleteDesignDialog design={deleting} onClose={() => setDeleting(null)} />
+      <AssignBuildDialog design={assigning} onClose={() => setAssigning(null)} />
     </PageFrame>
   );
 }

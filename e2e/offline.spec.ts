@@ -1,0 +1,39 @@
+import { expect, test } from '@playwright/test';
+import { signIn } from './helpers';
+
+const CLIENT = { 'X-Slotwise-Client': '1' };
+
+test('a step ticked offline waits on the device and reaches the server when the connection returns', async ({ browser }) => {
+  const designerContext = await browser.newContext();
+  const designer = await designerContext.newPage();
+  await signIn(designer, 'designer');
+  const designs = (await (await designer.request.get('/api/designs')).json()).designs as { id: number; name: string }[];
+  const enclosure = designs.find((design) => design.name === 'Two-level printer enclosure')!;
+  const builders = (await (await designer.request.get('/api/builds/builders')).json()).builders as { id: number; displayName: string }[];
+  const builderId = builders.find((person) => person.displayName === 'Ines Varga')!.id;
+  const created = await designer.request.post('/api/builds', { headers: CLIENT, data: { designId: enclosure.id, builderIds: [builderId], note: 'Offline spec' } });
+  expect(created.status()).toBe(201);
+  const buildId = (await created.json()).build.id as number;
+
+  const builderContext = await browser.newContext({ viewport: { width: 1024, height: 768 } });
+  const builder = await builderContext.newPage();
+  await signIn(builder, 'builder');
+  await builder.goto(`/workbench/builds/${buildId}?tab=build`);
+  await expect(builder.getByTestId('step-position')).toContainText('Step 1 of 15');
+
+  await builderContext.setOffline(true);
+  await builder.getByRole('checkbox', { name: 'Step 1 done' }).click();
+  const banner = builder.getByTestId('connection-banner');
+  await expect(banner).toContainText('Offline');
+  await expect(banner).toContainText('1 tick waiting to sync');
+  const whileOffline = (await (await designer.request.get(`/api/builds/${buildId}`)).json()).build.progress.step;
+  expect(whileOffline).toBe(0);
+
+  await builderContext.setOffline(false);
+  await expect(banner).toBeHidden();
+  await expect.poll(async () => (await (await designer.request.get(`/api/builds/${buildId}`)).json()).build.progress.step).toBe(1);
+  const records = (await (await designer.request.get(`/api/builds/${buildId}`)).json()).records as { madeBy: { displayName: string }; kind: string }[];
+  expect(records).toEqual([expect.objectContaining({ kind: 'step', madeBy: expect.objectContaining({ displayName: 'Ines Varga' }) })]);
+  await builderContext.close();
+  await designerContext.close();
+});

@@ -1,0 +1,3 @@
+export * from './cautions';
+export * from './instructions';
+export * from './labels';
