@@ -21,11 +21,21 @@ import { healthRouter } from './modules/health/router';
 import { usersRouter } from './modules/users/router';
 import { createUsersService } from './modules/users/service';
 import { APP_VERSION } from './version';
+import { createPasswordResets } from './modules/auth/passwordReset';
+import { passwordResetRouter } from './modules/auth/passwordResetRouter';
+import { classesRouter } from './modules/classes/router';
+import { createClassesService } from './modules/classes/service';
+import { linksRouter, sharedRouter, type LinkRateLimit } from './modules/links/router';
+import { createLinksService } from './modules/links/service';
+import { createMailService, type MailService } from './modules/mail/mailService';
+import { outboxRouter } from './modules/mail/router';
+import { designSharesRouter, reviewsRouter } from './modules/reviews/router';
+import { createReviewsService } from './modules/reviews/service';
+import { importRouter, revisionsRouter } from './modules/revisions/router';
+import { designUploadsRouter, uploadsRouter } from './modules/uploads/router';
+import { createUploadsService } from './modules/uploads/service';
 
-/** Outgoing mail; a local fake stands in until the mail module lands. */
-export interface Mailer {
-  send(message: { to: string; subject: string; text: string }): Promise<void>;
-}
+export type { Mailer } from './modules/mail/mailService';
 
 export interface AppDependencies {
   config: AppConfig;
@@ -34,10 +44,20 @@ export interface AppDependencies {
   rateLimit?: SignInRateLimit;
   /** bcrypt cost for new password hashes (tests lower it). */
   passwordCost?: number;
-  mailer?: Mailer;
+  /** Outgoing mail; by default nodemailer to SMTP from the config, or to the local fake SMTP server. */
+  mail?: MailService;
+  /** Requests per address on the public link routes. */
+  linkRateLimit?: LinkRateLimit;
 }
 
 const sessionStores = new WeakMap<Express, SessionStore>();
+const stoppers = new WeakMap<Express, () => Promise<void>>();
+const mailServices = new WeakMap<Express, MailService>();
+
+/** The app's mail service (tests read the fake SMTP server's messages through it). */
+export function mailServiceOf(app: Express): MailService | undefined {
+  return mailServices.get(app);
+}
 
 /** Builds the whole HTTP application without listening, so tests can drive it on a temporary database. */
 export function createApp(deps: AppDependencies): Express {
@@ -48,9 +68,23 @@ export function createApp(deps: AppDependencies): Express {
   const auth = createAuthService(db, passwords);
   const passport = createPassport(auth);
   const { middleware: sessions, store } = createSessionMiddleware(db, config.sessionSecret);
+  const mail = deps.mail ?? createMailService(config, logger);
+  const designs = createDesignsService(db);
+  const links = createLinksService(db);
+  const classes = createClassesService(db, links);
+  const resets = createPasswordResets(db, passwords, mail.mailer);
+  const reviews = createReviewsService({ db, passwords, resets, mailer: mail.mailer });
+  const uploads = createUploadsService(db, config.uploadsDir);
+  const signInLimiter = signInRateLimiter(deps.rateLimit ?? DEFAULT_SIGN_IN_RATE_LIMIT);
 
   const app = express();
   sessionStores.set(app, store);
+  mailServices.set(app, mail);
+  stoppers.set(app, async () => {
+    links.stop();
+    await links.flushOpens().catch(() => undefined);
+    await mail.stop();
+  });
   app.disable('x-powered-by');
   app.set('trust proxy', config.trustProxy);
   app.set('query parser', 'simple');
@@ -69,11 +103,23 @@ export function createApp(deps: AppDependencies): Express {
     next();
   });
   app.use('/api/health', healthRouter(db, APP_VERSION, logger));
+  // Read-only links need no session and never write: mounted before sessions and the CSRF guard.
+  app.use('/api/shared', sharedRouter({ links, rateLimit: deps.linkRateLimit }));
   app.use('/api', csrfGuard, sessions, passport.initialize(), passport.session());
 
-  app.use('/api/auth', authRouter({ auth, passport, signInLimiter: signInRateLimiter(deps.rateLimit ?? DEFAULT_SIGN_IN_RATE_LIMIT) }));
+  app.use('/api/auth/password-reset', passwordResetRouter({ resets, config, limiter: signInLimiter }));
+  app.use('/api/auth', authRouter({ auth, passport, signInLimiter }));
   app.use('/api/users', usersRouter(createUsersService(db, passwords)));
-  app.use('/api/designs', designsRouter(createDesignsService(db)));
+  app.use('/api/outbox', outboxRouter(mail));
+  app.use('/api/links', linksRouter({ links, designs, mailer: mail.mailer, config }));
+  app.use('/api/classes', classesRouter({ classes, config }));
+  app.use('/api/reviews', reviewsRouter({ reviews, config }));
+  app.use('/api/uploads', uploadsRouter(uploads));
+  app.use('/api/designs/import', importRouter(designs));
+  app.use('/api/designs/:designId/shares', designSharesRouter({ reviews, config }));
+  app.use('/api/designs/:designId/uploads', designUploadsRouter(uploads));
+  app.use('/api/designs/:designId', revisionsRouter({ db, designs }));
+  app.use('/api/designs', designsRouter(designs));
   app.use('/api/analysis', analysisRouter());
   app.use('/api', apiNotFound);
 
@@ -84,6 +130,7 @@ export function createApp(deps: AppDependencies): Express {
 }
 
 /** Stops the app's background timers (expired-session sweeps) before the database closes. */
-export function stopBackgroundWork(app: Express): void {
+export function stopBackgroundWork(app: Express): Promise<void> {
   sessionStores.get(app)?.stopExpiringSessions();
+  return stoppers.get(app)?.() ?? Promise.resolve();
 }

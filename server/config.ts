@@ -1,6 +1,6 @@
 import { randomBytes } from 'node:crypto';
 import { mkdirSync } from 'node:fs';
-import { dirname, resolve } from 'node:path';
+import { dirname, join, resolve } from 'node:path';
 import { z } from 'zod';
 
 /** Settings read once from the environment at start-up; everything else receives this object. */
@@ -18,6 +18,20 @@ export interface AppConfig {
   logRequests: boolean;
   /** Seed the demo shop when the database has no users yet. */
   seedDemo: boolean;
+  /** Outgoing mail: real SMTP when `smtp` is set; otherwise a local fake server (development, tests). */
+  mail: { from: string; smtp: SmtpSettings | null };
+  /** Base address put into e-mailed links; null means "the address the request came to". */
+  publicUrl: string | null;
+  /** Folder of uploaded files (outside the served client folder). */
+  uploadsDir: string;
+}
+
+export interface SmtpSettings {
+  host: string;
+  port: number;
+  secure: boolean;
+  user?: string;
+  pass?: string;
 }
 
 const booleanText = z
@@ -44,6 +58,14 @@ const environmentSchema = z
     TRUST_PROXY: z.string().optional(),
     LOG_REQUESTS: booleanText.optional(),
     SEED_DEMO: booleanText.optional(),
+    SMTP_HOST: z.string().optional(),
+    SMTP_PORT: z.coerce.number({ error: 'Use a whole number between 1 and 65535' }).int().min(1).max(65535).optional(),
+    SMTP_SECURE: booleanText.optional(),
+    SMTP_USER: z.string().optional(),
+    SMTP_PASS: z.string().optional(),
+    MAIL_FROM: z.string().optional(),
+    PUBLIC_URL: z.url({ error: 'Give the address people reach Slotwise at, e.g. https://frames.example.com' }).optional(),
+    UPLOADS_DIR: z.string().optional(),
   })
   .superRefine((env, ctx) => {
     if (env.NODE_ENV !== 'production') return;
@@ -109,5 +131,13 @@ export function loadConfig(
     trustProxy: parseTrustProxy(env.TRUST_PROXY),
     logRequests: env.LOG_REQUESTS ?? env.NODE_ENV !== 'test',
     seedDemo: env.SEED_DEMO ?? true,
+    mail: {
+      from: env.MAIL_FROM || 'Slotwise <no-reply@slotwise.invalid>',
+      smtp: env.SMTP_HOST
+        ? { host: env.SMTP_HOST, port: env.SMTP_PORT ?? 587, secure: env.SMTP_SECURE ?? false, user: env.SMTP_USER || undefined, pass: env.SMTP_PASS || undefined }
+        : null,
+    },
+    publicUrl: env.PUBLIC_URL ? env.PUBLIC_URL.replace(/\/+$/, '') : null,
+    uploadsDir: resolve(env.UPLOADS_DIR || join(dirname(databasePath), 'uploads')),
   };
 }

@@ -35,7 +35,7 @@ async function start(): Promise<void> {
     const force = setTimeout(() => process.exit(1), 10_000);
     force.unref();
     server.close(async () => {
-      stopBackgroundWork(app);
+      await stopBackgroundWork(app);
       await db.close().catch((error) => logger.error('Closing the database failed', error));
       process.exit(0);
     });

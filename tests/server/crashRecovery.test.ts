@@ -116,7 +116,7 @@ describe('a server killed with SIGKILL during a burst of saves', () => {
         const revision = await agent.get(`/api/designs/${id}/revisions/${ack.number}`);
         expect(revision.body.revision.document.name).toBe(ack.name);
       }
-      stopBackgroundWork(app);
+      await stopBackgroundWork(app);
     } finally {
       await db.close();
     }

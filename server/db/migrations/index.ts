@@ -3,6 +3,10 @@ import type { RunnableMigration } from 'umzug';
 import * as createUsers from './0001-create-users';
 import * as createSessions from './0002-create-sessions';
 import * as createDesigns from './0003-create-designs';
+import * as createLinksAndClasses from './0010-create-links-and-classes';
+import * as createReviews from './0011-create-reviews';
+import * as createPasswordResets from './0012-create-password-resets';
+import * as createUploads from './0013-create-uploads';
 
 /**
  * Every migration, oldest first. Listed by import rather than found by glob so the same list works
@@ -12,4 +16,8 @@ export const migrations: RunnableMigration<QueryInterface>[] = [
   { name: '0001-create-users', ...createUsers },
   { name: '0002-create-sessions', ...createSessions },
   { name: '0003-create-designs', ...createDesigns },
+  { name: '0010-create-links-and-classes', ...createLinksAndClasses },
+  { name: '0011-create-reviews', ...createReviews },
+  { name: '0012-create-password-resets', ...createPasswordResets },
+  { name: '0013-create-uploads', ...createUploads },
 ];

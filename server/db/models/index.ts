@@ -3,13 +3,14 @@ import { initDesignModel } from './design';
 import { initDesignRevisionModel } from './designRevision';
 import { initSessionModel } from './session';
 import { initUserModel } from './user';
+import { initSharingModels } from './sharing';
 
 export function defineModels(sequelize: Sequelize) {
   const User = initUserModel(sequelize);
   const Design = initDesignModel(sequelize);
   const DesignRevision = initDesignRevisionModel(sequelize);
   const Session = initSessionModel(sequelize);
-  return { User, Design, DesignRevision, Session };
+  return { User, Design, DesignRevision, Session, ...initSharingModels(sequelize) };
 }
 
 export type Models = ReturnType<typeof defineModels>;

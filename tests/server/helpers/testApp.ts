@@ -90,7 +90,7 @@ export async function buildTestApp(options: TestAppOptions = {}): Promise<TestAp
       return user!.id;
     },
     async close() {
-      stopBackgroundWork(app);
+      await stopBackgroundWork(app);
       await db.close();
       rmSync(dir, { recursive: true, force: true });
     },
