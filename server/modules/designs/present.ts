@@ -15,6 +15,16 @@ export interface DesignSummary {
   updatedBy: PersonRef;
   thumbnailUrl: string | null;
   profileCount: number;
+  /** The customer's newest decision; `current` when it is about the latest revision. */
+  approval: ApprovalSummary | null;
+}
+
+export interface ApprovalSummary {
+  revision: number;
+  decision: 'approved' | 'changes_requested';
+  by: string;
+  at: string;
+  current: boolean;
 }
 
 export interface RevisionMeta {
@@ -42,6 +52,10 @@ export interface SummaryRow {
   updatedByName: string;
   hasThumbnail: number;
   profileCount: number | null;
+  approvalRevision?: number | null;
+  approvalDecision?: 'approved' | 'changes_requested' | null;
+  approvalBy?: string | null;
+  approvalAt?: string | null;
 }
 
 export function presentSummary(row: SummaryRow): DesignSummary {
@@ -54,6 +68,10 @@ export function presentSummary(row: SummaryRow): DesignSummary {
     updatedBy: { id: row.updatedById, displayName: row.updatedByName },
     thumbnailUrl: row.hasThumbnail ? thumbnailUrl(row.id, row.latestRevision) : null,
     profileCount: row.profileCount ?? 0,
+    approval:
+      row.approvalRevision && row.approvalDecision
+        ? { revision: row.approvalRevision, decision: row.approvalDecision, by: row.approvalBy ?? '', at: sqliteDateToIso(row.approvalAt ?? null), current: row.approvalRevision === row.latestRevision }
+        : null,
   };
 }
 

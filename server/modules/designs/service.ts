@@ -19,10 +19,13 @@ const SUMMARY_SELECT = `
   SELECT d.id AS id, d.name AS name, d.system_id AS systemId, d.latest_revision AS latestRevision,
          d.updated_at AS updatedAt, u.id AS updatedById, u.display_name AS updatedByName,
          (r.thumbnail IS NOT NULL) AS hasThumbnail,
-         CASE WHEN json_valid(r.document) THEN json_array_length(r.document, '$.profiles') END AS profileCount
+         CASE WHEN json_valid(r.document) THEN json_array_length(r.document, '$.profiles') END AS profileCount,
+         rd.revision_number AS approvalRevision, rd.decision AS approvalDecision, du.display_name AS approvalBy, rd.created_at AS approvalAt
     FROM designs d
     JOIN design_revisions r ON r.design_id = d.id AND r.number = d.latest_revision
     JOIN users u ON u.id = r.created_by
+    LEFT JOIN review_decisions rd ON rd.id = (SELECT x.id FROM review_decisions x WHERE x.design_id = d.id ORDER BY x.created_at DESC, x.id DESC LIMIT 1)
+    LEFT JOIN users du ON du.id = rd.decided_by
    WHERE d.archived_at IS NULL`;
 
 const REVISION_SELECT = `

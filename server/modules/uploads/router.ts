@@ -8,7 +8,7 @@ import { designParamsSchema, UPLOAD_MAX_BYTES, uploadParamsSchema } from './sche
 import type { UploadsService } from './service';
 
 // Memory storage: a file is only written after every check passed, so a refused one leaves nothing.
-const receive = multer({ storage: multer.memoryStorage(), limits: { fileSize: UPLOAD_MAX_BYTES, files: 1, fields: 0, parts: 1 } }).single('file');
+const receive = multer({ storage: multer.memoryStorage(), limits: { fileSize: UPLOAD_MAX_BYTES, files: 1, fields: 0, parts: 1 }, preservePath: true }).single('file');
 
 const multerErrors: ErrorRequestHandler = (error, _req, _res, next) => {
   if (error instanceof multer.MulterError) {

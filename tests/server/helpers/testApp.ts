@@ -38,6 +38,7 @@ export interface TestAppOptions {
   nodeEnv?: 'test' | 'production';
   clientDist?: string;
   seed?: boolean;
+  linkRateLimit?: { max: number; windowMs: number };
 }
 
 export const demoEmail = (role: Role) => DEMO_ACCOUNTS.find((account) => account.role === role)!.email;
@@ -67,6 +68,7 @@ export async function buildTestApp(options: TestAppOptions = {}): Promise<TestAp
     logger,
     passwordCost: TEST_PASSWORD_COST,
     rateLimit: options.rateLimit ?? { signInMax: 1000, windowMs: 60_000 },
+    linkRateLimit: options.linkRateLimit ?? { max: 100_000, windowMs: 60_000 },
   });
 
   async function signInAs(email: string, password: string): Promise<Agent> {
