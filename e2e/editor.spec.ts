@@ -54,18 +54,19 @@ test('a designer draws a rectangle, joins it, fills it, checks the outputs, undo
   await expect(drawSettings).toBeVisible();
   const canvasBox = (await page.getByTestId('editor-canvas').boundingBox())!;
   const cardBox = (await drawSettings.boundingBox())!;
-  for (const corner of [[-300, 0, -300], [700, 0, 300]] as Vec3[]) {
+  // Front is -Z, so the top view shows the front edge at the bottom and +X to the left.
+  for (const corner of [[300, 0, -300], [-700, 0, 300]] as Vec3[]) {
     const point = await screenPoint(page, corner);
     expect(point.x, 'the frame is drawn clear of the draw settings card').toBeGreaterThan(cardBox.x + cardBox.width);
     expect(point.x).toBeLessThan(canvasBox.x + canvasBox.width);
     expect(point.y).toBeGreaterThan(canvasBox.y);
     expect(point.y).toBeLessThan(canvasBox.y + canvasBox.height);
   }
-  await drawProfile(page, [-300, 0, -300], [700, 0, -300]);
-  await drawProfile(page, [-300, 0, 300], [700, 0, 300]);
+  await drawProfile(page, [-700, 0, -300], [300, 0, -300]);
+  await drawProfile(page, [-700, 0, 300], [300, 0, 300]);
   // A cross member starts on the first rail's face (20 mm, half the 40 mm section, from its axis) and snaps to the other rail's face.
-  await drawProfile(page, [-100, 0, -280], [-100, 0, 280]);
-  await drawProfile(page, [500, 0, -280], [500, 0, 280]);
+  await drawProfile(page, [100, 0, -280], [100, 0, 280]);
+  await drawProfile(page, [-500, 0, -280], [-500, 0, 280]);
   await page.keyboard.press('Escape');
   await expect(page.getByRole('button', { name: 'Pick' })).toHaveAttribute('aria-pressed', 'true');
 

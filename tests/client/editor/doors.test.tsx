@@ -7,7 +7,7 @@ import { defaultCatalogue } from '@/domain/catalogue';
 import { createEmptyDesign } from '@/domain/design/create';
 import { addProfile, addSlidingDoors } from '@/domain/design/operations';
 import { findOpenings } from '@/domain/design/openings';
-import { buildSceneLayout } from '@/features/editor/scene/sceneLayout';
+import { buildSceneLayout } from '@/components/viewer/sceneLayout';
 import type { DesignDocument, Vec3 } from '@/domain/design/schema';
 import { FillOpeningInspector } from '@/features/editor/inspectors/FillOpeningInspector';
 import { renderWithStore } from './renderWithStore';

@@ -2,9 +2,9 @@
 import { afterEach, describe, expect, it } from 'vitest';
 import { cleanup, render, screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
-import { StockPlanPicture } from '@/features/editor/panels/StockPlanPicture';
+import { StockPlanPicture } from '@/components/outputs/StockPlanPicture';
 import { OutputsDock } from '@/features/editor/panels/OutputsDock';
-import { BarsTab } from '@/features/editor/panels/BarsTab';
+import { BarsTab } from '@/components/outputs/BarsTab';
 import { handMadeAnalysis, historyLength, renderWithStore, shelfDesign, storeWithAnalysis } from './panelsFixtures';
 
 afterEach(cleanup);
@@ -86,7 +86,7 @@ describe('Bars tab (stock plan picture)', () => {
     const { variantId, plan } = handMadeAnalysis().stockPlans[0];
     const bars = Array.from({ length: 45 }, (_, index) => ({ ...plan.bars[0], index, cuts: [{ id: `c${index}`, length: 600 }] }));
     const { container } = render(
-      <BarsTab stockPlans={[{ variantId, plan: { ...plan, bars, barCount: 45 } }]} settings={shelfDesign().settings} units="mm" onApplySettings={() => {}} />,
+      <BarsTab stockPlans={[{ variantId, plan: { ...plan, bars, barCount: 45 } }]} settings={shelfDesign().settings} units="mm" />,
     );
     expect(container.querySelectorAll('[data-kind="bar"]')).toHaveLength(40);
     await user.click(screen.getByRole('button', { name: 'Draw all 45 bars' }));

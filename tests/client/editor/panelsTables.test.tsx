@@ -3,10 +3,10 @@ import { afterEach, describe, expect, it } from 'vitest';
 import { cleanup, render, screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import Papa from 'papaparse';
-import { PartsTab } from '@/features/editor/panels/PartsTab';
-import { CutsTab } from '@/features/editor/panels/CutsTab';
-import { BOM_CSV_HEADER, bomToCsv, cutListCsvHeader, cutListToCsv } from '@/features/editor/panels/csv';
-import { csvFileName } from '@/features/editor/panels/format';
+import { PartsTab } from '@/components/outputs/PartsTab';
+import { CutsTab } from '@/components/outputs/CutsTab';
+import { BOM_CSV_HEADER, bomToCsv, cutListCsvHeader, cutListToCsv } from '@/components/outputs/csv';
+import { csvFileName } from '@/components/outputs/format';
 import { handMadeAnalysis } from './panelsFixtures';
 
 afterEach(cleanup);

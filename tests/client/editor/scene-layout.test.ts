@@ -3,11 +3,11 @@ import * as THREE from 'three';
 import { defaultCatalogue } from '@/domain/catalogue';
 import { designDocumentSchema, type DesignDocumentInput } from '@/domain/design/schema';
 import type { DesignAnalysis } from '@/domain/analysisTypes';
-import { buildSceneLayout, profileMatrix } from '@/features/editor/scene/sceneLayout';
-import { SceneResources } from '@/features/editor/scene/sceneResources';
-import { worstSeverityByPart } from '@/features/editor/scene/partHighlight';
-import { boundingSphereOf, fitDistance } from '@/features/editor/scene/cameraFraming';
-import { renderModeFromUrl } from '@/features/editor/scene/renderMode';
+import { buildSceneLayout, profileMatrix } from '@/components/viewer/sceneLayout';
+import { SceneResources } from '@/components/viewer/sceneResources';
+import { worstSeverityByPart } from '@/components/viewer/partHighlight';
+import { boundingSphereOf, fitDistance } from '@/components/viewer/cameraFraming';
+import { renderModeFromUrl } from '@/components/viewer/renderMode';
 
 function design(parts: Partial<DesignDocumentInput>) {
   return designDocumentSchema.parse({ schemaVersion: 1, name: 'Scene layout test', systemId: 'metric-40', ...parts });

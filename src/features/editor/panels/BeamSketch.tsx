@@ -1,7 +1,7 @@
 import { useId } from 'react';
 import type { LengthUnit } from '@/domain/units';
 import { deflectedShape, type SketchLoad, type SketchSupport } from './deflectedShape';
-import { showLength, showSmallLength } from './format';
+import { showLength, showSmallLength } from '@/components/outputs/format';
 
 export interface BeamSketchProps {
   span: number;

@@ -5,7 +5,7 @@ import type { LengthUnit } from '@/domain/units';
 import { BeamSketch } from './BeamSketch';
 import type { SketchLoad } from './deflectedShape';
 import { Verdict } from './severity';
-import { showForce, showLength, showSmallLength, showStress } from './format';
+import { showForce, showLength, showSmallLength, showStress } from '@/components/outputs/format';
 
 /** The member closest to (or furthest past) its limits governs the picture. */
 export function governingMember(members: MemberResult[]): MemberResult | null {

@@ -5,14 +5,10 @@ import type { DesignDocument, LoadCase } from '@/domain/design/schema';
 import type { LengthUnit } from '@/domain/units';
 import { useEditorStore } from '@/features/editor/store/editorStore';
 import { cn } from '@/lib/cn';
-import { BarsTab } from './BarsTab';
-import { CutsTab } from './CutsTab';
+import { BarsTab, CutsTab, PartsTab, PriceTab, ToolsTab, WeightTab } from '@/components/outputs';
 import { DockTabs, type DockTab } from './DockTabs';
 import { LoadsTab } from './LoadsTab';
-import { PartsTab } from './PartsTab';
-import { PriceTab } from './PriceTab';
-import { ToolsTab } from './ToolsTab';
-import { WeightTab } from './WeightTab';
+import { StockSettingsForm } from './StockSettingsForm';
 import { addLoadCaseCommand, removeLoadCaseCommand, updateSettingsCommand, type StockSettingsPatch } from './panelCommands';
 
 export const OUTPUT_TABS: DockTab[] = [
@@ -157,7 +153,22 @@ export function DockBody({ tab, design, analysis, analysedSettings, running, uni
     case 'cuts':
       return <CutsTab groups={analysis.cutGroups} items={analysis.cutList} units={units} designName={design.name} />;
     case 'bars':
-      return <BarsTab stockPlans={analysis.stockPlans} settings={design.settings} pictureSettings={analysedSettings} units={units} onApplySettings={onApplySettings} />;
+      return (
+        <BarsTab
+          stockPlans={analysis.stockPlans}
+          settings={design.settings}
+          pictureSettings={analysedSettings}
+          units={units}
+          settingsSlot={
+            <StockSettingsForm
+              key={`${design.settings.stockLength}|${design.settings.kerf}|${design.settings.endTrim}|${design.settings.minReusableOffcut}|${units}`}
+              settings={design.settings}
+              units={units}
+              onApply={onApplySettings}
+            />
+          }
+        />
+      );
     case 'tools':
       return <ToolsTab tools={analysis.tools} />;
     case 'weight':

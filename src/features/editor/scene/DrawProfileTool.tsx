@@ -8,10 +8,10 @@ import { drawTarget } from '../snapping/drawTarget';
 import { snapPoint } from '../snapping/snap';
 import { gridStepsFor, unitIncrement } from '../snapping/steps';
 import type { Vec3 } from '@/domain/geometry';
-import { CLICK_SLOP_PX } from './PartBatch';
+import { CLICK_SLOP_PX } from '@/components/viewer';
 import { mmPerPixel, pointerRay } from './pointerRay';
-import { profileMatrix } from './sceneLayout';
-import { useScene } from './sceneContext';
+import { profileMatrix } from '@/components/viewer';
+import { useScene } from '@/components/viewer';
 
 interface DrawProfileToolProps {
   /** How close the pointer must pass a target to snap to it, CSS px (default 12). */

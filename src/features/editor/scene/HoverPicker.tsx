@@ -2,7 +2,7 @@ import { useEffect } from 'react';
 import { useThree } from '@react-three/fiber';
 import * as THREE from 'three';
 import { useEditorStoreApi } from '../store/editorStore';
-import { partIdOfHit, useScene } from './sceneContext';
+import { partIdOfHit, useScene } from '@/components/viewer';
 
 interface HoverPickerProps {
   /** Least time between two hover ray casts, ms (default 50). */

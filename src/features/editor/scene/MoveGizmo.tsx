@@ -7,7 +7,7 @@ import type { DesignDocument } from '@/domain/design/schema';
 import { formatLength } from '@/domain/units';
 import { useEditorStore, useEditorStoreApi } from '../store/editorStore';
 import { unitIncrement } from '../snapping/steps';
-import { useScene } from './sceneContext';
+import { useScene } from '@/components/viewer';
 
 interface MoveGizmoProps {
   /** Snap step for the drag, mm; default the unit increment (1 mm, or 1/16 in in inch units). */

@@ -2,8 +2,8 @@ import { useMemo } from 'react';
 import type { ThreeEvent } from '@react-three/fiber';
 import { findOpenings } from '@/domain/design/openings';
 import { useEditorStore, useEditorStoreApi } from '../store/editorStore';
-import { CLICK_SLOP_PX } from './PartBatch';
-import { useScene } from './sceneContext';
+import { CLICK_SLOP_PX } from '@/components/viewer';
+import { useScene } from '@/components/viewer';
 
 /**
  * With the fill-opening tool, every frame opening (two parallel pairs of profiles bounding a

@@ -1,10 +1,7 @@
 /** Grid and nudge steps for the two display units, in mm (25.4 mm per inch exactly). */
 import { MM_PER_INCH, type LengthUnit } from '@/domain/units';
 
-/** Minor and major grid lines: 10 / 100 mm, or 1 in / 12 in. */
-export function gridStepsFor(units: LengthUnit): { minor: number; major: number } {
-  return units === 'in' ? { minor: MM_PER_INCH, major: 12 * MM_PER_INCH } : { minor: 10, major: 100 };
-}
+export { gridStepsFor } from '@/components/viewer/gridSteps';
 
 /** The smallest move a drag or the draw tool makes: 1 mm, or 1/16 in. */
 export function unitIncrement(units: LengthUnit): number {

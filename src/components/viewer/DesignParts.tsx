@@ -1,18 +1,23 @@
 import { useLayoutEffect, useMemo } from 'react';
-import { useEditorStore } from '../store/editorStore';
+import type { DesignDocument } from '@/domain/design/schema';
 import type { PartBatchData } from './batchCollector';
 import { CutoutPanel } from './CutoutPanel';
 import { PartBatch } from './PartBatch';
 import { buildSceneLayout } from './sceneLayout';
 import { useScene } from './sceneContext';
 
+interface DesignPartsProps {
+  /** The design to draw (required). */
+  design: DesignDocument;
+  /** Draw the panels (default true); false hides every sheet to see inside. */
+  panels?: boolean;
+}
+
 /**
- * Every part of the store's design: profiles with their real cross-sections, hardware, machining
- * and sheets, batched by (geometry, material). Rebuilt only when the design object changes.
- * Takes no props.
+ * Every part of a design: profiles with their real cross-sections, hardware, machining and
+ * sheets, batched by (geometry, material). Rebuilt only when the design object changes.
  */
-export function DesignParts() {
-  const design = useEditorStore((s) => s.design);
+export function DesignParts({ design, panels = true }: DesignPartsProps) {
   const { catalogue, resources, anchors } = useScene();
   const layout = useMemo(() => buildSceneLayout(design, catalogue), [design, catalogue]);
 
@@ -23,12 +28,13 @@ export function DesignParts() {
   return (
     <group name="design-parts">
       {layout.batches.map((batch) => {
+        if (!panels && batch.role === 'panel') return null;
         const geometry = batchGeometry(batch, resources);
         if (!geometry) return null;
         const material = batch.surface.kind === 'panel' ? resources.panelSurface(batch.surface.materialId) : resources.surface(batch.surface.key);
         return <PartBatch key={batch.key} data={batch} geometry={geometry} material={material} />;
       })}
-      {layout.cutoutPanels.map((panel) => (
+      {(panels ? layout.cutoutPanels : []).map((panel) => (
         <CutoutPanel key={panel.id} panel={panel} />
       ))}
     </group>

@@ -4,7 +4,9 @@ import type { DesignAnalysis, Severity } from '@/domain/analysisTypes';
 
 export const HIGHLIGHT = {
   plain: new THREE.Color('#ffffff'),
-  hovered: new THREE.Color('#a6e6df'),
+  // Hover brightens without a hue, so wood, acrylic and aluminium keep their colour (values above 1
+  // are allowed in the float instance colours).
+  hovered: new THREE.Color(1.22, 1.22, 1.22),
   selected: new THREE.Color('#5fd8cc'),
   error: new THREE.Color('#ff9a90'),
   warning: new THREE.Color('#ffd98a'),

@@ -1,11 +1,9 @@
-import { useState } from 'react';
+import { useState, type ReactNode } from 'react';
 import { TriangleAlert } from 'lucide-react';
 import type { VariantStockPlan } from '@/domain/analysisTypes';
 import type { DesignSettings } from '@/domain/design/schema';
 import type { LengthUnit } from '@/domain/units';
 import { StockPlanPicture } from './StockPlanPicture';
-import { StockSettingsForm } from './StockSettingsForm';
-import type { StockSettingsPatch } from './panelCommands';
 import { showLength } from './format';
 
 export interface BarsTabProps {
@@ -14,19 +12,15 @@ export interface BarsTabProps {
   /** The settings the plans were computed with; defaults to `settings`. */
   pictureSettings?: DesignSettings;
   units: LengthUnit;
-  onApplySettings: (patch: StockSettingsPatch) => void;
+  /** Controls shown above the bars, such as the editor's stock settings form (default none: read-only). */
+  settingsSlot?: ReactNode;
 }
 
 /** The stock plan as drawn bars per profile variant, with the counts it is judged by. */
-export function BarsTab({ stockPlans, settings, pictureSettings = settings, units, onApplySettings }: BarsTabProps) {
+export function BarsTab({ stockPlans, settings, pictureSettings = settings, units, settingsSlot }: BarsTabProps) {
   return (
     <div className="flex flex-col gap-4">
-      <StockSettingsForm
-        key={`${settings.stockLength}|${settings.kerf}|${settings.endTrim}|${settings.minReusableOffcut}|${units}`}
-        settings={settings}
-        units={units}
-        onApply={onApplySettings}
-      />
+      {settingsSlot}
       <p className="text-xs text-ink-muted">
         Stock lengths are demo values; check your supplier's bar lengths. Legend: dark ends are end trim, red slivers are saw kerf, hatched is
         offcut, an accent outline marks an offcut long enough to keep.

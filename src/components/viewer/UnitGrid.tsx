@@ -1,10 +1,15 @@
 import { useEffect, useMemo } from 'react';
 import { useFrame, useThree } from '@react-three/fiber';
 import * as THREE from 'three';
-import { useEditorStore } from '../store/editorStore';
-import { gridStepsFor } from '../snapping/steps';
+import type { DesignDocument } from '@/domain/design/schema';
+import type { LengthUnit } from '@/domain/units';
+import { gridStepsFor } from './gridSteps';
 
 interface UnitGridProps {
+  /** The design the grid spreads under (required). */
+  design: DesignDocument;
+  /** Grid units: 10/100 mm or 1/12 in (required). */
+  units: LengthUnit;
   /** Smallest half size of the grid, mm; it grows to cover the design, in whole major steps (default 2000). */
   minHalfExtent?: number;
 }
@@ -13,9 +18,7 @@ interface UnitGridProps {
  * The floor grid in the designer's units: fine lines every 10 mm / 1 in, strong lines every
  * 100 mm / 12 in, and the two floor axes in the accent colour. Three draw calls in all.
  */
-export function UnitGrid({ minHalfExtent = 2000 }: UnitGridProps) {
-  const units = useEditorStore((s) => s.units);
-  const design = useEditorStore((s) => s.design);
+export function UnitGrid({ design, units, minHalfExtent = 2000 }: UnitGridProps) {
   const halfExtent = useMemo(() => {
     let reach = minHalfExtent;
     for (const p of design.profiles) {

@@ -1,11 +1,16 @@
 import { useEffect, useLayoutEffect, useMemo } from 'react';
 import { useThree } from '@react-three/fiber';
 import * as THREE from 'three';
-import { useEditorStore } from '../store/editorStore';
+import type { DesignAnalysis } from '@/domain/analysisTypes';
+import type { DesignDocument } from '@/domain/design/schema';
 import { SEVERITY_COLOR, worstSeverityByPart } from './partHighlight';
 import { useScene } from './sceneContext';
 
 interface FindingMarkersProps {
+  /** The design drawn (required; badges move when it changes). */
+  design: DesignDocument;
+  /** Its analysis, or null while none is ready (required). */
+  analysis: DesignAnalysis | null;
   /** Badge size as a share of the design's overall size (default 0.012), clamped to 8–60 mm. */
   relativeSize?: number;
 }
@@ -15,9 +20,7 @@ interface FindingMarkersProps {
  * drawn through the frame so it is never hidden; the part itself is tinted by PartBatch.
  * One instanced mesh in all.
  */
-export function FindingMarkers({ relativeSize = 0.012 }: FindingMarkersProps) {
-  const analysis = useEditorStore((s) => s.analysis);
-  const design = useEditorStore((s) => s.design);
+export function FindingMarkers({ design, analysis, relativeSize = 0.012 }: FindingMarkersProps) {
   const { resources, anchors } = useScene();
   const invalidate = useThree((s) => s.invalidate);
   const geometry = resources.hardwareGeometry('badge');

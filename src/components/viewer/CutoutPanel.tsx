@@ -1,11 +1,10 @@
 import { useEffect, useLayoutEffect, useMemo } from 'react';
-import { useThree, type ThreeEvent } from '@react-three/fiber';
+import { useThree } from '@react-three/fiber';
 import * as THREE from 'three';
 import type { Panel } from '@/domain/design/schema';
-import { useEditorStoreApi } from '../store/editorStore';
-import { CLICK_SLOP_PX } from './PartBatch';
 import { panelBasis } from './sceneLayout';
 import { useScene } from './sceneContext';
+import { useSelectOnClick } from './useSelectOnClick';
 
 interface CutoutPanelProps {
   /** The panel to draw, with at least one round cut-out (required). */
@@ -15,7 +14,6 @@ interface CutoutPanelProps {
 /** A sheet with round cut-outs: its rectangle with holes, extruded to its thickness; one mesh. */
 export function CutoutPanel({ panel }: CutoutPanelProps) {
   const { resources, pickables } = useScene();
-  const store = useEditorStoreApi();
   const invalidate = useThree((s) => s.invalidate);
   const geometryKey = `cutout:${panel.id}:${panel.rect.width}:${panel.rect.height}:${panel.thickness}:${JSON.stringify(panel.cutouts)}`;
   const geometry = useMemo(() => resources.ownedGeometry(geometryKey, () => cutoutGeometry(panel)), [resources, geometryKey]); // eslint-disable-line react-hooks/exhaustive-deps
@@ -38,12 +36,7 @@ export function CutoutPanel({ panel }: CutoutPanelProps) {
     };
   }, [mesh, pickables]);
 
-  const onClick = (e: ThreeEvent<MouseEvent>) => {
-    const state = store.getState();
-    if (state.tool !== 'select' || e.delta > CLICK_SLOP_PX) return;
-    e.stopPropagation();
-    state.select([panel.id], e.shiftKey ? 'add' : e.ctrlKey || e.metaKey ? 'toggle' : 'replace');
-  };
+  const onClick = useSelectOnClick(true);
   return <primitive object={mesh} onClick={onClick} />;
 }
 

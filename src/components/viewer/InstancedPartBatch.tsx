@@ -1,10 +1,10 @@
 import { useEffect, useLayoutEffect, useMemo } from 'react';
 import { useThree } from '@react-three/fiber';
 import * as THREE from 'three';
-import { useEditorStoreApi, type EditorState } from '../store/editorStore';
 import type { PartBatchProps } from './PartBatch';
 import { colourFor, worstSeverityByPart } from './partHighlight';
-import { useScene } from './sceneContext';
+import { useHighlight, useScene } from './sceneContext';
+import type { PartHighlight } from './viewerTypes';
 import { useSelectOnClick } from './useSelectOnClick';
 
 // Props as PartBatch's: data, geometry, material (required), pickable (default true).
@@ -16,7 +16,7 @@ function capacityFor(count: number): number {
 
 /** The normal path: ONE InstancedMesh for the batch, matrices and colours written imperatively. */
 export function InstancedPartBatch({ data, geometry, material, pickable }: Required<PartBatchProps>) {
-  const store = useEditorStoreApi();
+  const highlight = useHighlight();
   const invalidate = useThree((s) => s.invalidate);
   const { pickables } = useScene();
   const count = data.partIds.length;
@@ -40,18 +40,14 @@ export function InstancedPartBatch({ data, geometry, material, pickable }: Requi
     mesh.userData.partIds = data.partIds;
     mesh.computeBoundingSphere();
     mesh.computeBoundingBox();
-    writeColours(mesh, data.partIds, store.getState());
     invalidate();
-  }, [mesh, data, count, store, invalidate]);
+  }, [mesh, data, count, invalidate]);
 
-  useEffect(() => {
-    // Colours change with selection, hover and findings: written directly, no React render.
-    return store.subscribe((state, previous) => {
-      if (state.selection === previous.selection && state.hoveredId === previous.hoveredId && state.analysis === previous.analysis) return;
-      writeColours(mesh, data.partIds, state);
-      invalidate();
-    });
-  }, [mesh, data, store, invalidate]);
+  useLayoutEffect(() => {
+    // Colours follow selection, hover and findings: written into the instance colours, no re-layout.
+    writeColours(mesh, data.partIds, highlight);
+    invalidate();
+  }, [mesh, data, highlight, invalidate]);
 
   useEffect(() => {
     if (!pickable) return;
@@ -67,7 +63,7 @@ export function InstancedPartBatch({ data, geometry, material, pickable }: Requi
 
 const severityCache = new WeakMap<object, ReturnType<typeof worstSeverityByPart>>();
 
-function writeColours(mesh: THREE.InstancedMesh, partIds: string[], state: EditorState): void {
+function writeColours(mesh: THREE.InstancedMesh, partIds: string[], state: PartHighlight): void {
   let severity = state.analysis ? severityCache.get(state.analysis) : undefined;
   if (!severity) {
     severity = worstSeverityByPart(state.analysis);

@@ -2,12 +2,19 @@ import { useEffect, useRef } from 'react';
 import { useFrame, useThree } from '@react-three/fiber';
 import * as THREE from 'three';
 import type { OrbitControls as OrbitControlsImpl } from 'three-stdlib';
-import { useEditorStore, useEditorStoreApi, type EditorView } from '../store/editorStore';
-import { boundingSphereOf, fitDistance, VIEW_DIRECTIONS } from './cameraFraming';
+import { boundingBoxOf, fitBoxDistance, VIEW_DIRECTIONS } from './cameraFraming';
 import { useScene } from './sceneContext';
+import type { CameraRequest, ViewName } from './viewerTypes';
 
 /** Length of a camera move, ms: short enough to feel immediate, long enough to follow. */
 const MOVE_MS = 320;
+
+interface CameraDirectorProps {
+  /** One-shot camera requests from independent sources; each is acted on when its nonce changes (required, may hold nulls). */
+  requests: readonly (CameraRequest | null | undefined)[];
+  /** When this changes (a new design), everything is framed at once in the three-quarter view (required). */
+  frameKey: string | number | null;
+}
 
 interface CameraMove {
   fromPosition: THREE.Vector3;
@@ -18,22 +25,20 @@ interface CameraMove {
 }
 
 /**
- * Answers the store's one-shot camera requests (frame the selection or everything; front, top,
- * side, iso views) with a short eased move, and frames the whole design when a design loads.
- * Takes no props.
+ * Answers camera requests (frame some parts or everything; the named views, front at -Z) with a
+ * short eased move, and frames the whole design when `frameKey` changes. Every corner of the
+ * framed box is kept inside the view, so an auto-fit never crops the model.
  */
-export function CameraDirector() {
-  const store = useEditorStoreApi();
+export function CameraDirector({ requests, frameKey }: CameraDirectorProps) {
   const { anchors, aimCamera } = useScene();
   const camera = useThree((s) => s.camera) as THREE.PerspectiveCamera;
   const controls = useThree((s) => s.controls) as unknown as OrbitControlsImpl | null;
   const invalidate = useThree((s) => s.invalidate);
   const size = useThree((s) => s.size);
-  const designId = useEditorStore((s) => s.designId);
   const move = useRef<CameraMove | null>(null);
   const aspect = useRef(1);
   aspect.current = size.width / Math.max(1, size.height);
-  const frameRef = useRef<((ids: string[] | 'all', view?: EditorView | THREE.Vector3, instant?: boolean) => void) | null>(null);
+  const frameRef = useRef<((ids: readonly string[] | 'all', view?: ViewName | THREE.Vector3, instant?: boolean) => void) | null>(null);
 
   useEffect(() => {
     if (!controls) return;
@@ -49,24 +54,31 @@ export function CameraDirector() {
       move.current = { fromPosition: camera.position.clone(), toPosition, fromTarget: controls.target.clone(), toTarget, startedAt: performance.now() };
       invalidate();
     };
-    const frame = (ids: string[] | 'all', view?: EditorView | THREE.Vector3, instant = false) => {
-      const sphere = boundingSphereOf(anchors.current, ids.length === 0 ? 'all' : ids);
+    const frame = (ids: readonly string[] | 'all', view?: ViewName | THREE.Vector3, instant = false) => {
+      let box = boundingBoxOf(anchors.current, ids.length === 0 ? 'all' : ids);
+      if (box.isEmpty()) box = new THREE.Box3(new THREE.Vector3(-500, 0, -500), new THREE.Vector3(500, 600, 500));
       const direction = view instanceof THREE.Vector3 ? view.clone().normalize() : view ? VIEW_DIRECTIONS[view].clone() : camera.position.clone().sub(controls.target).normalize();
-      const distance = fitDistance(sphere, camera.fov, aspect.current);
-      startMove(sphere.center.clone().addScaledVector(direction, distance), sphere.center.clone(), instant);
+      const distance = fitBoxDistance(box, direction, camera.fov, aspect.current);
+      const center = box.getCenter(new THREE.Vector3());
+      startMove(center.clone().addScaledVector(direction, distance), center, instant);
     };
     frameRef.current = frame;
     aimCamera.current = (direction) => frame('all', direction);
-    return store.subscribe((state, previous) => {
-      if (state.frameRequest && state.frameRequest !== previous.frameRequest) frame(state.frameRequest.ids);
-      if (state.viewRequest && state.viewRequest !== previous.viewRequest) frame('all', state.viewRequest.view);
-    });
-  }, [store, controls, camera, anchors, aimCamera, invalidate]);
+  }, [controls, camera, anchors, aimCamera, invalidate]);
 
-  // Each loaded design opens framed in the iso view; runs after DesignParts has placed its anchors.
+  const lastNonces = useRef<(number | null)[]>([]);
+  useEffect(() => {
+    requests.forEach((request, i) => {
+      if (!request || request.nonce === lastNonces.current[i]) return;
+      lastNonces.current[i] = request.nonce;
+      frameRef.current?.(request.ids, request.view, request.instant);
+    });
+  });
+
+  // Each design opens framed in the three-quarter view; runs after DesignParts has placed its anchors.
   useEffect(() => {
     frameRef.current?.('all', 'iso', true);
-  }, [designId, controls]);
+  }, [frameKey, controls]);
 
   useFrame(() => {
     const m = move.current;
