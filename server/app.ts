@@ -6,6 +6,7 @@ import type { Database } from './db/database';
 import { consoleLogger, type Logger } from './logger';
 import { serveClient } from './middleware/clientStatic';
 import { csrfGuard } from './middleware/csrfGuard';
+import { embeddable } from './middleware/embeddable';
 import { apiNotFound, errorHandler } from './middleware/errorHandler';
 import { securityHeaders } from './middleware/securityHeaders';
 import { analysisRouter } from './modules/analysis/router';
@@ -123,6 +124,8 @@ export function createApp(deps: AppDependencies): Express {
   app.use('/api/analysis', analysisRouter());
   app.use('/api', apiNotFound);
 
+  // The link viewer page may be embedded in an iframe anywhere; every other page keeps frame-ancestors 'self'.
+  app.use('/view', embeddable);
   if (production) serveClient(app, config.clientDist, logger);
 
   app.use(errorHandler(logger));

@@ -18,6 +18,12 @@ const AccountPage = lazyPage(() => import('@/features/account/components/Account
 const WorkbenchPage = lazyPage(() => import('@/features/workbench/components/WorkbenchPage'), pageSkeleton);
 const ReviewsPage = lazyPage(() => import('@/features/reviews/components/ReviewsPage'), pageSkeleton);
 const ClassesPage = lazyPage(() => import('@/features/classes/components/ClassesPage'), pageSkeleton);
+const ForgotPasswordPage = lazyPage(() => import('@/features/auth/components/ForgotPasswordPage'), pageSkeleton);
+const ResetPasswordPage = lazyPage(() => import('@/features/auth/components/ResetPasswordPage'), pageSkeleton);
+const LinkViewerPage = lazyPage(() => import('@/features/linkViewer/components/LinkViewerPage'), <EditorSkeleton />);
+const ReviewPage = lazyPage(() => import('@/features/reviews/components/ReviewPage'), <EditorSkeleton />);
+const OutboxPage = lazyPage(() => import('@/features/outbox/components/OutboxPage'), pageSkeleton);
+const DesignHistoryPage = lazyPage(() => import('@/features/designs/components/DesignHistoryPage'), pageSkeleton);
 const NotFoundPage = lazyPage(() => import('./routes/NotFoundPage'), pageSkeleton);
 
 /** Route tree per the client-routes contract. Guards (RequireRole) sit above the pages they protect. */
@@ -27,6 +33,10 @@ export const routes: RouteObject[] = [
     errorElement: <RouteErrorBoundary />,
     children: [
       { path: '/sign-in', Component: SignInPage },
+      { path: '/forgot-password', Component: ForgotPasswordPage },
+      { path: '/reset-password', Component: ResetPasswordPage },
+      // Read-only links: no sign-in.
+      { path: '/view/:token', Component: LinkViewerPage },
       {
         element: <RequireRole />,
         children: [
@@ -38,10 +48,13 @@ export const routes: RouteObject[] = [
                 children: [
                   { index: true, element: <HomeRedirect /> },
                   { path: 'designs', element: <RequireRole roles={['owner', 'designer']} />, children: [{ index: true, Component: DesignsPage }] },
+                  { path: 'designs/:designId/history', element: <RequireRole roles={['owner', 'designer']} />, children: [{ index: true, Component: DesignHistoryPage }] },
+                  { path: 'outbox', element: <RequireRole roles={['owner']} />, children: [{ index: true, Component: OutboxPage }] },
                   { path: 'people', element: <RequireRole roles={['owner']} />, children: [{ index: true, Component: PeoplePage }] },
                   { path: 'account', Component: AccountPage },
                   { path: 'workbench', element: <RequireRole roles={['builder']} />, children: [{ index: true, Component: WorkbenchPage }] },
                   { path: 'reviews', element: <RequireRole roles={['customer']} />, children: [{ index: true, Component: ReviewsPage }] },
+                  { path: 'reviews/:designId', element: <RequireRole roles={['customer', 'owner', 'designer']} />, children: [{ index: true, Component: ReviewPage }] },
                   { path: 'classes', element: <RequireRole roles={['instructor']} />, children: [{ index: true, Component: ClassesPage }] },
                   { path: '*', Component: NotFoundPage },
                 ],

@@ -7,11 +7,14 @@ import type { DesignSummary } from '../api/schemas';
 import { DesignCard } from './DesignCard';
 import { DeleteDesignDialog } from './DeleteDesignDialog';
 import { NewDesignDialog } from './NewDesignDialog';
+import { ShareDialog } from './ShareDialog';
+import { ImportDesignButton } from './ImportDesignButton';
 
 export default function DesignsPage() {
   const designs = useDesigns();
   const [creating, setCreating] = useState(false);
   const [deleting, setDeleting] = useState<DesignSummary | null>(null);
+  const [sharing, setSharing] = useState<DesignSummary | null>(null);
   const newDesignButton = (
     <Button variant="primary" icon={<Plus aria-hidden className="size-4" />} onClick={() => setCreating(true)}>
       New design
@@ -20,7 +23,7 @@ export default function DesignsPage() {
 
   return (
     <PageFrame>
-      <PageHeader title="Designs" description="Frames your shop is drawing, newest changes first." actions={newDesignButton} />
+      <PageHeader title="Designs" description="Frames your shop is drawing, newest changes first." actions={<div className="flex gap-2"><ImportDesignButton />{newDesignButton}</div>} />
       {designs.isPending ? (
         <DesignGridSkeleton />
       ) : designs.error ? (
@@ -32,12 +35,13 @@ export default function DesignsPage() {
       ) : (
         <ul aria-label="Designs" className="grid grid-cols-1 gap-4 sm:grid-cols-2 xl:grid-cols-3">
           {sortByUpdated(designs.data).map((design) => (
-            <DesignCard key={design.id} design={design} onDelete={setDeleting} />
+            <DesignCard key={design.id} design={design} onDelete={setDeleting} onShare={setSharing} />
           ))}
         </ul>
       )}
       <NewDesignDialog open={creating} onClose={() => setCreating(false)} />
       <DeleteDesignDialog design={deleting} onClose={() => setDeleting(null)} />
+      <ShareDialog design={sharing} onClose={() => setSharing(null)} />
     </PageFrame>
   );
 }
