@@ -19,7 +19,8 @@ export interface AppConfig {
   /** Seed the demo shop when the database has no users yet. */
   seedDemo: boolean;
   /** Outgoing mail: real SMTP when `smtp` is set; otherwise a local fake server (development, tests). */
-  mail: { from: string; smtp: SmtpSettings | null };
+  /** `catcher`: with no SMTP, run the local fake SMTP server (default outside production; MAIL_CATCHER=true forces it, e.g. for end-to-end tests). */
+  mail: { from: string; smtp: SmtpSettings | null; catcher: boolean };
   /** Base address put into e-mailed links; null means "the address the request came to". */
   publicUrl: string | null;
   /** Folder of uploaded files (outside the served client folder). */
@@ -64,6 +65,7 @@ const environmentSchema = z
     SMTP_USER: z.string().optional(),
     SMTP_PASS: z.string().optional(),
     MAIL_FROM: z.string().optional(),
+    MAIL_CATCHER: booleanText.optional(),
     PUBLIC_URL: z.url({ error: 'Give the address people reach Slotwise at, e.g. https://frames.example.com' }).optional(),
     UPLOADS_DIR: z.string().optional(),
   })
@@ -136,6 +138,7 @@ export function loadConfig(
       smtp: env.SMTP_HOST
         ? { host: env.SMTP_HOST, port: env.SMTP_PORT ?? 587, secure: env.SMTP_SECURE ?? false, user: env.SMTP_USER || undefined, pass: env.SMTP_PASS || undefined }
         : null,
+      catcher: env.MAIL_CATCHER ?? env.NODE_ENV !== 'production',
     },
     publicUrl: env.PUBLIC_URL ? env.PUBLIC_URL.replace(/\/+$/, '') : null,
     uploadsDir: resolve(env.UPLOADS_DIR || join(dirname(databasePath), 'uploads')),

@@ -24,7 +24,7 @@ export interface MailService {
  * request that caused them (a comment is saved even when its notice cannot be sent).
  */
 export function createMailService(config: AppConfig, logger: Logger): MailService {
-  const mode: MailService['mode'] = config.mail.smtp ? 'smtp' : config.nodeEnv === 'production' ? 'none' : 'fake';
+  const mode: MailService['mode'] = config.mail.smtp ? 'smtp' : config.mail.catcher ? 'fake' : 'none';
   let fake: Awaited<ReturnType<typeof startFakeSmtpServer>> | null = null;
   let transport: Promise<Transporter> | null = null;
 
