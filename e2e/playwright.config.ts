@@ -50,6 +50,8 @@ export default defineConfig({
       PORT: String(port),
       DATABASE_PATH: dbFile,
       SESSION_SECRET: 'e2e-session-secret-not-for-production-0123456789',
+      // The specs read sent mail from the local fake SMTP server through the owner's outbox.
+      MAIL_CATCHER: 'true',
       SLOTWISE_E2E: '1',
       CLIENT_DIST: process.env.CLIENT_DIST ?? 'dist',
     },

@@ -5,6 +5,7 @@ import type { Database } from './db/database';
 import { serverLogger, type Logger } from './logger';
 import { serveClient } from './middleware/clientStatic';
 import { csrfGuard } from './middleware/csrfGuard';
+import { embeddable } from './middleware/embeddable';
 import { apiNotFound, errorHandler } from './middleware/errorHandler';
 import { securityHeaders } from './middleware/securityHeaders';
 import { createAnalysisPool, type AnalysisPool } from './modules/analysis/pool';
@@ -23,11 +24,21 @@ import { healthRouter } from './modules/health/router';
 import { usersRouter } from './modules/users/router';
 import { createUsersService } from './modules/users/service';
 import { APP_VERSION } from './version';
+import { createPasswordResets } from './modules/auth/passwordReset';
+import { passwordResetRouter } from './modules/auth/passwordResetRouter';
+import { classesRouter } from './modules/classes/router';
+import { createClassesService } from './modules/classes/service';
+import { linksRouter, sharedRouter, type LinkRateLimit } from './modules/links/router';
+import { createLinksService } from './modules/links/service';
+import { createMailService, type MailService } from './modules/mail/mailService';
+import { outboxRouter } from './modules/mail/router';
+import { designSharesRouter, reviewsRouter } from './modules/reviews/router';
+import { createReviewsService } from './modules/reviews/service';
+import { importRouter, revisionsRouter } from './modules/revisions/router';
+import { designUploadsRouter, uploadsRouter } from './modules/uploads/router';
+import { createUploadsService } from './modules/uploads/service';
 
-/** Outgoing mail; a local fake stands in until the mail module lands. */
-export interface Mailer {
-  send(message: { to: string; subject: string; text: string }): Promise<void>;
-}
+export type { Mailer } from './modules/mail/mailService';
 
 export interface AppDependencies {
   config: AppConfig;
@@ -36,12 +47,22 @@ export interface AppDependencies {
   rateLimit?: SignInRateLimit;
   /** bcrypt cost for new password hashes (tests lower it). */
   passwordCost?: number;
-  mailer?: Mailer;
   /** Worker threads for POST /api/analysis (tests may pass a fake); default: a pool from config.analysis. */
   analysisPool?: AnalysisPool;
+  /** Outgoing mail; by default nodemailer to SMTP from the config, or to the local fake SMTP server. */
+  mail?: MailService;
+  /** Requests per address on the public link routes. */
+  linkRateLimit?: LinkRateLimit;
 }
 
 const sessionStores = new WeakMap<Express, SessionStore>();
+const stoppers = new WeakMap<Express, () => Promise<void>>();
+const mailServices = new WeakMap<Express, MailService>();
+
+/** The app's mail service (tests read the fake SMTP server's messages through it). */
+export function mailServiceOf(app: Express): MailService | undefined {
+  return mailServices.get(app);
+}
 const analysisPools = new WeakMap<Express, AnalysisPool>();
 
 /** Builds the whole HTTP application without listening, so tests can drive it on a temporary database. */
@@ -54,10 +75,24 @@ export function createApp(deps: AppDependencies): Express {
   const auth = createAuthService(db, passwords);
   const passport = createPassport(auth);
   const { middleware: sessions, store } = createSessionMiddleware(db, config.sessionSecret);
+  const mail = deps.mail ?? createMailService(config, logger);
+  const designs = createDesignsService(db);
+  const links = createLinksService(db);
+  const classes = createClassesService(db, links);
+  const resets = createPasswordResets(db, passwords, mail.mailer);
+  const reviews = createReviewsService({ db, passwords, resets, mailer: mail.mailer });
+  const uploads = createUploadsService(db, config.uploadsDir);
+  const signInLimiter = signInRateLimiter(deps.rateLimit ?? DEFAULT_SIGN_IN_RATE_LIMIT);
 
   const app = express();
   sessionStores.set(app, store);
   analysisPools.set(app, analysisPool);
+  mailServices.set(app, mail);
+  stoppers.set(app, async () => {
+    links.stop();
+    await links.flushOpens().catch(() => undefined);
+    await mail.stop();
+  });
   app.disable('x-powered-by');
   app.set('trust proxy', config.trustProxy);
   app.set('query parser', 'simple');
@@ -86,24 +121,38 @@ export function createApp(deps: AppDependencies): Express {
     next();
   });
   app.use('/api/health', healthRouter(db, APP_VERSION, logger));
+  // Read-only links need no session and never write: mounted before sessions and the CSRF guard.
+  app.use('/api/shared', sharedRouter({ links, rateLimit: deps.linkRateLimit }));
   app.use('/api', csrfGuard, sessions, passport.initialize(), passport.session());
 
-  app.use('/api/auth', authRouter({ auth, passport, signInLimiter: signInRateLimiter(deps.rateLimit ?? DEFAULT_SIGN_IN_RATE_LIMIT) }));
+  app.use('/api/auth/password-reset', passwordResetRouter({ resets, config, limiter: signInLimiter }));
+  app.use('/api/auth', authRouter({ auth, passport, signInLimiter }));
   app.use('/api/users', usersRouter(createUsersService(db, passwords)));
+  app.use('/api/outbox', outboxRouter(mail));
+  app.use('/api/links', linksRouter({ links, designs, mailer: mail.mailer, config }));
+  app.use('/api/classes', classesRouter({ classes, config }));
+  app.use('/api/reviews', reviewsRouter({ reviews, config }));
+  app.use('/api/uploads', uploadsRouter(uploads));
+  app.use('/api/designs/import', importRouter(designs));
+  app.use('/api/designs/:designId/shares', designSharesRouter({ reviews, config }));
+  app.use('/api/designs/:designId/uploads', designUploadsRouter(uploads));
+  app.use('/api/designs/:designId', revisionsRouter({ db, designs }));
   const builds = createBuildsService(db);
-  app.use('/api/designs', designsRouter(createDesignsService(db), { builderMayRead: builds.builderMayRead }));
+  app.use('/api/designs', designsRouter(designs, { builderMayRead: builds.builderMayRead }));
   app.use('/api/builds', buildsRouter(builds));
   app.use('/api/analysis', analysisRouter(analysisPool, config.analysis));
   app.use('/api', apiNotFound);
 
+  // The link viewer page may be embedded in an iframe anywhere; every other page keeps frame-ancestors 'self'.
+  app.use('/view', embeddable);
   if (production) serveClient(app, config.clientDist, logger);
 
   app.use(errorHandler(logger));
   return app;
 }
 
-/** Stops the app's background work (expired-session sweeps, analysis threads) before the database closes. */
+/** Stops the app's background work (expired-session sweeps, analysis threads, link counters, mail) before the database closes. */
 export function stopBackgroundWork(app: Express): Promise<void> {
   sessionStores.get(app)?.stopExpiringSessions();
-  return analysisPools.get(app)?.close() ?? Promise.resolve();
+  return Promise.all([analysisPools.get(app)?.close(), stoppers.get(app)?.()]).then(() => undefined);
 }

@@ -1,7 +1,7 @@
 import { randomBytes } from 'node:crypto';
 import { mkdirSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
-import { dirname, resolve } from 'node:path';
+import { dirname, join, resolve } from 'node:path';
 import { z } from 'zod';
 import { DEFAULT_ANALYSIS_MAX_PARTS, DEFAULT_ANALYSIS_TIME_LIMIT_MS } from '../src/domain/checks/findingCap';
 
@@ -22,6 +22,21 @@ export interface AppConfig {
   seedDemo: boolean;
   /** Limits of POST /api/analysis, which runs in a pool of worker threads. */
   analysis: AnalysisLimits;
+  /** Outgoing mail: real SMTP when `smtp` is set; otherwise a local fake server (development, tests). */
+  /** `catcher`: with no SMTP, run the local fake SMTP server (default outside production; MAIL_CATCHER=true forces it, e.g. for end-to-end tests). */
+  mail: { from: string; smtp: SmtpSettings | null; catcher: boolean };
+  /** Base address put into e-mailed links; null means "the address the request came to". */
+  publicUrl: string | null;
+  /** Folder of uploaded files (outside the served client folder). */
+  uploadsDir: string;
+}
+
+export interface SmtpSettings {
+  host: string;
+  port: number;
+  secure: boolean;
+  user?: string;
+  pass?: string;
 }
 
 export interface AnalysisLimits {
@@ -74,6 +89,15 @@ const environmentSchema = z
     ANALYSIS_MAX_PARTS: wholeNumber(1, 1_000_000).optional(),
     ANALYSIS_TIME_LIMIT_MS: wholeNumber(100, 600_000).optional(),
     ANALYSIS_THREADS: wholeNumber(1, 64).optional(),
+    SMTP_HOST: z.string().optional(),
+    SMTP_PORT: z.coerce.number({ error: 'Use a whole number between 1 and 65535' }).int().min(1).max(65535).optional(),
+    SMTP_SECURE: booleanText.optional(),
+    SMTP_USER: z.string().optional(),
+    SMTP_PASS: z.string().optional(),
+    MAIL_FROM: z.string().optional(),
+    MAIL_CATCHER: booleanText.optional(),
+    PUBLIC_URL: z.url({ error: 'Give the address people reach Slotwise at, e.g. https://frames.example.com' }).optional(),
+    UPLOADS_DIR: z.string().optional(),
   })
   .superRefine((env, ctx) => {
     if (env.NODE_ENV !== 'production') return;
@@ -145,5 +169,14 @@ export function loadConfig(
       timeLimitMs: env.ANALYSIS_TIME_LIMIT_MS ?? DEFAULT_ANALYSIS_LIMITS.timeLimitMs,
       threads: env.ANALYSIS_THREADS ?? DEFAULT_ANALYSIS_LIMITS.threads,
     },
+    mail: {
+      from: env.MAIL_FROM || 'Slotwise <no-reply@slotwise.invalid>',
+      smtp: env.SMTP_HOST
+        ? { host: env.SMTP_HOST, port: env.SMTP_PORT ?? 587, secure: env.SMTP_SECURE ?? false, user: env.SMTP_USER || undefined, pass: env.SMTP_PASS || undefined }
+        : null,
+      catcher: env.MAIL_CATCHER ?? env.NODE_ENV !== 'production',
+    },
+    publicUrl: env.PUBLIC_URL ? env.PUBLIC_URL.replace(/\/+$/, '') : null,
+    uploadsDir: resolve(env.UPLOADS_DIR || join(dirname(databasePath), 'uploads')),
   };
 }

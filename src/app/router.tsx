@@ -23,6 +23,12 @@ const PrintInstructionsPage = lazyPage(() => import('@/features/workbench/compon
 const PieceLabelsPage = lazyPage(() => import('@/features/workbench/components/PieceLabelsPage'), pageSkeleton);
 const ReviewsPage = lazyPage(() => import('@/features/reviews/components/ReviewsPage'), pageSkeleton);
 const ClassesPage = lazyPage(() => import('@/features/classes/components/ClassesPage'), pageSkeleton);
+const ForgotPasswordPage = lazyPage(() => import('@/features/auth/components/ForgotPasswordPage'), pageSkeleton);
+const ResetPasswordPage = lazyPage(() => import('@/features/auth/components/ResetPasswordPage'), pageSkeleton);
+const LinkViewerPage = lazyPage(() => import('@/features/linkViewer/components/LinkViewerPage'), <EditorSkeleton />);
+const ReviewPage = lazyPage(() => import('@/features/reviews/components/ReviewPage'), <EditorSkeleton />);
+const OutboxPage = lazyPage(() => import('@/features/outbox/components/OutboxPage'), pageSkeleton);
+const DesignHistoryPage = lazyPage(() => import('@/features/designs/components/DesignHistoryPage'), pageSkeleton);
 const NotFoundPage = lazyPage(() => import('./routes/NotFoundPage'), pageSkeleton);
 
 /** Route tree per the client-routes contract. Guards (RequireRole) sit above the pages they protect. */
@@ -32,6 +38,10 @@ export const routes: RouteObject[] = [
     errorElement: <RouteErrorBoundary />,
     children: [
       { path: '/sign-in', Component: SignInPage },
+      { path: '/forgot-password', Component: ForgotPasswordPage },
+      { path: '/reset-password', Component: ResetPasswordPage },
+      // Read-only links: no sign-in.
+      { path: '/view/:token', Component: LinkViewerPage },
       {
         element: <RequireRole />,
         children: [
@@ -43,12 +53,15 @@ export const routes: RouteObject[] = [
                 children: [
                   { index: true, element: <HomeRedirect /> },
                   { path: 'designs', element: <RequireRole roles={['owner', 'designer']} />, children: [{ index: true, Component: DesignsPage }] },
+                  { path: 'designs/:designId/history', element: <RequireRole roles={['owner', 'designer']} />, children: [{ index: true, Component: DesignHistoryPage }] },
+                  { path: 'outbox', element: <RequireRole roles={['owner']} />, children: [{ index: true, Component: OutboxPage }] },
                   { path: 'people', element: <RequireRole roles={['owner']} />, children: [{ index: true, Component: PeoplePage }] },
                   { path: 'account', Component: AccountPage },
                   { path: 'workbench', element: <RequireRole roles={['builder']} />, children: [{ index: true, Component: WorkbenchPage }] },
                   // Builders work on a build; owners and designers open it to watch progress (their ticks are refused).
                   { path: 'workbench/builds/:buildId', element: <RequireRole roles={['builder', 'owner', 'designer']} />, children: [{ index: true, Component: BuildPage }] },
                   { path: 'reviews', element: <RequireRole roles={['customer']} />, children: [{ index: true, Component: ReviewsPage }] },
+                  { path: 'reviews/:designId', element: <RequireRole roles={['customer', 'owner', 'designer']} />, children: [{ index: true, Component: ReviewPage }] },
                   { path: 'classes', element: <RequireRole roles={['instructor']} />, children: [{ index: true, Component: ClassesPage }] },
                   { path: '*', Component: NotFoundPage },
                 ],

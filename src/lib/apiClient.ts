@@ -63,7 +63,9 @@ export async function apiFetch<S extends z.ZodType | undefined = undefined>(
 ): Promise<ApiResult<S>> {
   const { method = 'GET', body, signal, schema } = options;
   const headers: Record<string, string> = { Accept: 'application/json', 'X-Slotwise-Client': '1' };
-  if (body !== undefined) headers['Content-Type'] = 'application/json';
+  // FormData (file uploads) sets its own multipart Content-Type with the boundary.
+  const isForm = typeof FormData !== 'undefined' && body instanceof FormData;
+  if (body !== undefined && !isForm) headers['Content-Type'] = 'application/json';
 
   let response: Response;
   try {
@@ -71,7 +73,7 @@ export async function apiFetch<S extends z.ZodType | undefined = undefined>(
       method,
       headers,
       credentials: 'same-origin',
-      body: body === undefined ? undefined : JSON.stringify(body),
+      body: body === undefined ? undefined : isForm ? (body as FormData) : JSON.stringify(body),
       signal,
     });
   } catch (cause) {

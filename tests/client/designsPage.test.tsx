@@ -24,6 +24,7 @@ function summary(overrides: Partial<DesignSummary>): DesignSummary {
     updatedBy: { id: 2, displayName: 'Tomasz Reyes' },
     thumbnailUrl: null,
     profileCount: 12,
+    approval: null,
     ...overrides,
   };
 }

@@ -12,7 +12,7 @@ afterEach(() => {
 
 // The contract's client routes: which entries each role's navigation lists.
 const EXPECTED: Record<Role, string[]> = {
-  owner: ['Designs', 'People', 'Account'],
+  owner: ['Designs', 'People', 'Outbox', 'Account'],
   designer: ['Designs', 'Account'],
   builder: ['Workbench', 'Account'],
   customer: ['Reviews', 'Account'],

@@ -6,6 +6,10 @@ import * as createDesigns from './0003-create-designs';
 import * as designRevisionCounts from './0004-design-revision-counts';
 import * as createBuilds from './0020-create-builds';
 import * as createBuildProgress from './0021-create-build-progress';
+import * as createLinksAndClasses from './0010-create-links-and-classes';
+import * as createReviews from './0011-create-reviews';
+import * as createPasswordResets from './0012-create-password-resets';
+import * as createUploads from './0013-create-uploads';
 
 /**
  * Every migration, oldest first. Listed by import rather than found by glob so the same list works
@@ -18,4 +22,8 @@ export const migrations: RunnableMigration<QueryInterface>[] = [
   { name: '0004-design-revision-counts', ...designRevisionCounts },
   { name: '0020-create-builds', ...createBuilds },
   { name: '0021-create-build-progress', ...createBuildProgress },
+  { name: '0010-create-links-and-classes', ...createLinksAndClasses },
+  { name: '0011-create-reviews', ...createReviews },
+  { name: '0012-create-password-resets', ...createPasswordResets },
+  { name: '0013-create-uploads', ...createUploads },
 ];

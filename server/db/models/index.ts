@@ -4,6 +4,7 @@ import { initDesignModel } from './design';
 import { initDesignRevisionModel } from './designRevision';
 import { initSessionModel } from './session';
 import { initUserModel } from './user';
+import { initSharingModels } from './sharing';
 
 export function defineModels(sequelize: Sequelize) {
   const User = initUserModel(sequelize);
@@ -11,7 +12,7 @@ export function defineModels(sequelize: Sequelize) {
   const DesignRevision = initDesignRevisionModel(sequelize);
   const Session = initSessionModel(sequelize);
   const { Build, BuildAssignee, BuildStateChange, BuildProgress } = initBuildModels(sequelize);
-  return { User, Design, DesignRevision, Session, Build, BuildAssignee, BuildStateChange, BuildProgress };
+  return { User, Design, DesignRevision, Session, Build, BuildAssignee, BuildStateChange, BuildProgress, ...initSharingModels(sequelize) };
 }
 
 export type Models = ReturnType<typeof defineModels>;

@@ -29,3 +29,18 @@ export const changePasswordBodySchema = z.strictObject(
   },
   objectError,
 );
+
+export const passwordResetRequestBodySchema = z.strictObject(
+  {
+    email: z.string({ error: 'Enter your email address' }).trim().toLowerCase().min(1, 'Enter your email address').max(254, 'An email address is at most 254 characters'),
+  },
+  objectError,
+);
+
+export const passwordResetConfirmBodySchema = z.strictObject(
+  {
+    token: z.string({ error: 'The reset link is incomplete' }).min(1, 'The reset link is incomplete').max(200, 'The reset link is not valid'),
+    newPassword: newPasswordSchema,
+  },
+  objectError,
+);

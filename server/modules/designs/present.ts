@@ -4,7 +4,7 @@ import { sqliteDateToIso } from '../../db/dates';
 import type { DesignSummary, RevisionMeta } from '../../../src/domain/contracts';
 
 /** The response shapes are the contract's (`src/domain/contracts/designs.ts`). */
-export type { DesignSummary, PersonRef, RevisionMeta } from '../../../src/domain/contracts';
+export type { ApprovalSummary, DesignSummary, PersonRef, RevisionMeta } from '../../../src/domain/contracts';
 
 export interface Revision extends RevisionMeta {
   document: DesignDocument;
@@ -23,6 +23,10 @@ export interface SummaryRow {
   updatedByName: string;
   hasThumbnail: number;
   profileCount: number | null;
+  approvalRevision?: number | null;
+  approvalDecision?: 'approved' | 'changes_requested' | null;
+  approvalBy?: string | null;
+  approvalAt?: string | null;
 }
 
 export function presentSummary(row: SummaryRow): DesignSummary {
@@ -35,6 +39,10 @@ export function presentSummary(row: SummaryRow): DesignSummary {
     updatedBy: { id: row.updatedById, displayName: row.updatedByName },
     thumbnailUrl: row.hasThumbnail ? thumbnailUrl(row.id, row.latestRevision) : null,
     profileCount: row.profileCount ?? 0,
+    approval:
+      row.approvalRevision && row.approvalDecision
+        ? { revision: row.approvalRevision, decision: row.approvalDecision, by: row.approvalBy ?? '', at: sqliteDateToIso(row.approvalAt ?? null), current: row.approvalRevision === row.latestRevision }
+        : null,
   };
 }
 

@@ -20,9 +20,12 @@ import {
 const SUMMARY_SELECT = `
   SELECT d.id AS id, d.name AS name, d.system_id AS systemId, d.latest_revision AS latestRevision,
          d.updated_at AS updatedAt, u.id AS updatedById, u.display_name AS updatedByName,
-         d.has_thumbnail AS hasThumbnail, d.profile_count AS profileCount
+         d.has_thumbnail AS hasThumbnail, d.profile_count AS profileCount,
+         rd.revision_number AS approvalRevision, rd.decision AS approvalDecision, du.display_name AS approvalBy, rd.created_at AS approvalAt
     FROM designs d
     JOIN users u ON u.id = COALESCE(d.updated_by, d.created_by)
+    LEFT JOIN review_decisions rd ON rd.id = (SELECT x.id FROM review_decisions x WHERE x.design_id = d.id ORDER BY x.created_at DESC, x.id DESC LIMIT 1)
+    LEFT JOIN users du ON du.id = rd.decided_by
    WHERE d.archived_at IS NULL`;
 
 const REVISION_SELECT = `

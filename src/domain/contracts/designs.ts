@@ -17,7 +17,13 @@ export const designSummarySchema = z.object({
   updatedBy: personRefSchema,
   thumbnailUrl: z.string().nullable(),
   profileCount: z.number(),
+  /** The customer's newest decision; `current` when it is about the latest revision. */
+  approval: z
+    .object({ revision: z.number(), decision: z.enum(['approved', 'changes_requested']), by: z.string(), at: z.string(), current: z.boolean() })
+    .nullable()
+    .default(null),
 });
+export type ApprovalSummary = NonNullable<z.infer<typeof designSummarySchema>['approval']>;
 export type DesignSummary = z.infer<typeof designSummarySchema>;
 
 /** A revision without its document (lists, and answers where the document is not needed). */

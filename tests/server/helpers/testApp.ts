@@ -45,6 +45,7 @@ export interface TestAppOptions {
   /** Replaces the recording logger. */
   logger?: Logger;
   analysisPool?: AnalysisPool;
+  linkRateLimit?: { max: number; windowMs: number };
 }
 
 export const demoEmail = (role: Role) => DEMO_ACCOUNTS.find((account) => account.role === role)!.email;
@@ -76,6 +77,7 @@ export async function buildTestApp(options: TestAppOptions = {}): Promise<TestAp
     analysisPool: options.analysisPool,
     passwordCost: TEST_PASSWORD_COST,
     rateLimit: options.rateLimit ?? { signInMax: 1000, windowMs: 60_000 },
+    linkRateLimit: options.linkRateLimit ?? { max: 100_000, windowMs: 60_000 },
   });
 
   async function signInAs(email: string, password: string): Promise<Agent> {

@@ -1,3 +1,4 @@
+import { Link } from 'react-router';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { z } from 'zod';
@@ -69,6 +70,9 @@ export function SignInForm({ onSignedIn }: { onSignedIn: (user: User) => void })
       <Button type="submit" variant="primary" pending={signIn.isPending} icon={<LogIn aria-hidden className="size-4" />} className="w-full">
         Sign in
       </Button>
+      <Link to="/forgot-password" className="text-center text-sm text-accent underline-offset-2 hover:underline">
+        Forgot your password?
+      </Link>
     </form>
   );
 }

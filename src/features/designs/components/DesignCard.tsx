@@ -1,5 +1,5 @@
 import { Link } from 'react-router';
-import { Hammer, Trash } from 'lucide-react';
+import { Hammer, History, Share2, Trash } from 'lucide-react';
 import { BUILD_STATE_LABELS, type BuildSummary } from '@/domain/contracts/builds';
 import { firstName, formatRelativeTime, pluralize } from '@/lib/format';
 import { profileSystemLabel } from '../profileSystems';
@@ -12,10 +12,11 @@ export interface DesignCardProps {
   /** Builds of this design, with their progress. */
   builds?: BuildSummary[];
   onAssignBuild?: (design: DesignSummary) => void;
+  onShare?: (design: DesignSummary) => void;
 }
 
 /** One design in the list: picture and name open the editor; the bin asks before deleting. */
-export function DesignCard({ design, onDelete, builds = [], onAssignBuild }: DesignCardProps) {
+export function DesignCard({ design, onDelete, builds = [], onAssignBuild, onShare }: DesignCardProps) {
   return (
     // The ring goes on the whole card when its link has keyboard focus (the title itself is clipped by truncation).
     <li className="group relative flex flex-col overflow-hidden rounded-card border border-paper-line bg-paper-raised transition-shadow hover:shadow-md has-[a:focus-visible]:outline-3 has-[a:focus-visible]:outline-offset-2 has-[a:focus-visible]:outline-[#0b7a75] has-[a:focus-visible]:outline-solid">
@@ -38,7 +39,21 @@ export function DesignCard({ design, onDelete, builds = [], onAssignBuild }: Des
           <p className="text-xs text-ink-muted">
             Updated <time dateTime={design.updatedAt}>{formatRelativeTime(design.updatedAt)}</time> by {firstName(design.updatedBy.displayName)}
           </p>
+          {design.approval && (
+            <p className="relative z-10 text-xs font-medium" data-testid="approval">
+              {design.approval.decision === 'approved' ? `Approved r${design.approval.revision}` : `Changes asked on r${design.approval.revision}`} by {design.approval.by}
+              {!design.approval.current && ` · r${design.latestRevision} not yet reviewed`}
+            </p>
+          )}
         </div>
+        {onShare && (
+          <button type="button" onClick={() => onShare(design)} aria-label={`Share ${design.name}`} title="Share" className="relative z-10 grid size-11 shrink-0 place-items-center rounded-lg text-ink-muted hover:bg-paper-sunk hover:text-ink focus-ring">
+            <Share2 aria-hidden className="size-5" />
+          </button>
+        )}
+        <Link to={`/designs/${design.id}/history`} aria-label={`Revisions and files of ${design.name}`} title="Revisions and files" className="relative z-10 grid size-11 shrink-0 place-items-center rounded-lg text-ink-muted hover:bg-paper-sunk hover:text-ink focus-ring">
+          <History aria-hidden className="size-5" />
+        </Link>
         <button
           type="button"
           onClick={() => onDelete(design)}

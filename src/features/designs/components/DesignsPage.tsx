@@ -9,6 +9,8 @@ import { DesignCard } from './DesignCard';
 import { AssignBuildDialog } from './AssignBuildDialog';
 import { DeleteDesignDialog } from './DeleteDesignDialog';
 import { NewDesignDialog } from './NewDesignDialog';
+import { ShareDialog } from './ShareDialog';
+import { ImportDesignButton } from './ImportDesignButton';
 
 export default function DesignsPage() {
   const designs = useDesigns();
@@ -16,6 +18,7 @@ export default function DesignsPage() {
   const [deleting, setDeleting] = useState<DesignSummary | null>(null);
   const [assigning, setAssigning] = useState<DesignSummary | null>(null);
   const builds = useAllBuilds();
+  const [sharing, setSharing] = useState<DesignSummary | null>(null);
   const newDesignButton = (
     <Button variant="primary" icon={<Plus aria-hidden className="size-4" />} onClick={() => setCreating(true)}>
       New design
@@ -24,7 +27,7 @@ export default function DesignsPage() {
 
   return (
     <PageFrame>
-      <PageHeader title="Designs" description="Frames your shop is drawing, newest changes first." actions={newDesignButton} />
+      <PageHeader title="Designs" description="Frames your shop is drawing, newest changes first." actions={<div className="flex gap-2"><ImportDesignButton />{newDesignButton}</div>} />
       {designs.isPending ? (
         <DesignGridSkeleton />
       ) : designs.error ? (
@@ -42,6 +45,7 @@ export default function DesignsPage() {
               onDelete={setDeleting}
               builds={builds.data?.filter((build) => build.designId === design.id)}
               onAssignBuild={setAssigning}
+              onShare={setSharing}
             />
           ))}
         </ul>
@@ -49,6 +53,7 @@ export default function DesignsPage() {
       <NewDesignDialog open={creating} onClose={() => setCreating(false)} />
       <DeleteDesignDialog design={deleting} onClose={() => setDeleting(null)} />
       <AssignBuildDialog design={assigning} onClose={() => setAssigning(null)} />
+      <ShareDialog design={sharing} onClose={() => setSharing(null)} />
     </PageFrame>
   );
 }

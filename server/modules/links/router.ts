@@ -1,0 +1,107 @@
+import { Router, type RequestHandler } from 'express';
+import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
+import type { z } from 'zod';
+import type { AppConfig } from '../../config';
+import { AppError } from '../../middleware/appError';
+import { requireRole } from '../../middleware/requireAuth';
+import { validate } from '../../middleware/validate';
+import { publicBaseUrl } from '../../publicUrl';
+import { sendRevisionJson } from '../designs/revisionJson';
+import type { DesignsService } from '../designs/service';
+import type { Mailer } from '../mail/mailService';
+import { readOnlyLinkMail } from '../mail/messages';
+import { createLinkBodySchema, linkIdParamsSchema, listLinksQuerySchema, tokenParamsSchema } from './schemas';
+import { linkNotFound, type LinksService } from './service';
+
+/** Roles that may make read-only links. */
+export const LINK_MAKERS = ['owner', 'designer', 'instructor'] as const;
+
+/** /api/links — make, list and withdraw read-only links (owner, designer, instructor). */
+export function linksRouter(deps: { links: LinksService; designs: DesignsService; mailer: Mailer; config: AppConfig }): Router {
+  const { links, designs, mailer, config } = deps;
+  const router = Router();
+  router.use(requireRole(...LINK_MAKERS));
+
+  router.get('/', validate({ query: listLinksQuerySchema }), async (req, res) => {
+    const { designId } = req.query as unknown as z.output<typeof listLinksQuerySchema>;
+    res.json({ links: await links.list(req.user!, { designId }) });
+  });
+
+  /** The designs a link can point at (instructors have no designs list of their own). */
+  router.get('/designs', async (_req, res) => {
+    const list = await designs.list();
+    res.json({ designs: list.map(({ id, name, systemId, latestRevision, thumbnailUrl }) => ({ id, name, systemId, latestRevision, thumbnailUrl })) });
+  });
+
+  router.post('/', validate({ body: createLinkBodySchema }), async (req, res) => {
+    const body = req.body as z.output<typeof createLinkBodySchema>;
+    const created = await links.create(req.user!, body);
+    const url = `${publicBaseUrl(req, config)}${created.path}`;
+    if (body.email) {
+      await mailer.send(readOnlyLinkMail({ to: body.email, designName: created.link.designName, senderName: req.user!.displayName, linkUrl: url, expiresAt: created.link.expiresAt }));
+    }
+    res.status(201).json({ link: created.link, token: created.token, url });
+  });
+
+  router.delete('/:id', validate({ params: linkIdParamsSchema }), async (req, res) => {
+    const { id } = req.params as unknown as z.output<typeof linkIdParamsSchema>;
+    res.json({ link: await links.revoke(req.user!, id) });
+  });
+
+  return router;
+}
+
+export interface LinkRateLimit {
+  /** Requests per client address within the window, over all link routes. */
+  max: number;
+  windowMs: number;
+}
+
+export const DEFAULT_LINK_RATE_LIMIT: LinkRateLimit = { max: 600, windowMs: 60_000 };
+
+function linkRateLimiter(limits: LinkRateLimit): RequestHandler {
+  return rateLimit({
+    windowMs: limits.windowMs,
+    limit: limits.max,
+    standardHeaders: 'draft-8',
+    legacyHeaders: false,
+    keyGenerator: (req) => ipKeyGenerator(req.ip ?? 'unknown'),
+    handler: (_req, res) => {
+      res.status(429).json({ error: { code: 'rate_limited', message: 'Too many requests for shared links from this address. Wait a minute and try again.' } });
+    },
+  });
+}
+
+/**
+ * /api/shared/:token — what a read-only link shows, without signing in. Mounted before sessions:
+ * a link never carries or creates a session. Only GET exists; every other method is refused.
+ */
+export function sharedRouter(deps: { links: LinksService; rateLimit?: LinkRateLimit }): Router {
+  const router = Router();
+  router.use(linkRateLimiter(deps.rateLimit ?? DEFAULT_LINK_RATE_LIMIT));
+  router.use((req, res, next) => {
+    res.setHeader('X-Robots-Tag', 'noindex, nofollow');
+    if (req.method !== 'GET' && req.method !== 'HEAD') {
+      throw new AppError(403, 'read_only_link', 'A shared link is read-only: nothing can be changed through it.');
+    }
+    next();
+  });
+
+  router.get('/:token', validate({ params: tokenParamsSchema }), async (req, res) => {
+    const { token } = req.params as unknown as z.output<typeof tokenParamsSchema>;
+    if (!/^[A-Za-z0-9_-]{43}$/.test(token)) {
+      // Malformed tokens take the same path as unknown ones, so the answer time says nothing.
+      await deps.links.open('0'.repeat(43)).catch(() => undefined);
+      throw linkNotFound();
+    }
+    const { link, design, revision } = await deps.links.open(token);
+    // A visitor sees the revision's number and date, not who saved it.
+    const meta = { ...revision.meta, createdBy: { id: 0, displayName: '' }, thumbnailUrl: null };
+    sendRevisionJson(res, { link, design }, meta, revision.documentJson);
+  });
+
+  router.use(() => {
+    throw linkNotFound();
+  });
+  return router;
+}

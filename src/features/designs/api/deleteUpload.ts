@@ -1,0 +1,12 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { apiFetch } from '@/lib/apiClient';
+import { sharingKeys } from './sharingSchemas';
+
+export async function deleteUpload({ id }: { id: number; designId: number }): Promise<void> {
+  await apiFetch(`/api/uploads/${id}`, { method: 'DELETE' });
+}
+
+export function useDeleteUpload() {
+  const queryClient = useQueryClient();
+  return useMutation({ mutationFn: deleteUpload, onSuccess: (_result, input) => queryClient.invalidateQueries({ queryKey: sharingKeys.uploads(input.designId) }) });
+}
