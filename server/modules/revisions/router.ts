@@ -26,7 +26,9 @@ export const fileStem = (name: string) => name.normalize('NFKD').replace(/[^A-Za
 export function revisionsRouter(deps: { db: Database; designs: DesignsService }): Router {
   const { db, designs } = deps;
   const router = Router({ mergeParams: true });
-  router.use(requireRole('owner', 'designer'));
+  // Mounted at /api/designs/:designId beside the designs router: guard only these paths, so the
+  // designs router's own rules (an assigned builder may read a revision) still apply to the rest.
+  router.use(['/history', '/diff', '/export'], requireRole('owner', 'designer'));
 
   router.get('/history', validate({ params: designParamsSchema }), async (req, res) => {
     const { designId } = req.params as unknown as DesignParams;

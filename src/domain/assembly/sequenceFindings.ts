@@ -21,8 +21,21 @@ import type { Finding, FindingFix } from '../analysisTypes';
 import type { Box } from '../geometry/box';
 import type { Joint, ProfileEnd, Vec3 } from '../design/schema';
 import { accessoriesAt, allDesignIds, CONTACT_TOLERANCE_MM, jointsAt, type AnalysisContext, type ProfileInfo } from '../checks/context';
-import { findingId, profileName } from '../checks/describe';
+import { capitalise, findingId, jointName, panelName, profileName } from '../checks/describe';
 import { useDropInTNutsFix } from '../checks/fixes';
+
+/** The name people read for any part of the design (labels, never internal ids). */
+function nameOf(ctx: AnalysisContext, id: string): string {
+  const profile = ctx.profileById.get(id);
+  if (profile) return profileName(profile);
+  const panel = ctx.panels.find((p) => p.panel.id === id);
+  if (panel) return panelName(panel.panel);
+  const joint = ctx.design.joints.find((j) => j.id === id);
+  if (joint) return jointName(ctx, joint);
+  const accessory = ctx.design.accessories.find((a) => a.id === id);
+  if (accessory) return `the ${accessory.kind.replace(/-/g, ' ')}`;
+  return 'a part';
+}
 
 const CHECK = 'sequence';
 /** Accessories that close a profile end's slots. */
@@ -100,7 +113,7 @@ export function sequenceFindings(ctx: AnalysisContext): Finding[] {
           check: CHECK,
           severity: 'error',
           partIds: [joint.id, m.profileId],
-          message: `Joint ${joint.id} is made in ${model.title(js)}, before profile ${m.profileId} is in place in ${model.title(ps)}. Move step ${ps + 1} before step ${js + 1}.`,
+          message: `${capitalise(jointName(ctx, joint))} is made in ${model.title(js)}, before ${nameOf(ctx, m.profileId)} is in place in ${model.title(ps)}. Move step ${ps + 1} before step ${js + 1}.`,
           fix: moveBeforeFix(model, ps, js),
         });
       }
@@ -149,7 +162,7 @@ function checkSlideInTNuts(ctx: AnalysisContext, model: StepModel, joint: Joint,
       check: CHECK,
       severity: 'error',
       partIds: [joint.id, info.profile.id],
-      message: `Joint ${joint.id} uses slide-in T-nuts in ${profileName(info, info.profile.id)}, but both its ends are closed before ${model.title(jointStep)} (in ${model.title(startClosed as number)} and ${model.title(endClosed as number)}). Move step ${jointStep + 1} before step ${last + 1}, or use drop-in T-nuts.`,
+      message: `${capitalise(jointName(ctx, joint))} uses slide-in T-nuts in ${profileName(info, info.profile.id)}, but both its ends are closed before ${model.title(jointStep)} (in ${model.title(startClosed as number)} and ${model.title(endClosed as number)}). Move step ${jointStep + 1} before step ${last + 1}, or use drop-in T-nuts.`,
       fix: useDropInTNutsFix(joint.id) ?? moveBeforeFix(model, jointStep, last),
     });
   }
@@ -178,13 +191,12 @@ function checkCapturedPanels(ctx: AnalysisContext, model: StepModel, out: Findin
       }
     }
     if (open || closedAt >= ps) continue;
-    const label = info.panel.label ? ` (${info.panel.label})` : '';
     out.push({
       id: findingId(CHECK, 'panel-after-frame', [panelId]),
       check: CHECK,
       severity: 'error',
       partIds: [panelId, closer, ...info.bounding.map((b) => b.profile.id).filter((id) => id !== closer)],
-      message: `Panel ${panelId}${label} is captured in slots but slides in at ${model.title(ps)}, after ${closer} closes its frame in ${model.title(closedAt)}. Move step ${ps + 1} before step ${closedAt + 1}.`,
+      message: `${capitalise(panelName(info.panel))} is captured in slots but slides in at ${model.title(ps)}, after ${nameOf(ctx, closer)} closes its frame in ${model.title(closedAt)}. Move step ${ps + 1} before step ${closedAt + 1}.`,
       fix: moveBeforeFix(model, ps, closedAt),
       data: { panelStep: ps + 1, closingStep: closedAt + 1 },
     });
@@ -283,7 +295,7 @@ function checkReachability(ctx: AnalysisContext, model: StepModel, out: Finding[
       check: CHECK,
       severity: 'error',
       partIds: [id, latestId],
-      message: `${id} in ${model.title(mine)} cannot be brought into place from any side: ${latestId}, placed in ${model.title(latest)}, is in the way. Move step ${mine + 1} before step ${latest + 1}.`,
+      message: `${capitalise(nameOf(ctx, id))} in ${model.title(mine)} cannot be brought into place from any side: ${nameOf(ctx, latestId)}, placed in ${model.title(latest)}, is in the way. Move step ${mine + 1} before step ${latest + 1}.`,
       fix: moveBeforeFix(model, mine, latest),
     });
   };
@@ -330,7 +342,7 @@ function checkSubAssemblies(ctx: AnalysisContext, model: StepModel, out: Finding
           check: CHECK,
           severity: 'error',
           partIds: [sub.id, blockerId, blockedPart],
-          message: `The ${sub.name} cannot be joined along its join direction in ${model.title(join)}: ${blockerId}, placed in ${model.title(blocker)}, is in the way of ${blockedPart}. Move step ${join + 1} before step ${blocker + 1}.`,
+          message: `The ${sub.name} cannot be joined along its join direction in ${model.title(join)}: ${nameOf(ctx, blockerId)}, placed in ${model.title(blocker)}, is in the way of ${nameOf(ctx, blockedPart)}. Move step ${join + 1} before step ${blocker + 1}.`,
           fix: moveBeforeFix(model, join, blocker),
         });
       }
@@ -373,7 +385,7 @@ function checkCoverage(ctx: AnalysisContext, model: StepModel, out: Finding[]): 
       check: CHECK,
       severity: 'warning',
       partIds: twice,
-      message: `${twice.length === 1 ? `${twice[0]} is` : `${twice.slice(0, 8).join(', ')}${twice.length > 8 ? '…' : ''} are`} in more than one step; each part goes in once (the first step counts).`,
+      message: `${twice.length === 1 ? `${capitalise(nameOf(ctx, twice[0]))} is` : `${capitalise(twice.slice(0, 8).map((id) => nameOf(ctx, id)).join(', '))}${twice.length > 8 ? '…' : ''} are`} in more than one step; each part goes in once (the first step counts).`,
     });
   }
   const missing = [...design.profiles, ...design.joints, ...design.panels, ...design.accessories].map((x) => x.id).filter((id) => !model.stepOf.has(id));
@@ -383,7 +395,7 @@ function checkCoverage(ctx: AnalysisContext, model: StepModel, out: Finding[]): 
       check: CHECK,
       severity: 'warning',
       partIds: missing,
-      message: `${missing.length} ${missing.length === 1 ? 'part is' : 'parts are'} in no assembly step (${missing.slice(0, 8).join(', ')}${missing.length > 8 ? '…' : ''}). Move ${missing.length === 1 ? 'it' : 'them'} into a step, or regenerate the sequence.`,
+      message: `${missing.length} ${missing.length === 1 ? 'part is' : 'parts are'} in no assembly step (${missing.slice(0, 8).map((id) => nameOf(ctx, id)).join(', ')}${missing.length > 8 ? '…' : ''}). Move ${missing.length === 1 ? 'it' : 'them'} into a step, or regenerate the sequence.`,
       fix: { label: `Add to the last step`, operation: { type: 'movePartsToStep', payload: { partIds: missing, stepId: design.steps[design.steps.length - 1].id } } },
     });
   }

@@ -100,7 +100,7 @@ function checkThickness(ctx: AnalysisContext, info: PanelInfo, out: Finding[]): 
       check: CHECK,
       severity: 'warning',
       partIds: [panel.id, ...info.bounding.map((b) => b.profile.id)],
-      message: `${formatNumber(panel.thickness)} mm ${materialName} may be up to ${formatNumber(panel.thickness + tolerance, 2)} mm thick (tolerance ±${formatNumber(tolerance, 2)} mm; ${info.material?.thicknessTolerance.source ?? 'no source'}), more than the ${formatNumber(slotOpening)} mm slot opening of the ${systemName} profiles around panel ${panel.id}: it may not go into the slot.${instead}`,
+      message: `${formatNumber(panel.thickness)} mm ${materialName} may be up to ${formatNumber(panel.thickness + tolerance, 2)} mm thick (tolerance ±${formatNumber(tolerance, 2)} mm; ${info.material?.thicknessTolerance.source ?? 'no source'}), more than the ${formatNumber(slotOpening)} mm slot opening of the ${systemName} profiles around ${panelName(panel)}: it may not go into the slot.${instead}`,
       ...(fix ? { fix } : {}),
       data: { thicknessMm: panel.thickness, toleranceMm: round(tolerance), slotOpeningMm: slotOpening },
     });

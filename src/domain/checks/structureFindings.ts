@@ -7,7 +7,7 @@
 import type { Finding, StabilityResult, StructureResult, TipOverResult } from '../analysisTypes';
 import { END_CONDITION_LABELS, type EndCondition } from '../structure/columns';
 import type { AnalysisContext } from './context';
-import { findingId, formatNumber, mm, profileName } from './describe';
+import { findingId, formatNumber, mm, panelName, profileName } from './describe';
 import { structureResults, type FrameMass } from './structureResults';
 
 export { GRAVITY, findLegs, panelSupports, structureCautions, type FrameMass } from './structureResults';
@@ -33,9 +33,9 @@ function loadCaseFindings(ctx: AnalysisContext, r: StructureResult, out: Finding
   for (const p of r.problems) {
     const id = p.partIds[0];
     if (p.reason === 'unknown-load-target') {
-      out.push({ id: findingId(CHECK, 'unknown-load-target', [r.loadCaseId, id]), check: CHECK, severity: 'error', partIds: [id], message: `Load case "${r.loadCaseName}" puts a load on ${id}, which is not in the design.` });
+      out.push({ id: findingId(CHECK, 'unknown-load-target', [r.loadCaseId, id]), check: CHECK, severity: 'error', partIds: [id], message: `Load case "${r.loadCaseName}" puts a load on a part that is not in the design; remove that load or pick the part again.` });
     } else if (p.reason === 'panel-unsupported') {
-      out.push({ id: findingId(CHECK, 'panel-unsupported', [r.loadCaseId, id]), check: CHECK, severity: 'warning', partIds: [id], message: `${lc}, panel ${id} carries ${formatNumber(p.force ?? 0, 0)} N but Slotwise found no profiles under it to carry the load.` });
+      out.push({ id: findingId(CHECK, 'panel-unsupported', [r.loadCaseId, id]), check: CHECK, severity: 'warning', partIds: [id], message: `${lc}, ${panelName(ctx.panels.find((i) => i.panel.id === id)?.panel)} carries ${formatNumber(p.force ?? 0, 0)} N but Slotwise found no profiles under it to carry the load.` });
     } else {
       out.push({ id: findingId(CHECK, 'unsupported', [r.loadCaseId, id]), check: CHECK, severity: 'warning', partIds: p.partIds, message: `${lc}, ${profileName(ctx.profileById.get(id), id)} carries ${formatNumber(p.force ?? 0, 0)} N but no joint supports it, so Slotwise cannot estimate its bending.` });
     }
@@ -107,7 +107,7 @@ function loadCaseFindings(ctx: AnalysisContext, r: StructureResult, out: Finding
       check: CHECK,
       severity: 'warning',
       partIds: [p.panelId],
-      message: `${lc}, panel ${p.panelId} sags an estimated ${mm(p.deflection)} across its ${mm(p.span)} span (${p.method === 'one-way-strip' ? 'as a strip on two supports' : 'as a plate supported on four edges'}), more than span/${formatNumber(r.settings.deflectionLimitRatio, 0)} = ${mm(p.limit)}. Use a thicker sheet or add a cross rail under it.`,
+      message: `${lc}, ${panelName(ctx.panels.find((i) => i.panel.id === p.panelId)?.panel)} sags an estimated ${mm(p.deflection)} across its ${mm(p.span)} span (${p.method === 'one-way-strip' ? 'as a strip on two supports' : 'as a plate supported on four edges'}), more than span/${formatNumber(r.settings.deflectionLimitRatio, 0)} = ${mm(p.limit)}. Use a thicker sheet or add a cross rail under it.`,
       data: { deflectionMm: p.deflection, limitMm: p.limit, spanMm: p.span },
     });
   }

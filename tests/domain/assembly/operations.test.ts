@@ -100,7 +100,7 @@ describe('design document version 2', () => {
     };
     const migrated = migrateToCurrent(v1);
     expect(migrated.fromVersion).toBe(1);
-    expect(migrated.doc.schemaVersion).toBe(2);
+    expect(migrated.doc.schemaVersion).toBe(3);
     const parsed = parseDesignDocument(v1);
     expect(parsed.ok ? [] : parsed.errors).toEqual([]);
     if (!parsed.ok) return;
