@@ -14,7 +14,7 @@ test.describe('signing in and what each role sees', () => {
     // The three seeded designs (contract: "Seeded designs").
     const designs = page.getByRole('list', { name: 'Designs' });
     for (const name of ['Two-level printer enclosure', 'Standing workbench', 'Plant rack']) {
-      await expect(designs.getByRole('link', { name })).toBeVisible();
+      await expect(designs.getByRole('link', { name, exact: true })).toBeVisible();
     }
     await expect(designs.getByText(/Updated .+ by Tomasz/).first()).toBeVisible();
     await page.screenshot({ path: testInfo.outputPath('designs-list.png') });
@@ -26,7 +26,7 @@ test.describe('signing in and what each role sees', () => {
 
   test('the owner sees People with the five demo accounts', async ({ page }) => {
     await signIn(page, 'owner');
-    await expect(mainNav(page).getByRole('link')).toHaveText(['Designs', 'People', 'Account']);
+    await expect(mainNav(page).getByRole('link')).toHaveText(['Designs', 'People', 'Outbox', 'Account']);
 
     await mainNav(page).getByRole('link', { name: 'People' }).click();
     const table = page.getByRole('table');

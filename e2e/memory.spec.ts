@@ -55,7 +55,7 @@ function trackWebglContexts(): void {
 }
 
 async function openDemoDesign(page: Page): Promise<void> {
-  await page.getByRole('link', { name: DEMO_DESIGN }).click();
+  await page.getByRole('link', { name: DEMO_DESIGN, exact: true }).click();
   await page.waitForURL(/\/designs\/\d+$/);
   await page.waitForFunction(() => (window.__slotwiseScene?.stats().profilesDrawn ?? 0) > 0, null, { timeout: 30_000 });
 }
@@ -79,7 +79,7 @@ async function settledSceneMemory(page: Page): Promise<SceneMemory> {
 async function backToDesigns(page: Page): Promise<void> {
   await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Designs' }).click();
   await page.waitForURL((url) => url.pathname === '/designs');
-  await expect(page.getByRole('link', { name: DEMO_DESIGN })).toBeVisible();
+  await expect(page.getByRole('link', { name: DEMO_DESIGN, exact: true })).toBeVisible();
   // The hook goes away when the canvas unmounts.
   await page.waitForFunction(() => window.__slotwiseScene === undefined);
 }

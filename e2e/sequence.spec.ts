@@ -33,7 +33,7 @@ async function dragStep(page: Page, panel: Locator, from: number, to: number): P
 test('a designer reorders the demo enclosure sequence, sees the finding for an infeasible order, undoes, saves and reloads', async ({ page }, testInfo) => {
   test.setTimeout(180_000);
   await signIn(page, 'designer');
-  await page.getByRole('link', { name: DEMO_DESIGN }).click();
+  await page.getByRole('link', { name: DEMO_DESIGN, exact: true }).click();
   await page.waitForURL(/\/designs\/\d+$/);
   const designUrl = page.url();
   const panel = await openSequence(page);

@@ -55,9 +55,11 @@ test.describe.serial('the builder’s workbench', () => {
     const pictures = [await canvas.screenshot()];
     await builder.getByRole('checkbox', { name: 'Step 1 done' }).click();
     await expect(builder.getByText('Done by Ines Varga')).toBeVisible();
+    let thirdTitle = '';
     for (let move = 1; move <= 3; move += 1) {
       await builder.getByRole('button', { name: 'Next step' }).click();
       await expect(builder.getByTestId('step-position')).toContainText(`Step ${move + 1} of 15`);
+      if (move === 2) thirdTitle = (await builder.getByTestId('step-title').textContent()) ?? '';
       pictures.push(await canvas.screenshot());
       expect(pictures[move].equals(pictures[move - 1]), `step ${move + 1} looks like step ${move}`).toBe(false);
       if (move === 1) {
@@ -69,7 +71,8 @@ test.describe.serial('the builder’s workbench', () => {
     // Reload: the page opens at the first step not yet done.
     await builder.reload();
     await expect(builder.getByTestId('step-position')).toContainText('Step 3 of 15');
-    await expect(builder.getByTestId('step-title')).toHaveText('Slide the bottom shelf in from the front');
+    expect(thirdTitle).not.toBe('');
+    await expect(builder.getByTestId('step-title')).toHaveText(thirdTitle);
 
     // Swipe back on the picture.
     const area = await builder.getByTestId('step-swipe-area').boundingBox();

@@ -1,5 +1,5 @@
 import { Link } from 'react-router';
-import { Hammer, History, Share2, Trash } from 'lucide-react';
+import { Eye, Hammer, History, Share2, Trash } from 'lucide-react';
 import { BUILD_STATE_LABELS, type BuildSummary } from '@/domain/contracts/builds';
 import { firstName, formatRelativeTime, pluralize } from '@/lib/format';
 import { profileSystemLabel } from '../profileSystems';
@@ -51,6 +51,9 @@ export function DesignCard({ design, onDelete, builds = [], onAssignBuild, onSha
             <Share2 aria-hidden className="size-5" />
           </button>
         )}
+        <Link to={`/designs/${design.id}/view`} aria-label={`Look at ${design.name} and play its build`} title="Look and play the build (read only)" className="relative z-10 grid size-11 shrink-0 place-items-center rounded-lg text-ink-muted hover:bg-paper-sunk hover:text-ink focus-ring">
+          <Eye aria-hidden className="size-5" />
+        </Link>
         <Link to={`/designs/${design.id}/history`} aria-label={`Revisions and files of ${design.name}`} title="Revisions and files" className="relative z-10 grid size-11 shrink-0 place-items-center rounded-lg text-ink-muted hover:bg-paper-sunk hover:text-ink focus-ring">
           <History aria-hidden className="size-5" />
         </Link>
