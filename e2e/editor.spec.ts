@@ -64,10 +64,11 @@ test('a designer draws a rectangle, joins it, fills it, checks the outputs, undo
     expect(point.y).toBeGreaterThan(canvasBox.y);
     expect(point.y).toBeLessThan(canvasBox.y + canvasBox.height);
   }
-  // Profiles drawn on the floor rest on it: their axes, and the points the tool picks, lie 20 mm up
-  // (half the 40 mm section), so the clicks aim at that height and no perspective shift creeps in.
-  await drawProfile(page, [-700, 20, -300], [300, 20, -300]);
-  await drawProfile(page, [-700, 20, 300], [300, 20, 300]);
+  // The rails are picked on the floor (y = 0) and then rest on it; the cross members snap to the
+  // rails' faces, whose axes lie 20 mm up (half the 40 mm section), so those clicks aim at that
+  // height and no perspective shift creeps in.
+  await drawProfile(page, [-700, 0, -300], [300, 0, -300]);
+  await drawProfile(page, [-700, 0, 300], [300, 0, 300]);
   // A cross member starts on the first rail's face (20 mm, half the 40 mm section, from its axis) and snaps to the other rail's face.
   await drawProfile(page, [100, 20, -280], [100, 20, 280]);
   await drawProfile(page, [-500, 20, -280], [-500, 20, 280]);
