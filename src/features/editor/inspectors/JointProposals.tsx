@@ -3,7 +3,7 @@ import { Check, Link } from 'lucide-react';
 import { defaultCatalogue, connectorFor, getVariant } from '@/domain/catalogue';
 import { jointHostSystemId } from '@/domain/design/jointHardware';
 import { detectJoints, type JointProposal } from '@/domain/design/jointDetection';
-import type { JointKind } from '@/domain/design/schema';
+import type { DesignDocument, JointKind } from '@/domain/design/schema';
 import { Button } from '@/components/ui';
 import type { EditorCommand } from '../commands/EditorCommand';
 import { groupCommand } from '../commands/groupCommand';
@@ -21,8 +21,15 @@ const MEETING_NAMES: Record<JointProposal['kind'], string> = {
   'corner-cube': 'Three-way corner',
 };
 
-function acceptCommand(proposal: JointProposal, kind: JointKind): EditorCommand {
-  const names = proposal.members.map((member) => member.profileId).join(' + ');
+/** What people call a profile here: its label, else its length; never the internal id. */
+function profileLabel(design: DesignDocument, profileId: string): string {
+  const profile = design.profiles.find((candidate) => candidate.id === profileId);
+  if (!profile) return 'a missing profile';
+  return profile.label ?? `${Math.round(profile.length)} mm profile`;
+}
+
+function acceptCommand(design: DesignDocument, proposal: JointProposal, kind: JointKind): EditorCommand {
+  const names = proposal.members.map((member) => profileLabel(design, member.profileId)).join(' + ');
   return operationCommand(`Join ${names} with ${JOINT_KIND_NAMES[kind].toLowerCase()}`, {
     type: 'addJoint',
     payload: { joint: { kind, members: proposal.members } },
@@ -53,7 +60,7 @@ export function JointProposals({ profileId }: { profileId?: string }) {
               store.getState().execute(
                 groupCommand(
                   `Join ${proposals.length} meetings`,
-                  proposals.map((proposal) => acceptCommand(proposal, proposal.suggestedJointKind)),
+                  proposals.map((proposal) => acceptCommand(design, proposal, proposal.suggestedJointKind)),
                 ),
               )
             }
@@ -68,7 +75,7 @@ export function JointProposals({ profileId }: { profileId?: string }) {
       ) : (
         <ul className="flex flex-col gap-2" aria-label="Unjoined meetings">
           {proposals.map((proposal) => (
-            <ProposalRow key={proposal.id} proposal={proposal} onAccept={(kind) => store.getState().execute(acceptCommand(proposal, kind))} />
+            <ProposalRow key={proposal.id} proposal={proposal} onAccept={(kind) => store.getState().execute(acceptCommand(store.getState().design, proposal, kind))} />
           ))}
         </ul>
       )}
@@ -98,7 +105,7 @@ function ProposalRow({ proposal, onAccept }: { proposal: JointProposal; onAccept
     >
       <p className="text-sm text-ink">
         <span className="font-medium">{MEETING_NAMES[proposal.kind]}</span>{' '}
-        <span className="text-ink-soft">{proposal.members.map((member) => member.profileId).join(' · ')}</span>
+        <span className="text-ink-soft">{proposal.members.map((member) => profileLabel(design, member.profileId)).join(' · ')}</span>
       </p>
       <div className="flex items-end gap-2">
         <div className="flex min-w-0 flex-1 flex-col gap-1">
