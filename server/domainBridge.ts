@@ -1,4 +1,4 @@
-import { analyzeDesign, type DesignAnalysis } from '../src/domain/analyze';
+import { analyzeDesign, type DesignAnalysis } from '../src/domain/analysis/analyze';
 import { createEmptyDesign } from '../src/domain/design/create';
 import { parseDesignDocument } from '../src/domain/design/parse';
 import type { DesignDocument } from '../src/domain/design/schema';

@@ -3,13 +3,13 @@
  * thinner: a gasket or retainer strip, with its length), its drawn opening against the frame,
  * its plane against the slots, and the corner notches connectors in the slot call for.
  */
-import type { Finding } from '../analysisTypes';
+import type { Finding } from '../analysis/types';
 import { panelAxes } from '../geometry/panelGeometry';
 import { sectionHalfExtentAlong } from '../geometry/profileGeometry';
 import { dominantAxis } from '../geometry/vectors';
-import type { AnalysisContext, PanelInfo } from './context';
+import type { AnalysisContext, PanelInfo } from '../analysis/context';
 import { sheetThicknessTolerance } from '../catalogue/materials';
-import { capitalise, countOf, findingId, formatNumber, mm, panelName } from './describe';
+import { capitalise, countOf, findingId, formatNumber, mm, panelName } from '../analysis/describe';
 import { addGasketFix, setPanelThicknessFix } from './fixes';
 
 const CHECK = 'panel-fit';

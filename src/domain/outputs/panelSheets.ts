@@ -1,7 +1,7 @@
 /** Sheet size, area, mass and price of each panel; captured panels include slot engagement. */
-import type { PanelCutItem } from '../analysisTypes';
+import type { PanelCutItem } from '../analysis/types';
 import { panelPricePerSquareMetre } from '../catalogue';
-import type { AnalysisContext, PanelInfo } from '../checks/context';
+import type { AnalysisContext, PanelInfo } from '../analysis/context';
 import { cornerNotches } from '../checks/panelFitFindings';
 
 export interface PanelSheet {
