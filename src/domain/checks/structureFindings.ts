@@ -10,7 +10,8 @@ import type { AnalysisContext } from '../analysis/context';
 import { findingId, formatNumber, mm, panelName, profileName } from '../analysis/describe';
 import { structureResults, type FrameMass } from './structureResults';
 
-export { GRAVITY, findLegs, panelSupports, structureCautions, type FrameMass } from './structureResults';
+export { GRAVITY, structureCautions, type FrameMass } from './structureResults';
+export { findLegs, panelSupports } from './frameShape';
 
 const CHECK = 'structure';
 
