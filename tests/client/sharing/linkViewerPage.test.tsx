@@ -51,8 +51,8 @@ describe('read-only link viewer', () => {
 
     // The section view: off until an axis is chosen, then a position slider for that axis.
     expect(screen.queryByLabelText(/Section position/)).not.toBeInTheDocument();
-    await user.click(screen.getByRole('button', { name: 'Y', exact: true }));
-    expect(screen.getByRole('button', { name: 'Y', exact: true })).toHaveAttribute('aria-pressed', 'true');
+    await user.click(screen.getByRole('button', { name: 'Y' }));
+    expect(screen.getByRole('button', { name: 'Y' })).toHaveAttribute('aria-pressed', 'true');
     expect(screen.getByLabelText('Section position along Y')).toBeInTheDocument();
 
     // The steps panel can be hidden; nothing on the page saves.
