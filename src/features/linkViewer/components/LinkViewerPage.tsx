@@ -74,7 +74,7 @@ function SharedView({ token, embedded, data }: { token: string; embedded: boolea
     <div className="flex h-dvh flex-col bg-paper" data-testid="link-viewer">
       {!embedded && (
         <header className="flex flex-wrap items-center gap-3 border-b border-paper-line bg-paper-raised px-4 py-2">
-          <div className="min-w-0 flex-1">
+          <div className="min-w-0 flex-1 basis-full sm:basis-0">
             <h1 className="truncate text-lg font-semibold text-ink">{data.design.name}</h1>
             <p className="text-xs text-ink-muted">
               Read-only view · revision {data.revision.number}
