@@ -1,6 +1,6 @@
 import { Router, type RequestHandler } from 'express';
 import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
-import type { AppConfig } from '../../config';
+import { DEFAULT_LINK_REQUESTS_PER_MINUTE, type AppConfig } from '../../config';
 import { AppError } from '../../middleware/appError';
 import { requireRole } from '../../middleware/requireAuth';
 import { validate } from '../../middleware/validate';
@@ -56,7 +56,7 @@ export interface LinkRateLimit {
   windowMs: number;
 }
 
-export const DEFAULT_LINK_RATE_LIMIT: LinkRateLimit = { max: 600, windowMs: 60_000 };
+export const DEFAULT_LINK_RATE_LIMIT: LinkRateLimit = { max: DEFAULT_LINK_REQUESTS_PER_MINUTE, windowMs: 60_000 };
 
 function linkRateLimiter(limits: LinkRateLimit): RequestHandler {
   return rateLimit({
