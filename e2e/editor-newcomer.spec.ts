@@ -55,10 +55,16 @@ test.describe('the editor as a newcomer meets it', () => {
     await page.keyboard.press('Control+Shift+z');
     await expect(cuts.getByRole('row').filter({ hasText: '1320 mm' }).first()).toBeVisible();
 
-    // 2. Enlarge the outputs area: room for at least ten rows, and the rows are there to read.
-    await outputs(page).getByRole('button', { name: 'Enlarge' }).click();
+    // 2. Outputs at full width: over the whole editor below the top bar (the inspector too), room for at least ten rows.
+    await outputs(page).getByRole('button', { name: 'Full width' }).click();
+    await expect(outputs(page).getByRole('button', { name: 'Full width' })).toHaveAttribute('aria-pressed', 'true');
     const body = page.getByTestId('outputs-body');
     const bodyBox = (await body.boundingBox())!;
+    expect(bodyBox.x, 'the tables start at the window edge').toBeLessThanOrEqual(1);
+    expect(bodyBox.width, 'the tables span the window').toBeGreaterThanOrEqual(page.viewportSize()!.width - 2);
+    // What lies under it cannot take focus or be read out meanwhile.
+    const inspectorInert = () => page.evaluate(() => Boolean(document.querySelector('aside[aria-label="Inspector"]')?.closest('[inert]')));
+    expect(await inspectorInert()).toBe(true);
     const firstRow = cuts.locator('tbody tr').first();
     const rowHeight = (await firstRow.boundingBox())!.height;
     expect(Math.floor(bodyBox.height / rowHeight), 'rows that fit in the enlarged area').toBeGreaterThanOrEqual(10);
@@ -71,8 +77,12 @@ test.describe('the editor as a newcomer meets it', () => {
       if (box && box.y >= bodyBox.y && box.y + box.height <= bodyBox.y + bodyBox.height + 1) visible++;
     }
     expect(visible, `visible rows of ${total}`).toBeGreaterThanOrEqual(Math.min(10, total));
-    await page.screenshot({ path: testInfo.outputPath('editor-outputs-enlarged-1440x900.png') });
-    await outputs(page).getByRole('button', { name: 'Shrink' }).click();
+    await page.screenshot({ path: testInfo.outputPath('editor-outputs-full-width-1440x900.png') });
+    // Escape leaves full width and gives the focus back to its toggle; the model and inspector return.
+    await page.keyboard.press('Escape');
+    await expect(outputs(page).getByRole('button', { name: 'Full width' })).toHaveAttribute('aria-pressed', 'false');
+    await expect(outputs(page).getByRole('button', { name: 'Full width' })).toBeFocused();
+    expect(await inspectorInert()).toBe(false);
 
     // 3. Click a cut row: its profiles are selected, in the parts list and the inspector.
     await showTab(page, 'Cuts');
@@ -118,6 +128,17 @@ test.describe('the editor as a newcomer meets it', () => {
       await page.waitForTimeout(500);
       await page.screenshot({ path: testInfo.outputPath(`editor-${width}x${height}.png`) });
     }
+    // Full width on the small screen too: every Parts column within the window, reached and left by keyboard.
+    const fullWidth = outputs(page).getByRole('button', { name: 'Full width' });
+    await fullWidth.focus();
+    await page.keyboard.press('Enter');
+    await showTab(page, 'Parts');
+    const table = outputs(page).getByRole('table').first();
+    const tableBox = (await table.boundingBox())!;
+    expect(tableBox.x + tableBox.width, 'the parts table fits the window').toBeLessThanOrEqual(1024 + 1);
+    await page.screenshot({ path: testInfo.outputPath('editor-outputs-full-width-1024x768.png') });
+    await page.keyboard.press('Escape');
+    await expect(fullWidth).toHaveAttribute('aria-pressed', 'false');
   });
 
   test('an inch design shows its inputs and outputs in inches', async ({ page }) => {
