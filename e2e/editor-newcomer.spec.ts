@@ -55,10 +55,18 @@ test.describe('the editor as a newcomer meets it', () => {
     await page.keyboard.press('Control+Shift+z');
     await expect(cuts.getByRole('row').filter({ hasText: '1320 mm' }).first()).toBeVisible();
 
-    // 2. Enlarge the outputs area: room for at least ten rows, and the rows are there to read.
-    await outputs(page).getByRole('button', { name: 'Enlarge' }).click();
+    // 2. Outputs at full width: over the whole editor below the top bar (the inspector too), room for at least ten rows.
+    await outputs(page).getByRole('button', { name: 'Full width' }).click();
+    await expect(outputs(page).getByRole('button', { name: 'Full width' })).toHaveAttribute('aria-pressed', 'true');
     const body = page.getByTestId('outputs-body');
     const bodyBox = (await body.boundingBox())!;
+    // From the tool strip's left edge (beside the app's own navigation) to the window's right edge, over the inspector.
+    const toolsBox = (await page.locator('nav[aria-label="Editing tools"]').boundingBox())!;
+    expect(Math.abs(bodyBox.x - toolsBox.x), 'the tables start where the tool strip does').toBeLessThanOrEqual(1);
+    expect(bodyBox.x + bodyBox.width, 'the tables reach the window edge').toBeGreaterThanOrEqual(page.viewportSize()!.width - 1);
+    // What lies under it cannot take focus or be read out meanwhile.
+    const inspectorInert = () => page.evaluate(() => Boolean(document.querySelector('aside[aria-label="Inspector"]')?.closest('[inert]')));
+    expect(await inspectorInert()).toBe(true);
     const firstRow = cuts.locator('tbody tr').first();
     const rowHeight = (await firstRow.boundingBox())!.height;
     expect(Math.floor(bodyBox.height / rowHeight), 'rows that fit in the enlarged area').toBeGreaterThanOrEqual(10);
@@ -71,8 +79,12 @@ test.describe('the editor as a newcomer meets it', () => {
       if (box && box.y >= bodyBox.y && box.y + box.height <= bodyBox.y + bodyBox.height + 1) visible++;
     }
     expect(visible, `visible rows of ${total}`).toBeGreaterThanOrEqual(Math.min(10, total));
-    await page.screenshot({ path: testInfo.outputPath('editor-outputs-enlarged-1440x900.png') });
-    await outputs(page).getByRole('button', { name: 'Shrink' }).click();
+    await page.screenshot({ path: testInfo.outputPath('editor-outputs-full-width-1440x900.png') });
+    // Escape leaves full width and gives the focus back to its toggle; the model and inspector return.
+    await page.keyboard.press('Escape');
+    await expect(outputs(page).getByRole('button', { name: 'Full width' })).toHaveAttribute('aria-pressed', 'false');
+    await expect(outputs(page).getByRole('button', { name: 'Full width' })).toBeFocused();
+    expect(await inspectorInert()).toBe(false);
 
     // 3. Click a cut row: its profiles are selected, in the parts list and the inspector.
     await showTab(page, 'Cuts');
@@ -105,6 +117,17 @@ test.describe('the editor as a newcomer meets it', () => {
     for (const [width, height] of [[1440, 900], [1280, 800], [1024, 768]] as const) {
       await page.setViewportSize({ width, height });
       if (width === 1024) {
+        // Full width on the small screen (before the reload below drops the unsaved table): every Parts
+        // column within the window, reached and left by keyboard.
+        const fullWidth = outputs(page).getByRole('button', { name: 'Full width' });
+        await fullWidth.focus();
+        await page.keyboard.press('Enter');
+        await showTab(page, 'Parts');
+        const tableBox = (await outputs(page).getByRole('table').first().boundingBox())!;
+        expect(tableBox.x + tableBox.width, 'the parts table fits the window').toBeLessThanOrEqual(1024 + 1);
+        await page.screenshot({ path: testInfo.outputPath('editor-outputs-full-width-1024x768.png') });
+        await page.keyboard.press('Escape');
+        await expect(fullWidth).toHaveAttribute('aria-pressed', 'false');
         // A narrow window starts folded: reload so the layout starts as it would.
         await page.reload();
         await expect(page.getByRole('heading', { level: 1, name: 'Newcomer table' })).toBeVisible();

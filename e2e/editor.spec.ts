@@ -133,3 +133,41 @@ test('a designer draws a rectangle, joins it, fills it, checks the outputs, undo
   await expect(page.getByTestId('save-status')).toContainText('rev 2');
   await page.screenshot({ path: testInfo.outputPath('06-reloaded.png') });
 });
+
+test('the sign-in page, the designs list and the editor log no console errors or warnings, and every demo design shows a picture', async ({ page }, testInfo) => {
+  test.setTimeout(120_000);
+  const messages: string[] = [];
+  page.on('console', (message) => {
+    if (message.type() !== 'error' && message.type() !== 'warning') return;
+    // The test browser draws WebGL in software (SwiftShader); Chromium's own notes about that are not ours.
+    if (/swiftshader|software WebGL|GPU stall|GL Driver Message|WebGL-/i.test(message.text())) return;
+    messages.push(`${message.type()} on ${new URL(page.url()).pathname}: ${message.text()}`);
+  });
+  page.on('pageerror', (error) => messages.push(`page error on ${new URL(page.url()).pathname}: ${error.message}`));
+
+  // Anonymous: asking who is signed in is answered, not refused.
+  const me = page.waitForResponse((response) => response.url().endsWith('/api/auth/me'));
+  await page.goto('/sign-in');
+  expect((await me).status()).toBe(200);
+  await expect(page.getByRole('button', { name: 'Sign in' })).toBeVisible();
+
+  await signIn(page, 'designer');
+  // Every seeded design has its picture before anyone opens it (drawn by the server at seed time).
+  for (const name of ['Two-level printer enclosure', 'Standing workbench', 'Plant rack']) {
+    const picture = page.getByRole('img', { name: `Picture of ${name}` });
+    await expect(picture).toBeVisible();
+    await expect.poll(() => picture.evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth)).toBe(320);
+  }
+  await page.screenshot({ path: testInfo.outputPath('designs-list-1440x900.png'), fullPage: true });
+  await page.setViewportSize({ width: 390, height: 844 });
+  await page.screenshot({ path: testInfo.outputPath('designs-list-390x844.png'), fullPage: true });
+  await page.setViewportSize({ width: 1440, height: 900 });
+
+  await page.getByRole('link', { name: 'Plant rack', exact: true }).click();
+  await page.waitForURL(/\/designs\/\d+$/);
+  await page.waitForFunction(() => Boolean((window as unknown as { __slotwiseScene?: unknown }).__slotwiseScene));
+  await expect(page.getByRole('heading', { level: 1, name: 'Plant rack' })).toBeVisible();
+  // Let the analysis and a few frames run.
+  await page.waitForTimeout(1500);
+  expect(messages).toEqual([]);
+});

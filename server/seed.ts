@@ -3,6 +3,7 @@ import type { Role } from './db/models/user';
 import { loadDemoDesigns } from './domainBridge';
 import { createPasswords, DEFAULT_PASSWORD_COST } from './modules/auth/passwords';
 import { createDesignsService } from './modules/designs/service';
+import { sketchDesignPng } from './modules/designs/sketch';
 
 /** The invented demo shop, Harbor Lane Fabrication. Every account shares one demo password. */
 export const DEMO_PASSWORD = 'slotwise-demo-2026';
@@ -43,7 +44,8 @@ export async function seedDemo(db: Database, options: { passwordCost?: number } 
     for (const document of designs) {
       const existing = await Design.findOne({ where: { name: document.name, createdBy: designer.id } });
       if (existing) continue;
-      await service.create(designer, document, { message: 'Demo design' });
+      // A drawn picture, so the designs list shows every demo design before anyone opens it in the editor.
+      await service.create(designer, document, { message: 'Demo design', thumbnail: await sketchDesignPng(document) });
       designsCreated += 1;
     }
   }

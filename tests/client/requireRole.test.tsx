@@ -17,7 +17,7 @@ const routes = [
 
 describe('RequireRole', () => {
   it('sends an anonymous visitor to sign-in, remembering where they were going', async () => {
-    mockApi({ 'GET /api/auth/me': { status: 401, body: { error: { code: 'unauthenticated', message: 'Sign in first.' } } } });
+    mockApi({ 'GET /api/auth/me': { status: 200, body: { user: null } } });
     const { router } = renderRoutes(routes, '/people?sort=name');
 
     expect(await screen.findByText('Sign-in page')).toBeInTheDocument();

@@ -40,7 +40,7 @@ describe('the app route table', () => {
   });
 
   it('sends an anonymous visitor of a deep link to sign-in with the way back', async () => {
-    mockApi({ 'GET /api/auth/me': { status: 401, body: { error: { code: 'unauthenticated', message: 'Sign in.' } } } });
+    mockApi({ 'GET /api/auth/me': { status: 200, body: { user: null } } });
     const { router } = renderRoutes(routes, '/designs/3');
     expect(await screen.findByRole('heading', { name: 'Sign in' }, { timeout: 10_000 })).toBeInTheDocument();
     expect(router.state.location.search).toBe('?next=%2Fdesigns%2F3');

@@ -6,7 +6,8 @@ import { vi } from 'vitest';
 import SignInPage from '@/features/auth/components/SignInPage';
 import { makeUser, mockApi, renderRoutes } from './testUtils';
 
-const anonymous = { status: 401, body: { error: { code: 'unauthenticated', message: 'Sign in to continue.' } } };
+/** The server's answer to GET /api/auth/me without a session. */
+const anonymous = { status: 200, body: { user: null } };
 
 function renderSignIn(path = '/sign-in') {
   return renderRoutes(

@@ -57,7 +57,7 @@ describe('useUnits', () => {
   });
 
   it('falls back to millimetres for an anonymous visitor', async () => {
-    mockApi({ 'GET /api/auth/me': { status: 401, body: { error: { code: 'unauthenticated', message: 'Sign in.' } } } });
+    mockApi({ 'GET /api/auth/me': { status: 200, body: { user: null } } });
     renderAt(<UnitsProbe />);
     await waitFor(() => expect(screen.getByLabelText('units')).toHaveTextContent('mm'));
   });

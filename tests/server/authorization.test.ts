@@ -61,7 +61,8 @@ const MATRIX: Row[] = [
     body: () => ({ email: 'builder@harborlane.example', password: 'slotwise-demo-2026' }),
     expected: { anonymous: 200, owner: 200, designer: 200, builder: 200, customer: 200, instructor: 200 },
   },
-  { method: 'get', route: '/api/auth/me', path: () => '/api/auth/me', expected: signedIn(200) },
+  // Who is signed in: everyone gets an answer; an anonymous visitor's is { user: null }.
+  { method: 'get', route: '/api/auth/me', path: () => '/api/auth/me', expected: { anonymous: 200, owner: 200, designer: 200, builder: 200, customer: 200, instructor: 200 } },
   { method: 'patch', route: '/api/auth/me', path: () => '/api/auth/me', body: () => ({}), expected: signedIn(200) },
   // A wrong current password: signed-in users reach the check (400), anonymous visitors do not.
   { method: 'post', route: '/api/auth/me/password', path: () => '/api/auth/me/password', body: () => ({ currentPassword: 'wrong-password', newPassword: 'another-password-1' }), expected: signedIn(400) },

@@ -1,3 +1,4 @@
+import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { TINY_PNG_BASE64, TINY_PNG_DATA_URL, sampleDocument } from './helpers/fixtures';
 import { buildTestApp, CLIENT, dataSnapshot, rowCounts, type Agent, type TestApp } from './helpers/testApp';
@@ -21,6 +22,26 @@ describe('designs and revisions', () => {
     expect(byName['Standing workbench'].systemId).toBe('inch-1.5');
     expect(byName['Plant rack'].systemId).toBe('metric-20');
     expect(byName['Plant rack'].updatedBy.displayName).toBe('Tomasz Reyes');
+  });
+
+  it('gives every seeded demo design a drawn picture, so the list shows one before anyone opens the editor', async () => {
+    const response = await designer.get('/api/designs');
+    const seeded = response.body.designs.filter((d: { name: string }) => ['Two-level printer enclosure', 'Standing workbench', 'Plant rack'].includes(d.name));
+    expect(seeded).toHaveLength(3);
+    for (const design of seeded as { id: number; thumbnailUrl: string | null }[]) {
+      expect(design.thumbnailUrl).toBe(`/api/designs/${design.id}/revisions/1/thumbnail`);
+      const picture = await designer.get(design.thumbnailUrl!);
+      expect(picture.status).toBe(200);
+      expect(picture.headers['content-type']).toBe('image/png');
+      const { data, info } = await sharp(Buffer.from(picture.body)).raw().toBuffer({ resolveWithObject: true });
+      expect([info.width, info.height]).toEqual([320, 240]);
+      // The frame is drawn: a good share of the picture is covered, the rest stays transparent.
+      let covered = 0;
+      for (let i = 3; i < data.length; i += 4) if (data[i] > 128) covered += 1;
+      const share = covered / (info.width * info.height);
+      expect(share).toBeGreaterThan(0.08);
+      expect(share).toBeLessThan(0.8);
+    }
   });
 
   it('creates an empty design when no document is sent, as revision 1', async () => {

@@ -37,8 +37,10 @@ export function authRouter(deps: { auth: AuthService; passport: AppPassport; sig
     });
   });
 
-  router.get('/me', requireAuth, (req, res) => {
-    res.json({ user: presentUser(req.user!) });
+  // Who is signed in: null for an anonymous visitor (or an ended session). Asking is not a failure, so it
+  // answers 200 either way and a visitor's browser logs no failed request on every page.
+  router.get('/me', (req, res) => {
+    res.json({ user: req.user ? presentUser(req.user) : null });
   });
 
   router.patch('/me', requireAuth, validate({ body: patchMeBodySchema }), async (req, res) => {

@@ -19,7 +19,11 @@ import { UnitGrid } from './UnitGrid';
 import { CLICK_SLOP_PX } from './useSelectOnClick';
 import { VIEW_DIRECTIONS } from './cameraFraming';
 import { ViewPlan, ViewPlanSync } from './ViewPlan';
+import { quietThreeWarnings } from './quietThreeWarnings';
 import type { CameraRequest, PartClickMode, PartHighlight, ViewerDisplayOptions } from './viewerTypes';
+
+// Before any canvas exists: fiber's store makes a deprecated THREE.Clock (see quietThreeWarnings).
+quietThreeWarnings();
 
 export interface DesignViewerProps {
   /** The design to draw (required). Parts are re-laid out only when this object changes. */

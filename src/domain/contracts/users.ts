@@ -20,5 +20,8 @@ export type User = z.infer<typeof userSchema>;
 
 export const userResponseSchema = z.object({ user: userSchema });
 export type UserResponse = z.infer<typeof userResponseSchema>;
+/** `GET /api/auth/me`: the signed-in user, or null for an anonymous visitor. */
+export const currentUserResponseSchema = z.object({ user: userSchema.nullable() });
+export type CurrentUserResponse = z.infer<typeof currentUserResponseSchema>;
 export const usersResponseSchema = z.object({ users: z.array(userSchema) });
 export type UsersResponse = z.infer<typeof usersResponseSchema>;

@@ -1,17 +1,12 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiFetch, ApiError } from '@/lib/apiClient';
+import { apiFetch } from '@/lib/apiClient';
 import { authKeys } from './authKeys';
-import { userResponseSchema, type User } from '@/domain/contracts';
+import { currentUserResponseSchema, type User } from '@/domain/contracts';
 
-/** The signed-in person, or null for an anonymous visitor (401 is an answer here, not a failure). */
+/** The signed-in person, or null for an anonymous visitor (the server answers 200 `{ user: null }`). */
 export async function getCurrentUser(signal?: AbortSignal): Promise<User | null> {
-  try {
-    const { user } = await apiFetch('/api/auth/me', { schema: userResponseSchema, signal });
-    return user;
-  } catch (error) {
-    if (error instanceof ApiError && error.status === 401) return null;
-    throw error;
-  }
+  const { user } = await apiFetch('/api/auth/me', { schema: currentUserResponseSchema, signal });
+  return user;
 }
 
 export const currentUserQueryOptions = () =>

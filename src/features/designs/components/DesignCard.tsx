@@ -18,14 +18,15 @@ export interface DesignCardProps {
 /** One design in the list: picture and name open the editor; the bin asks before deleting. */
 export function DesignCard({ design, onDelete, builds = [], onAssignBuild, onShare }: DesignCardProps) {
   return (
-    // The ring goes on the whole card when its link has keyboard focus (the title itself is clipped by truncation).
+    // The ring goes on the whole card when its link has keyboard focus (the title's own box is small).
     <li className="group relative flex flex-col overflow-hidden rounded-card border border-paper-line bg-paper-raised transition-shadow hover:shadow-md has-[a:focus-visible]:outline-3 has-[a:focus-visible]:outline-offset-2 has-[a:focus-visible]:outline-[#0b7a75] has-[a:focus-visible]:outline-solid">
       <div className="aspect-[4/3] border-b border-paper-line bg-gradient-to-b from-paper-sunk/40 to-paper-sunk p-4">
         <DesignThumbnail url={design.thumbnailUrl} name={design.name} />
       </div>
-      <div className="flex items-start gap-2 p-4">
-        <div className="flex min-w-0 flex-1 flex-col gap-1">
-          <h2 className="truncate text-base font-semibold text-ink">
+      {/* The actions wrap under the name when the card is narrow, so the name and system never squeeze to one word a line. */}
+      <div className="flex flex-wrap items-start gap-2 p-4">
+        <div className="flex min-w-[12rem] flex-1 basis-48 flex-col gap-1">
+          <h2 className="text-base font-semibold text-pretty break-words text-ink">
             {/* The link's box covers the card so the whole card is one target. */}
             <Link to={`/designs/${design.id}`} className="rounded outline-none after:absolute after:inset-0 after:content-[''] focus-visible:outline-none">
               {design.name}
@@ -46,26 +47,28 @@ export function DesignCard({ design, onDelete, builds = [], onAssignBuild, onSha
             </p>
           )}
         </div>
-        {onShare && (
-          <button type="button" onClick={() => onShare(design)} aria-label={`Share ${design.name}`} title="Share" className="relative z-10 grid size-11 shrink-0 place-items-center rounded-lg text-ink-muted hover:bg-paper-sunk hover:text-ink focus-ring">
-            <Share2 aria-hidden className="size-5" />
+        <div className="ml-auto flex shrink-0 gap-1">
+          {onShare && (
+            <button type="button" onClick={() => onShare(design)} aria-label={`Share ${design.name}`} title="Share" className="relative z-10 grid size-11 shrink-0 place-items-center rounded-lg text-ink-muted hover:bg-paper-sunk hover:text-ink focus-ring">
+              <Share2 aria-hidden className="size-5" />
+            </button>
+          )}
+          <Link to={`/designs/${design.id}/view`} aria-label={`Look at ${design.name} and play its build`} title="Look and play the build (read only)" className="relative z-10 grid size-11 shrink-0 place-items-center rounded-lg text-ink-muted hover:bg-paper-sunk hover:text-ink focus-ring">
+            <Eye aria-hidden className="size-5" />
+          </Link>
+          <Link to={`/designs/${design.id}/history`} aria-label={`Revisions and files of ${design.name}`} title="Revisions and files" className="relative z-10 grid size-11 shrink-0 place-items-center rounded-lg text-ink-muted hover:bg-paper-sunk hover:text-ink focus-ring">
+            <History aria-hidden className="size-5" />
+          </Link>
+          <button
+            type="button"
+            onClick={() => onDelete(design)}
+            aria-label={`Delete ${design.name}`}
+            title="Delete design"
+            className="relative z-10 grid size-11 shrink-0 place-items-center rounded-lg text-ink-muted hover:bg-severity-error-soft hover:text-severity-error focus-ring"
+          >
+            <Trash aria-hidden className="size-5" />
           </button>
-        )}
-        <Link to={`/designs/${design.id}/view`} aria-label={`Look at ${design.name} and play its build`} title="Look and play the build (read only)" className="relative z-10 grid size-11 shrink-0 place-items-center rounded-lg text-ink-muted hover:bg-paper-sunk hover:text-ink focus-ring">
-          <Eye aria-hidden className="size-5" />
-        </Link>
-        <Link to={`/designs/${design.id}/history`} aria-label={`Revisions and files of ${design.name}`} title="Revisions and files" className="relative z-10 grid size-11 shrink-0 place-items-center rounded-lg text-ink-muted hover:bg-paper-sunk hover:text-ink focus-ring">
-          <History aria-hidden className="size-5" />
-        </Link>
-        <button
-          type="button"
-          onClick={() => onDelete(design)}
-          aria-label={`Delete ${design.name}`}
-          title="Delete design"
-          className="relative z-10 grid size-11 shrink-0 place-items-center rounded-lg text-ink-muted hover:bg-severity-error-soft hover:text-severity-error focus-ring"
-        >
-          <Trash aria-hidden className="size-5" />
-        </button>
+        </div>
       </div>
       {onAssignBuild || builds.length > 0 ? (
         <div className="relative z-10 flex flex-col gap-2 border-t border-paper-line px-4 py-3">

@@ -39,6 +39,8 @@ export function EditorWorkspace() {
   const { deleteSelection, duplicateSelection } = useSelectionActions();
   const [shortcutsOpen, setShortcutsOpen] = useState(false);
   const [generatorsOpen, setGeneratorsOpen] = useState(false);
+  // Full-width outputs cover the tools, model and inspector; those are inert meanwhile (no focus, not read out).
+  const [outputsFullWidth, setOutputsFullWidth] = useState(false);
 
   useEditorShortcuts({
     save: () => void saveState.save(),
@@ -55,16 +57,20 @@ export function EditorWorkspace() {
           <ErrorNotice title="Not saved" message={saveState.error} onRetry={() => void saveState.save()} />
         </div>
       ) : null}
-      <div className="flex min-h-0 flex-1">
-        <ToolStrip onOpenGenerators={() => setGeneratorsOpen(true)} />
+      <div className="relative flex min-h-0 flex-1">
+        <div className="contents" inert={outputsFullWidth}>
+          <ToolStrip onOpenGenerators={() => setGeneratorsOpen(true)} />
+        </div>
         <div className="flex min-w-0 flex-1 flex-col">
-          <div className="relative flex min-h-0 flex-1 flex-col">
+          <div className="relative flex min-h-0 flex-1 flex-col" inert={outputsFullWidth}>
             <CanvasArea />
             <RefusalNotice />
           </div>
-          <OutputsArea />
+          <OutputsArea fullWidth={outputsFullWidth} onFullWidthChange={setOutputsFullWidth} />
         </div>
-        <InspectorColumn />
+        <div className="contents" inert={outputsFullWidth}>
+          <InspectorColumn />
+        </div>
       </div>
       <ShortcutSheetDialog open={shortcutsOpen} onClose={() => setShortcutsOpen(false)} />
       <GeneratorDialog open={generatorsOpen} onClose={() => setGeneratorsOpen(false)} />

@@ -1,4 +1,4 @@
-import { useRef, useState, type KeyboardEvent, type PointerEvent } from 'react';
+import { useEffect, useRef, useState, type KeyboardEvent, type PointerEvent } from 'react';
 import { ChevronDown, ChevronUp, ListChecks, Maximize2, Minimize2 } from 'lucide-react';
 import { countOf } from '@/domain/words';
 import { useCurrentUser } from '@/lib/session/currentUser';
@@ -8,16 +8,36 @@ import { FindingsPanel } from '../panels/FindingsPanel';
 import { OutputsDock } from '../panels/OutputsDock';
 import { OUTPUTS_MIN_HEIGHT, isNarrowWindow, outputsMaxHeight, readOutputsHeight, saveOutputsHeight } from './outputsSize';
 
+export interface OutputsAreaProps {
+  /** Full width: the tables cover the whole editor below the top bar (tools, model and inspector). */
+  fullWidth: boolean;
+  onFullWidthChange: (fullWidth: boolean) => void;
+}
+
 /**
  * The bottom area: checks on the left, the output tables on the right. A drag handle (or the
- * arrow keys on it) sets its height, remembered per person; "Enlarge" gives the tables most of the
- * screen and the full width; the checks column folds (folded from the start on narrow screens).
+ * arrow keys on it) sets its height, remembered per person; "Full width" lays the tables over the
+ * whole editor below the top bar, every column showing, until Escape or the same button; the
+ * checks column folds (folded from the start on narrow screens).
  */
-export function OutputsArea() {
+export function OutputsArea({ fullWidth: enlarged, onFullWidthChange: setEnlarged }: OutputsAreaProps) {
   const [open, setOpen] = useState(true);
   const userId = useCurrentUser().data?.id;
   const [height, setHeight] = useState(() => readOutputsHeight(userId));
-  const [enlarged, setEnlarged] = useState(false);
+  const fullWidthButton = useRef<HTMLButtonElement>(null);
+  // Escape leaves full width before any editor key sees it (capture phase), and focus returns to the toggle.
+  useEffect(() => {
+    if (!enlarged) return;
+    const onKey = (event: globalThis.KeyboardEvent) => {
+      if (event.key !== 'Escape') return;
+      event.preventDefault();
+      event.stopPropagation();
+      setEnlarged(false);
+      fullWidthButton.current?.focus();
+    };
+    window.addEventListener('keydown', onKey, true);
+    return () => window.removeEventListener('keydown', onKey, true);
+  }, [enlarged, setEnlarged]);
   const [checksOpen, setChecksOpen] = useState(() => !isNarrowWindow());
   const drag = useRef<{ y: number; height: number } | null>(null);
   const counts = useEditorStore((state) => state.analysis?.counts);
@@ -33,7 +53,7 @@ export function OutputsArea() {
   const onPointerDown = (event: PointerEvent<HTMLDivElement>) => {
     event.currentTarget.setPointerCapture(event.pointerId);
     drag.current = { y: event.clientY, height };
-    setEnlarged(false);
+    if (enlarged) setEnlarged(false);
   };
   const onPointerMove = (event: PointerEvent<HTMLDivElement>) => {
     if (drag.current) setHeight(clamp(drag.current.height + drag.current.y - event.clientY));
@@ -51,13 +71,18 @@ export function OutputsArea() {
     else if (event.key === 'End') commit(outputsMaxHeight());
     else return;
     event.preventDefault();
-    setEnlarged(false);
+    if (enlarged) setEnlarged(false);
   };
-  const shown = enlarged ? outputsMaxHeight() : height;
+  const shown = height;
 
   return (
-    <section aria-label="Checks and outputs" data-enlarged={enlarged || undefined} className="flex shrink-0 flex-col border-t border-paper-line bg-paper-raised">
-      {open ? (
+    <section
+      aria-label="Checks and outputs"
+      data-full-width={enlarged || undefined}
+      // In full width the area is laid over the editor's row (tools, model, inspector), which is its positioned container.
+      className={cn('flex shrink-0 flex-col border-t border-paper-line bg-paper-raised', enlarged && open && 'absolute inset-0 z-30 border-t-0 shadow-lg')}
+    >
+      {open && !enlarged ? (
         <div
           role="separator"
           aria-orientation="horizontal"
@@ -80,7 +105,11 @@ export function OutputsArea() {
         <button
           type="button"
           aria-expanded={open}
-          onClick={() => setOpen((value) => !value)}
+          onClick={() => {
+            // Folding also leaves full width, so the model and inspector come back.
+            if (open && enlarged) setEnlarged(false);
+            setOpen(!open);
+          }}
           className="flex min-h-11 min-w-0 flex-1 items-center gap-2 px-4 text-left text-sm font-semibold text-ink hover:bg-paper-sunk focus-ring"
         >
           {open ? <ChevronDown aria-hidden className="size-4 shrink-0" /> : <ChevronUp aria-hidden className="size-4 shrink-0" />}
@@ -101,20 +130,23 @@ export function OutputsArea() {
               Checks
             </button>
             <button
+              ref={fullWidthButton}
               type="button"
               aria-pressed={enlarged}
-              onClick={() => setEnlarged((value) => !value)}
-              title={enlarged ? 'Back to the remembered size' : 'Give the tables most of the screen and every column'}
-              className="inline-flex min-h-11 items-center gap-1.5 rounded-lg px-2.5 text-sm text-ink-soft hover:bg-paper-sunk focus-ring"
+              aria-keyshortcuts={enlarged ? 'Escape' : undefined}
+              onClick={() => setEnlarged(!enlarged)}
+              title={enlarged ? 'Back to the model (Esc)' : 'Lay the tables over the whole editor, every column showing (Esc leaves)'}
+              className={cn('inline-flex min-h-11 items-center gap-1.5 rounded-lg px-2.5 text-sm text-ink-soft hover:bg-paper-sunk focus-ring', enlarged && 'bg-paper-sunk text-ink')}
             >
               {enlarged ? <Minimize2 aria-hidden className="size-4" /> : <Maximize2 aria-hidden className="size-4" />}
-              {enlarged ? 'Shrink' : 'Enlarge'}
+              Full width
+              {enlarged ? <kbd className="ml-1 rounded border border-paper-line px-1 text-xs font-normal text-ink-muted">Esc</kbd> : null}
             </button>
           </>
         ) : null}
       </div>
       {open ? (
-        <div className="flex min-h-0 border-t border-paper-line" style={{ height: shown }} data-testid="outputs-body">
+        <div className={cn('flex min-h-0 border-t border-paper-line', enlarged && 'flex-1')} style={enlarged ? undefined : { height: shown }} data-testid="outputs-body">
           {checksOpen && !enlarged ? (
             <div className="w-[clamp(240px,30%,380px)] shrink-0 overflow-y-auto border-r border-paper-line">
               <FindingsPanel />
