@@ -29,7 +29,7 @@ export function CutsTab({ groups, items, units, designName, selectedIds, onSelec
         accessorFn: (group) => group.profileIds.map((id) => pieceLabels[id] ?? id).join(', '),
         cell: (c) => <span className="text-xs">{c.getValue()}</span>,
       },
-      { id: 'variant', header: 'Variant', accessorKey: 'variantId', cell: (c) => <code className="text-xs">{c.getValue()}</code> },
+      { id: 'variant', header: 'Profile', accessorFn: (group) => variantName(group.variantId), cell: (c) => <span className="text-xs">{c.getValue()}</span> },
       { id: 'length', header: 'Length', accessorKey: 'length', meta: { numeric: true }, cell: (c) => showLength(c.getValue(), units) },
       { id: 'quantity', header: 'Qty', accessorKey: 'quantity', meta: { numeric: true }, cell: (c) => `${c.getValue()} ${c.getValue() === 1 ? 'pc' : 'pcs'}` },
       { id: 'tolerance', header: 'Tolerance', accessorKey: 'tolerance', meta: { numeric: true }, cell: (c) => showTolerance(c.getValue(), units) },

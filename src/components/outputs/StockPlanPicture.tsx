@@ -1,7 +1,7 @@
 import { useId, type ReactElement } from 'react';
 import type { StockPlan } from '@/domain/outputs/stockPlan';
 import type { LengthUnit } from '@/domain/units';
-import { showLength } from './format';
+import { showLength, variantName } from './format';
 
 export interface StockPlanPictureProps {
   variantId: string;
@@ -25,7 +25,7 @@ export function StockPlanPicture({ variantId, plan, stockLength, kerf, endTrim, 
   return (
     <svg
       role="img"
-      aria-label={`Stock plan for ${variantId}: ${plan.barCount} bars of ${showLength(stockLength, units)}`}
+      aria-label={`Stock plan for ${variantName(variantId)}: ${plan.barCount} bars of ${showLength(stockLength, units)}`}
       viewBox={`0 0 ${VIEW_WIDTH} ${height}`}
       className="w-full"
       data-variant={variantId}

@@ -45,7 +45,7 @@ describe('Outputs against a real analysis of a small design', () => {
     renderWithStore(<OutputsDock />, store);
     await user.click(screen.getByRole('tab', { name: 'Bars' }));
     const plan = store.getState().analysis!.stockPlans[0].plan;
-    const picture = screen.getByRole('img', { name: /Stock plan for m40-40x40/ });
+    const picture = screen.getByRole('img', { name: /Stock plan for 40 x 40 mm:/ });
     expect(picture.querySelectorAll('[data-kind="bar"]')).toHaveLength(plan.bars.length);
     expect(picture.querySelectorAll('[data-kind="cut"]')).toHaveLength(4);
   });

@@ -117,6 +117,14 @@ describe('Cuts tab', () => {
     expect(screen.getByRole('table', { name: 'Cut list' }).querySelector('tfoot')).toHaveTextContent('4 pcs');
   });
 
+  it('names the profile by its size, never by its catalogue id', () => {
+    const analysis = handMadeAnalysis();
+    render(<CutsTab groups={analysis.cutGroups} items={analysis.cutList} units="mm" designName="Bench shelf" />);
+    const row = screen.getByText('Front rail, Back rail').closest('tr')!;
+    expect(within(row).getByText('40 x 40 mm')).toBeInTheDocument();
+    expect(screen.getByRole('table', { name: 'Cut list' })).not.toHaveTextContent(/m40-|in-1/);
+  });
+
   it('shows inch lengths as shop fractions', () => {
     const analysis = handMadeAnalysis();
     render(<CutsTab groups={analysis.cutGroups} items={analysis.cutList} units="in" designName="Bench shelf" />);

@@ -15,9 +15,9 @@ function Harness({ handlers }: { handlers: ShortcutHandlers }) {
   return <input aria-label="A text field" />;
 }
 
-function setup() {
+function setup(modelCovered = false) {
   const store = createEditorStore({ design: twoRailDesign() });
-  const handlers = { save: vi.fn(), deleteSelection: vi.fn(), duplicateSelection: vi.fn(), openShortcutSheet: vi.fn() };
+  const handlers = { save: vi.fn(), deleteSelection: vi.fn(), duplicateSelection: vi.fn(), openShortcutSheet: vi.fn(), modelCovered };
   render(
     <EditorStoreProvider store={store}>
       <Harness handlers={handlers} />
@@ -46,6 +46,23 @@ describe('editor keys', () => {
     expect(store.getState().tool).toBe('draw-profile');
     await user.keyboard('{Escape}');
     expect(store.getState().tool).toBe('select');
+  });
+
+  it('while the full-width outputs cover the model, Delete, duplicate, tools and views do nothing; save and the key sheet still answer', async () => {
+    const { store, handlers, user } = setup(true);
+    store.getState().select(['p1']);
+    await user.keyboard('{Delete}');
+    await user.keyboard('{Control>}d{/Control}');
+    await user.keyboard('d');
+    await user.keyboard('1');
+    expect(handlers.deleteSelection).not.toHaveBeenCalled();
+    expect(handlers.duplicateSelection).not.toHaveBeenCalled();
+    expect(store.getState().tool).toBe('select');
+    expect(store.getState().selection).toEqual(['p1']);
+    await user.keyboard('{Control>}s{/Control}');
+    await user.keyboard('?');
+    expect(handlers.save).toHaveBeenCalledTimes(1);
+    expect(handlers.openShortcutSheet).toHaveBeenCalledTimes(1);
   });
 
   it('Ctrl+Z undoes, Ctrl+Shift+Z and Ctrl+Y redo', async () => {

@@ -8,6 +8,8 @@ export interface ShortcutHandlers {
   deleteSelection(): void;
   duplicateSelection(): void;
   openShortcutSheet(): void;
+  /** True while something covers the model (the full-width outputs): keys that act on the model are ignored. */
+  modelCovered?: boolean;
 }
 
 const VIEW_KEYS: Record<string, EditorView> = Object.fromEntries(VIEW_SHORTCUTS.map((v) => [v.key, v.view]));
@@ -52,12 +54,14 @@ export function useEditorShortcuts(handlers: ShortcutHandlers): void {
         if (lower === 'z' && event.shiftKey) return run(state.redo);
         if (lower === 'z') return run(state.undo);
         if (lower === 'y') return run(state.redo);
-        if (lower === 'd') return run(() => handlersRef.current.duplicateSelection());
+        if (lower === 'd' && !handlersRef.current.modelCovered) return run(() => handlersRef.current.duplicateSelection());
         return;
       }
       if (event.altKey) return;
 
       if (key === '?') return run(() => handlersRef.current.openShortcutSheet());
+      // The model is covered: selection, tools and views would act on parts nobody can see.
+      if (handlersRef.current.modelCovered) return;
       if (key === 'Escape') {
         return run(() => {
           if (state.gestureActive) state.cancelGesture();

@@ -47,6 +47,7 @@ export function EditorWorkspace() {
     deleteSelection,
     duplicateSelection,
     openShortcutSheet: () => setShortcutsOpen(true),
+    modelCovered: outputsFullWidth,
   });
 
   return (
