@@ -3,8 +3,9 @@ import { Link, useParams } from 'react-router';
 import { Eye, EyeOff } from 'lucide-react';
 import { PartsTab, ToolsTab } from '@/components/outputs';
 import { ErrorNotice, PageSkeleton } from '@/components/ui';
-import { DesignViewer, StepList, StepPlayerControls, StepPlayerScene, stepsFromDesign, usePlayerKeys, useStepPlayer, type CameraRequest, type PlayerView, type StepPlayerState } from '@/components/viewer';
+import { DesignViewer, StepList, StepPlayerControls, StepPlayerScene, usePlayerKeys, useStepPlayer, type CameraRequest, type PlayerView, type StepPlayerState } from '@/components/viewer';
 import type { DesignAnalysis } from '@/domain/analysisTypes';
+import { sequenceOf } from '@/domain/assembly';
 import { analyzeDesign } from '@/domain/analyze';
 import { defaultCatalogue } from '@/domain/catalogue';
 import type { DesignDocument } from '@/domain/design/schema';
@@ -34,7 +35,8 @@ export default function ViewerRoute() {
 }
 
 function ViewerSession({ designId, name, design }: { designId: number; name: string; design: DesignDocument }) {
-  const steps = useMemo(() => stepsFromDesign(design), [design]);
+  // The design's saved order (or a generated one) from the assembly core, with its motions.
+  const steps = useMemo(() => sequenceOf(design, defaultCatalogue).steps, [design]);
   const player = useStepPlayer(steps);
   usePlayerKeys(player);
   const [panels, setPanels] = useState(true);
