@@ -1,6 +1,8 @@
 import { useEffect, useRef } from 'react';
 import { useThree } from '@react-three/fiber';
+import * as THREE from 'three';
 import type { SequenceStep } from '@/domain/assembly';
+import { boundingBoxOf, fitBoxDistance, VIEW_DIRECTIONS } from '../cameraFraming';
 import { useScene } from '../sceneContext';
 import { createGhostMaterial, StepAnimator } from './StepAnimator';
 
@@ -36,10 +38,11 @@ const nextFrame = () => new Promise<void>((resolve) => requestAnimationFrame(() 
  * it unmounts.
  */
 export function StepPictures({ steps, onPicture, onDone, travel = 0.45, type = 'image/jpeg', quality = 0.86 }: StepPicturesProps) {
-  const { drawn } = useScene();
+  const { drawn, anchors } = useScene();
   const gl = useThree((s) => s.gl);
   const scene = useThree((s) => s.scene);
   const camera = useThree((s) => s.camera);
+  const controls = useThree((s) => s.controls) as unknown as { target: THREE.Vector3; update(): void } | null;
   const callbacks = useRef({ onPicture, onDone });
   callbacks.current = { onPicture, onDone };
 
@@ -51,9 +54,23 @@ export function StepPictures({ steps, onPicture, onDone, travel = 0.45, type = '
       // Wait for the parts to be drawn and the camera to frame them.
       for (let i = 0; i < 600 && drawn.batches.size === 0 && !cancelled; i++) await nextFrame();
       for (let i = 0; i < 3 && !cancelled; i++) await nextFrame();
+      // One camera for every picture: the whole piece from the three-quarter view, with room for
+      // the parts still on their way in.
+      const box = boundingBoxOf(anchors.current, 'all');
+      const direction = VIEW_DIRECTIONS.iso.clone().normalize();
+      const perspective = camera as THREE.PerspectiveCamera;
+      const distance = box.isEmpty() ? 3000 : fitBoxDistance(box, direction, perspective.fov, perspective.aspect, 0.12);
+      const center = box.isEmpty() ? new THREE.Vector3() : box.getCenter(new THREE.Vector3());
+      const position = center.clone().addScaledVector(direction, distance);
       for (let index = 0; index < steps.length; index++) {
         if (cancelled) return;
         animator.pose({ steps, stepIndex: index, ghostLater: true, explode: 0, replayNonce: 0 }, travel);
+        // Set before every picture: nothing else may have moved the camera between two of them.
+        camera.position.copy(position);
+        if (controls) {
+          controls.target.copy(center);
+          controls.update();
+        } else camera.lookAt(center);
         camera.updateMatrixWorld();
         gl.render(scene, camera);
         callbacks.current.onPicture({ index, dataUrl: gl.domElement.toDataURL(type, quality) });
@@ -68,6 +85,6 @@ export function StepPictures({ steps, onPicture, onDone, travel = 0.45, type = '
       animator.dispose();
       ghost.dispose();
     };
-  }, [drawn, gl, scene, camera, steps, travel, type, quality]);
+  }, [drawn, anchors, gl, scene, camera, controls, steps, travel, type, quality]);
   return null;
 }
