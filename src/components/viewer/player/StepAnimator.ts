@@ -108,13 +108,21 @@ export class StepAnimator {
     return moving;
   }
 
-  /** One travelling frame of the current step, mid-way (for the frame-time benchmark). */
+  /**
+   * One travelling frame, mid-way, of the step with the most parts (the worst case, for the
+   * frame-time benchmark); the next frame rewrites every instance.
+   */
   probeFrame(): void {
     const view = this.view;
     if (!view) return;
     if (this.drawn.version !== this.version) this.rebuildIndex(view);
+    let largest = view.stepIndex;
+    view.steps.forEach((step, i) => {
+      if (step.motions.length > (view.steps[largest]?.motions.length ?? 0)) largest = i;
+    });
     this.updateOrientationMatrix();
-    this.writeStep(view, view.stepIndex, 0.5);
+    this.writeStep(view, largest, 0.5);
+    this.needsFull = true;
   }
 
   /**
