@@ -1,7 +1,12 @@
-import { expect, test } from '@playwright/test';
+import { expect, test, type Page } from '@playwright/test';
 import { signIn } from './helpers';
 
-test('an instructor shares a class link; an anonymous visitor views it read-only; revoking the class stops it', async ({ page, browser }) => {
+/** The canvas as a small PNG, rendered and read in one task by the scene's test hook. */
+async function canvasImage(page: Page): Promise<string> {
+  return page.evaluate(() => window.__slotwiseScene!.capturePng(360));
+}
+
+test('an instructor shares a class link; an anonymous visitor views it read-only and steps through the sequence; revoking the class stops it', async ({ page, browser }, testInfo) => {
   // Three browser contexts and two 3D views on a shared machine: allow more than the default.
   test.setTimeout(240_000);
   await signIn(page, 'instructor');
@@ -29,6 +34,34 @@ test('an instructor shares a class link; an anonymous visitor views it read-only
   await visitor.mouse.down();
   await visitor.mouse.move(box.x + box.width / 2 + 120, box.y + box.height / 2 + 30, { steps: 8 });
   await visitor.mouse.up();
+
+  // The exploded-view player: it opens on the finished piece; go to the first step, then step on
+  // three times (buttons twice, the arrow key once): the picture changes every time.
+  await visitor.waitForFunction(() => (window.__slotwiseScene?.stats().profilesDrawn ?? 0) > 0, null, { timeout: 60_000 });
+  const player = visitor.getByTestId('step-player');
+  const current = player.getByTestId('current-step');
+  await expect(current).toContainText(/Step \d+ of \d+/);
+  const total = Number((await current.textContent())!.match(/of (\d+)/)![1]);
+  expect(total, 'the demo design has at least four steps').toBeGreaterThanOrEqual(4);
+  await visitor.getByRole('list', { name: 'Assembly steps' }).getByRole('button').first().click();
+  await expect(current).toContainText(`Step 1 of ${total}`);
+  // Travel takes under a second; wait for the parts to arrive and the camera to settle.
+  await visitor.waitForTimeout(1600);
+  let previous = await canvasImage(visitor);
+  for (let i = 2; i <= 4; i++) {
+    if (i === 3) await visitor.keyboard.press('ArrowRight');
+    else await player.getByRole('button', { name: 'Next step' }).click();
+    await expect(current).toContainText(`Step ${i} of ${total}`);
+    await visitor.waitForTimeout(1600);
+    const image = await canvasImage(visitor);
+    expect(image, `the canvas differs between step ${i - 1} and step ${i}`).not.toEqual(previous);
+    previous = image;
+  }
+  await visitor.screenshot({ path: testInfo.outputPath('link-step-4.png') });
+  // The explode slider pushes the placed parts apart: the picture changes on the same step.
+  await visitor.getByLabel('Explode the finished piece').fill('80');
+  await visitor.waitForTimeout(800);
+  expect(await canvasImage(visitor), 'the explode slider changes the picture').not.toEqual(previous);
   // Section view along X with its slider.
   await visitor.getByRole('button', { name: 'X', exact: true }).click();
   await expect(visitor.getByRole('button', { name: 'X', exact: true })).toHaveAttribute('aria-pressed', 'true');

@@ -51,7 +51,7 @@ export interface AppDependencies {
   analysisPool?: AnalysisPool;
   /** Outgoing mail; by default nodemailer to SMTP from the config, or to the local fake SMTP server. */
   mail?: MailService;
-  /** Requests per address on the public link routes. */
+  /** Requests per address on the public link routes (default: config.linkRequestsPerMinute per minute). */
   linkRateLimit?: LinkRateLimit;
 }
 
@@ -122,7 +122,7 @@ export function createApp(deps: AppDependencies): Express {
   });
   app.use('/api/health', healthRouter(db, APP_VERSION, logger));
   // Read-only links need no session and never write: mounted before sessions and the CSRF guard.
-  app.use('/api/shared', sharedRouter({ links, rateLimit: deps.linkRateLimit }));
+  app.use('/api/shared', sharedRouter({ links, rateLimit: deps.linkRateLimit ?? { max: config.linkRequestsPerMinute, windowMs: 60_000 } }));
   app.use('/api', csrfGuard, sessions, passport.initialize(), passport.session());
 
   app.use('/api/auth/password-reset', passwordResetRouter({ resets, config, limiter: signInLimiter }));

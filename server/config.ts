@@ -29,6 +29,8 @@ export interface AppConfig {
   publicUrl: string | null;
   /** Folder of uploaded files (outside the served client folder). */
   uploadsDir: string;
+  /** Requests per client address per minute on the public read-only link routes (/api/shared). */
+  linkRequestsPerMinute: number;
 }
 
 export interface SmtpSettings {
@@ -53,6 +55,9 @@ export const DEFAULT_ANALYSIS_LIMITS: AnalysisLimits = {
   timeLimitMs: DEFAULT_ANALYSIS_TIME_LIMIT_MS,
   threads: Math.max(1, Math.min(4, availableParallelism())),
 };
+
+/** Default requests per address per minute on the public link routes. */
+export const DEFAULT_LINK_REQUESTS_PER_MINUTE = 600;
 
 const booleanText = z
   .enum(['true', 'false', '1', '0', 'yes', 'no', ''], {
@@ -98,6 +103,7 @@ const environmentSchema = z
     MAIL_CATCHER: booleanText.optional(),
     PUBLIC_URL: z.url({ error: 'Give the address people reach Slotwise at, e.g. https://frames.example.com' }).optional(),
     UPLOADS_DIR: z.string().optional(),
+    LINK_RATE_LIMIT_PER_MINUTE: wholeNumber(1, 10_000_000).optional(),
   })
   .superRefine((env, ctx) => {
     if (env.NODE_ENV !== 'production') return;
@@ -178,5 +184,6 @@ export function loadConfig(
     },
     publicUrl: env.PUBLIC_URL ? env.PUBLIC_URL.replace(/\/+$/, '') : null,
     uploadsDir: resolve(env.UPLOADS_DIR || join(dirname(databasePath), 'uploads')),
+    linkRequestsPerMinute: env.LINK_RATE_LIMIT_PER_MINUTE ?? DEFAULT_LINK_REQUESTS_PER_MINUTE,
   };
 }

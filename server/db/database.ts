@@ -31,6 +31,7 @@ const configured = new WeakSet<object>();
  * hooks, so per-connection settings are applied here the first time a connection is handed out.
  */
 function setBusyTimeoutOnEveryConnection(sequelize: Sequelize): void {
+  // The connection manager is internal to Sequelize and untyped: this cast names the one method used.
   const manager = sequelize.connectionManager as unknown as { getConnection(options?: unknown): Promise<SqliteConnection> };
   const getConnection = manager.getConnection.bind(manager);
   manager.getConnection = async (options?: unknown) => {
@@ -60,14 +61,16 @@ function restrictFileModes(path: string): void {
 export async function openDatabase(path: string): Promise<Database> {
   mkdirSync(dirname(path), { recursive: true });
   restrictFileModes(path);
-  const sequelize = new Sequelize({
+  // `foreignKeys` is a sqlite dialect option Sequelize's Options type does not list.
+  const options: Options & { foreignKeys: boolean } = {
     dialect: 'sqlite',
     storage: path,
     logging: false,
     transactionType: Transaction.TYPES.IMMEDIATE,
     // Sequelize already turns foreign keys on for each sqlite connection it opens.
     foreignKeys: true,
-  } as unknown as Options);
+  };
+  const sequelize = new Sequelize(options);
   setBusyTimeoutOnEveryConnection(sequelize);
   await sequelize.query('PRAGMA journal_mode = WAL');
   await sequelize.query(`PRAGMA busy_timeout = ${BUSY_TIMEOUT_MS}`);

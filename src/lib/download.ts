@@ -10,3 +10,8 @@ export function downloadBlob(fileName: string, blob: Blob): void {
   // Revoke later: some browsers start the download after the click handler returns.
   setTimeout(() => URL.revokeObjectURL(url), 1000);
 }
+
+/** A file name for an export of a design: its name in lower case with dashes, then `.extension`. */
+export function exportFileName(designName: string, extension: string): string {
+  return `${designName.replace(/[^A-Za-z0-9]+/g, '-').replace(/^-|-$/g, '').toLowerCase() || 'design'}.${extension}`;
+}

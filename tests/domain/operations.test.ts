@@ -314,3 +314,20 @@ describe('applyOperation', () => {
     for (const op of ops) expect(() => applyOperation(d, op), op.type).not.toThrow();
   });
 });
+
+describe('the units operation', () => {
+  it('changes only the units the design is shown in: every length and the assembly steps stay as they were', () => {
+    const d = box();
+    const inches = applyOperation(d, { type: 'setUnits', payload: { units: 'in' } });
+    expect(inches.units).toBe('in');
+    expect({ ...inches, units: d.units }).toEqual(d);
+    expect(d.steps.length).toBeGreaterThan(0);
+    expect(inches.steps).toBe(d.steps);
+    expect(applyOperation(inches, { type: 'setUnits', payload: { units: 'mm' } }).units).toBe('mm');
+  });
+
+  it('refuses units other than mm and in from replayed JSON', () => {
+    const op = JSON.parse('{"type":"setUnits","payload":{"units":"cm"}}') as DesignOperation;
+    expect(() => applyOperation(box(), op)).toThrow(OperationError);
+  });
+});

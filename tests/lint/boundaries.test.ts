@@ -31,7 +31,7 @@ describe('the layer boundaries', { timeout: 120_000 }, () => {
   it('refuses a server file that imports a feature', async () => {
     const fired = await rulesFiredFor(
       'server/boundaryProbe.ts',
-      "import { editorKeys } from '../src/features/editor/api/editorKeys';\nexport const probe = editorKeys;\n",
+      "import { editorDesignQueryOptions } from '../src/features/editor/api/getEditorDesign';\nexport const probe = editorDesignQueryOptions;\n",
     );
     expect(fired).toContain('import-x/no-restricted-paths');
   });
@@ -39,7 +39,7 @@ describe('the layer boundaries', { timeout: 120_000 }, () => {
   it('refuses one feature importing another', async () => {
     const fired = await rulesFiredFor(
       'src/features/designs/boundaryProbe.ts',
-      "import { editorKeys } from '@/features/editor/api/editorKeys';\nexport const probe = editorKeys;\n",
+      "import { editorDesignQueryOptions } from '@/features/editor/api/getEditorDesign';\nexport const probe = editorDesignQueryOptions;\n",
     );
     expect(fired).toContain('import-x/no-restricted-paths');
   });
@@ -47,7 +47,7 @@ describe('the layer boundaries', { timeout: 120_000 }, () => {
   it('refuses a shared library module that imports a feature', async () => {
     const fired = await rulesFiredFor(
       'src/lib/boundaryProbe.ts',
-      "import { designKeys } from '@/features/designs/api/designKeys';\nexport const probe = designKeys;\n",
+      "import { designsListQueryOptions } from '@/features/designs/api/listDesigns';\nexport const probe = designsListQueryOptions;\n",
     );
     expect(fired).toContain('import-x/no-restricted-paths');
   });
@@ -64,7 +64,7 @@ describe('the layer boundaries', { timeout: 120_000 }, () => {
     expect(
       await rulesFiredFor(
         'src/features/designs/boundaryProbe.ts',
-        "import { roleSchema } from '@/domain/contracts';\nimport { cn } from '@/lib/cn';\nimport { designKeys } from './api/designKeys';\nexport const probe = [roleSchema, cn, designKeys];\n",
+        "import { roleSchema } from '@/domain/contracts';\nimport { cn } from '@/lib/cn';\nimport { designKeys } from '@/lib/queryKeys';\nimport { designsListQueryOptions } from './api/listDesigns';\nexport const probe = [roleSchema, cn, designKeys, designsListQueryOptions];\n",
       ),
     ).toEqual([]);
     expect(

@@ -50,4 +50,11 @@ describe('reading the environment', () => {
   it('turns request logging off by default in tests', () => {
     expect(loadConfig({ NODE_ENV: 'test', DATABASE_PATH: join(dir, 't.sqlite') }, quiet).logRequests).toBe(false);
   });
+
+  it('reads the link rate limit per address per minute, 600 unless set', () => {
+    const base = { DATABASE_PATH: join(dir, 'l.sqlite'), SESSION_SECRET: 'x'.repeat(40) };
+    expect(loadConfig(base, quiet).linkRequestsPerMinute).toBe(600);
+    expect(loadConfig({ ...base, LINK_RATE_LIMIT_PER_MINUTE: '200000' }, quiet).linkRequestsPerMinute).toBe(200_000);
+    expect(() => loadConfig({ ...base, LINK_RATE_LIMIT_PER_MINUTE: '0' }, quiet)).toThrow(/LINK_RATE_LIMIT_PER_MINUTE: Use a whole number from 1/);
+  });
 });

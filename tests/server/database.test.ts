@@ -2,6 +2,7 @@ import { existsSync, mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { basename, dirname, join } from 'node:path';
 import { QueryTypes } from 'sequelize';
+import { SequelizeStorage, Umzug } from 'umzug';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { backupDatabase, defaultBackupPath } from '../../server/db/backup';
@@ -81,6 +82,24 @@ describe('migrations and seeding', () => {
     dir = mkdtempSync(join(tmpdir(), 'slotwise-migrations-'));
   });
   afterAll(() => rmSync(dir, { recursive: true, force: true }));
+
+  it('lists the migrations in number order', () => {
+    const names = migrations.map((m) => m.name);
+    expect(names).toEqual([...names].sort());
+  });
+
+  it('brings up to date a database migrated when the builds migrations were listed before the sharing ones', async () => {
+    const file = join(dir, 'older-order.sqlite');
+    const db = await openDatabase(file);
+    // The listing order before: 0001–0004, 0020, 0021, then 0010–0013; this database stopped after 0021.
+    const older = migrations.filter((m) => m.name < '0010' || m.name >= '0020');
+    await new Umzug({ migrations: older, context: db.sequelize.getQueryInterface(), storage: new SequelizeStorage({ sequelize: db.sequelize, tableName: 'schema_migrations' }), logger: undefined }).up();
+    expect(await runMigrations(db)).toEqual(['0010-create-links-and-classes', '0011-create-reviews', '0012-create-password-resets', '0013-create-uploads']);
+    expect(await runMigrations(db)).toEqual([]);
+    expect(await db.models.Build.count()).toBe(0);
+    expect(await db.models.Upload.count()).toBe(0);
+    await db.close();
+  });
 
   it('runs forward on an existing database without losing rows, and a second run changes nothing', async () => {
     const file = join(dir, 'existing.sqlite');

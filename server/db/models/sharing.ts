@@ -163,7 +163,7 @@ export function initSharingModels(sequelize: Sequelize) {
       id,
       designId: { type: DataTypes.INTEGER, allowNull: false },
       revisionNumber: { type: DataTypes.INTEGER, allowNull: false },
-      decision: { type: DataTypes.STRING(20), allowNull: false, validate: { isIn: [REVIEW_DECISIONS as unknown as string[]] } },
+      decision: { type: DataTypes.STRING(20), allowNull: false, validate: { isIn: [[...REVIEW_DECISIONS]] } },
       note: { type: DataTypes.STRING(2000), allowNull: false, defaultValue: '' },
       decidedBy: { type: DataTypes.INTEGER, allowNull: false },
       ...stamps,

@@ -1,5 +1,4 @@
 import { Router, type RequestHandler } from 'express';
-import type { z } from 'zod';
 import type { AppConfig } from '../../config';
 import { validate } from '../../middleware/validate';
 import { publicBaseUrl } from '../../publicUrl';
@@ -12,12 +11,12 @@ export const RESET_REQUESTED_MESSAGE = 'If an account uses that email address, a
 export function passwordResetRouter(deps: { resets: PasswordResets; config: AppConfig; limiter: RequestHandler }): Router {
   const router = Router();
   router.post('/', deps.limiter, validate({ body: passwordResetRequestBodySchema }), async (req, res) => {
-    const { email } = req.body as z.output<typeof passwordResetRequestBodySchema>;
+    const { email } = req.body;
     await deps.resets.request(email, publicBaseUrl(req, deps.config));
     res.status(202).json({ message: RESET_REQUESTED_MESSAGE });
   });
   router.post('/confirm', deps.limiter, validate({ body: passwordResetConfirmBodySchema }), async (req, res) => {
-    const { token, newPassword } = req.body as z.output<typeof passwordResetConfirmBodySchema>;
+    const { token, newPassword } = req.body;
     await deps.resets.confirm(token, newPassword);
     res.status(204).end();
   });

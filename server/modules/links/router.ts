@@ -1,7 +1,6 @@
 import { Router, type RequestHandler } from 'express';
 import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
-import type { z } from 'zod';
-import type { AppConfig } from '../../config';
+import { DEFAULT_LINK_REQUESTS_PER_MINUTE, type AppConfig } from '../../config';
 import { AppError } from '../../middleware/appError';
 import { requireRole } from '../../middleware/requireAuth';
 import { validate } from '../../middleware/validate';
@@ -23,7 +22,7 @@ export function linksRouter(deps: { links: LinksService; designs: DesignsService
   router.use(requireRole(...LINK_MAKERS));
 
   router.get('/', validate({ query: listLinksQuerySchema }), async (req, res) => {
-    const { designId } = req.query as unknown as z.output<typeof listLinksQuerySchema>;
+    const { designId } = req.query;
     res.json({ links: await links.list(req.user!, { designId }) });
   });
 
@@ -34,7 +33,7 @@ export function linksRouter(deps: { links: LinksService; designs: DesignsService
   });
 
   router.post('/', validate({ body: createLinkBodySchema }), async (req, res) => {
-    const body = req.body as z.output<typeof createLinkBodySchema>;
+    const body = req.body;
     const created = await links.create(req.user!, body);
     const url = `${publicBaseUrl(req, config)}${created.path}`;
     if (body.email) {
@@ -44,7 +43,7 @@ export function linksRouter(deps: { links: LinksService; designs: DesignsService
   });
 
   router.delete('/:id', validate({ params: linkIdParamsSchema }), async (req, res) => {
-    const { id } = req.params as unknown as z.output<typeof linkIdParamsSchema>;
+    const { id } = req.params;
     res.json({ link: await links.revoke(req.user!, id) });
   });
 
@@ -57,7 +56,7 @@ export interface LinkRateLimit {
   windowMs: number;
 }
 
-export const DEFAULT_LINK_RATE_LIMIT: LinkRateLimit = { max: 600, windowMs: 60_000 };
+export const DEFAULT_LINK_RATE_LIMIT: LinkRateLimit = { max: DEFAULT_LINK_REQUESTS_PER_MINUTE, windowMs: 60_000 };
 
 function linkRateLimiter(limits: LinkRateLimit): RequestHandler {
   return rateLimit({
@@ -88,7 +87,7 @@ export function sharedRouter(deps: { links: LinksService; rateLimit?: LinkRateLi
   });
 
   router.get('/:token', validate({ params: tokenParamsSchema }), async (req, res) => {
-    const { token } = req.params as unknown as z.output<typeof tokenParamsSchema>;
+    const { token } = req.params;
     if (!/^[A-Za-z0-9_-]{43}$/.test(token)) {
       // Malformed tokens take the same path as unknown ones, so the answer time says nothing.
       await deps.links.open('0'.repeat(43)).catch(() => undefined);

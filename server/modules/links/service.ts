@@ -4,7 +4,6 @@ import { sqliteDateToIso } from '../../db/dates';
 import type { UserModel } from '../../db/models/user';
 import { AppError, notFound } from '../../middleware/appError';
 import type { PersonRef, StoredRevision } from '../designs/present';
-import { createDesignsService } from '../designs/service';
 import { hashToken, newToken } from './tokens';
 
 export interface LinkView {
@@ -94,7 +93,6 @@ export const linkViewerPath = (token: string) => `/view/${token}`;
 
 export function createLinksService(db: Database) {
   const { ShareLink, Design, DesignRevision } = db.models;
-  const designs = createDesignsService(db);
   const select = <T extends object>(sql: string, replacements: Record<string, unknown> = {}) =>
     db.sequelize.query<T>(sql, { replacements, type: QueryTypes.SELECT });
 
@@ -185,15 +183,23 @@ export function createLinksService(db: Database) {
      */
     async open(token: string): Promise<{ link: { label: string; pinnedRevision: number | null; expiresAt: string | null }; design: { name: string; systemId: string; latestRevision: number }; revision: StoredRevision }> {
       const hash = hashToken(token);
-      const [row] = await select<LinkRow & { latestRevision: number; systemId: string }>(
-        `${LINK_SELECT.replace('SELECT', 'SELECT d.latest_revision AS latestRevision, d.system_id AS systemId,')} WHERE l.token_hash = :hash`,
+      // One indexed query answers every case: the link, its class and design, and the revision it
+      // shows (pinned or latest), so a refused token and a shown one cost the same round trip.
+      const [row] = await select<LinkRow & { latestRevision: number; systemId: string; shownNumber: number | null; shownCreatedAt: string | null; shownMessage: string | null; document: string | null }>(
+        `${LINK_SELECT.replace(
+          'SELECT',
+          'SELECT d.latest_revision AS latestRevision, d.system_id AS systemId, r.number AS shownNumber, r.created_at AS shownCreatedAt, r.message AS shownMessage, r.document AS document,',
+        )}
+          LEFT JOIN design_revisions r ON r.design_id = l.design_id AND r.number = COALESCE(l.revision_number, d.latest_revision)
+         WHERE l.token_hash = :hash`,
         { hash },
       );
-      if (!row || !isActive(row, Date.now())) throw linkNotFound();
-      const number = row.revision ?? row.latestRevision;
-      const revision = await designs.getRevision(row.designId, number).catch(() => {
-        throw linkNotFound();
-      });
+      if (!row || !isActive(row, Date.now()) || row.shownNumber === null || row.shownCreatedAt === null) throw linkNotFound();
+      // A visitor sees the revision's number, date and note, not who saved it.
+      const revision: StoredRevision = {
+        meta: { number: row.shownNumber, createdAt: sqliteDateToIso(row.shownCreatedAt), createdBy: { id: 0, displayName: '' }, message: row.shownMessage, thumbnailUrl: null },
+        documentJson: row.document ?? 'null',
+      };
       pendingOpens.set(row.id, (pendingOpens.get(row.id) ?? 0) + 1);
       return {
         link: { label: row.label, pinnedRevision: row.revision, expiresAt: isoOrNull(row.expiresAt ?? row.classExpiresAt) },

@@ -1,6 +1,5 @@
 import { Router } from 'express';
 import { QueryTypes } from 'sequelize';
-import type { z } from 'zod';
 import type { Database } from '../../db/database';
 import { sqliteDateToIso } from '../../db/dates';
 import { analyze } from '../../domainBridge';
@@ -11,8 +10,6 @@ import type { DesignsService } from '../designs/service';
 import { analysisCsv } from './csv';
 import { bomDiff, cutListDiff } from './diff';
 import { designParamsSchema, diffQuerySchema, exportParamsSchema, exportQuerySchema, importBodySchema } from './schemas';
-
-type DesignParams = z.output<typeof designParamsSchema>;
 
 export type ApprovalState = 'approved' | 'changes_requested' | 'not_reviewed';
 
@@ -31,7 +28,7 @@ export function revisionsRouter(deps: { db: Database; designs: DesignsService })
   router.use(['/history', '/diff', '/export'], requireRole('owner', 'designer'));
 
   router.get('/history', validate({ params: designParamsSchema }), async (req, res) => {
-    const { designId } = req.params as unknown as DesignParams;
+    const { designId } = req.params;
     const revisions = await designs.listRevisions(designId);
     const decisions = await db.sequelize.query<{ revision: number; decision: Exclude<ApprovalState, 'not_reviewed'>; byName: string; at: string }>(
       `SELECT r.revision_number AS revision, r.decision AS decision, u.display_name AS byName, r.created_at AS at
@@ -52,8 +49,8 @@ export function revisionsRouter(deps: { db: Database; designs: DesignsService })
   });
 
   router.get('/diff', validate({ params: designParamsSchema, query: diffQuerySchema }), async (req, res) => {
-    const { designId } = req.params as unknown as DesignParams;
-    const { from, to } = req.query as unknown as z.output<typeof diffQuerySchema>;
+    const { designId } = req.params;
+    const { from, to } = req.query;
     const [before, after] = await Promise.all([designs.getRevision(designId, from), designs.getRevision(designId, to)]);
     const analysisOf = async (json: string) => analyze(await requireValidDocument(JSON.parse(json)));
     const [a, b] = [await analysisOf(before.documentJson), await analysisOf(after.documentJson)];
@@ -61,8 +58,8 @@ export function revisionsRouter(deps: { db: Database; designs: DesignsService })
   });
 
   router.get('/export/:file', validate({ params: exportParamsSchema, query: exportQuerySchema }), async (req, res) => {
-    const { designId, file } = req.params as unknown as z.output<typeof exportParamsSchema>;
-    const { revision: number } = req.query as unknown as z.output<typeof exportQuerySchema>;
+    const { designId, file } = req.params;
+    const { revision: number } = req.query;
     const latest = await designs.getLatest(designId);
     const revision = number === undefined ? latest.revision : await designs.getRevision(designId, number);
     const stem = `${fileStem(latest.design.name)}-r${revision.meta.number}`;
@@ -83,7 +80,7 @@ export function importRouter(designs: DesignsService): Router {
   const router = Router();
   router.use(requireRole('owner', 'designer'));
   router.post('/', validate({ body: importBodySchema }), async (req, res) => {
-    const { document } = req.body as z.output<typeof importBodySchema>;
+    const { document } = req.body;
     const parsed = await requireValidDocument(document);
     res.status(201).json(await designs.create(req.user!, parsed, { message: 'Imported from a file' }));
   });

@@ -1,6 +1,5 @@
 import { Router, type ErrorRequestHandler } from 'express';
 import multer from 'multer';
-import type { z } from 'zod';
 import { AppError } from '../../middleware/appError';
 import { requireRole } from '../../middleware/requireAuth';
 import { validate } from '../../middleware/validate';
@@ -24,12 +23,12 @@ export function designUploadsRouter(uploads: UploadsService): Router {
   router.use(requireRole('owner', 'designer'));
 
   router.get('/', validate({ params: designParamsSchema }), async (req, res) => {
-    const { designId } = req.params as unknown as z.output<typeof designParamsSchema>;
+    const { designId } = req.params;
     res.json({ uploads: await uploads.list(designId) });
   });
 
   router.route('/').post(receive, multerErrors).post(validate({ params: designParamsSchema }), async (req, res) => {
-    const { designId } = req.params as unknown as z.output<typeof designParamsSchema>;
+    const { designId } = req.params;
     if (!req.file) throw new AppError(400, 'invalid_upload', 'Send one file in the form field "file".', { fields: { file: 'Choose a file' } });
     const upload = await uploads.add(req.user!, designId, { originalName: req.file.originalname, claimedType: req.file.mimetype, bytes: req.file.buffer });
     res.status(201).json({ upload });
@@ -43,20 +42,20 @@ export function uploadsRouter(uploads: UploadsService): Router {
   router.use(requireRole('owner', 'designer'));
 
   router.get('/:id/file', validate({ params: uploadParamsSchema }), async (req, res) => {
-    const { id } = req.params as unknown as z.output<typeof uploadParamsSchema>;
+    const { id } = req.params;
     const { upload, bytes } = await uploads.file(id);
     res.attachment(upload.originalName);
     res.set({ 'Content-Type': upload.mimeType, 'X-Content-Type-Options': 'nosniff', 'Content-Security-Policy': "default-src 'none'; sandbox" }).send(bytes);
   });
 
   router.get('/:id/thumbnail', validate({ params: uploadParamsSchema }), async (req, res) => {
-    const { id } = req.params as unknown as z.output<typeof uploadParamsSchema>;
+    const { id } = req.params;
     const bytes = await uploads.thumbnail(id);
     res.set({ 'Content-Type': 'image/webp', 'X-Content-Type-Options': 'nosniff', 'Cache-Control': 'private, max-age=3600', 'Content-Security-Policy': "default-src 'none'; sandbox" }).send(bytes);
   });
 
   router.delete('/:id', validate({ params: uploadParamsSchema }), async (req, res) => {
-    const { id } = req.params as unknown as z.output<typeof uploadParamsSchema>;
+    const { id } = req.params;
     await uploads.remove(req.user!, id);
     res.status(204).end();
   });

@@ -3,7 +3,7 @@
  * common practice, not rules: every caution ends by deferring to local rules.
  * Units: mm, kg.
  */
-import type { DesignAnalysis } from '../analysisTypes';
+import type { DesignAnalysis } from '../analysis/types';
 import { TWO_PERSON_LIFT_KG as CORE_TWO_PERSON_LIFT_KG, type CautionKind as StepCautionKind } from '../assembly';
 
 /**

@@ -5,7 +5,7 @@
  * designer. The workbench adds the design-wide caution to secure a tall frame on the last step.
  * Units: mm, kg.
  */
-import type { DesignAnalysis } from '../analysisTypes';
+import type { DesignAnalysis } from '../analysis/types';
 import { sequenceOf, type AssemblySequence, type SequenceStep, type StepHardware, type StepKind, type StepTool } from '../assembly';
 import type { DesignDocument } from '../design/schema';
 import { wallCaution, type Caution } from './cautions';

@@ -17,12 +17,11 @@ import type {
   StructureResult,
   TipOverResult,
   Vec3Tuple,
-} from '../analysisTypes';
+} from '../analysis/types';
 import { jointCapacity } from '../catalogue/jointCapacity';
 import type { DesignSettings, Load, LoadCase } from '../design/schema';
-import { panelAxes } from '../geometry/panelGeometry';
 import { pointAlongProfile } from '../geometry/profileGeometry';
-import { dominantAxis, dot, type Vec3 } from '../geometry/vectors';
+import { dot, type Vec3 } from '../geometry/vectors';
 import { axialBendingUtilisation, columnCapacity } from '../structure/aluminiumColumns';
 import { beamResponse, type BeamCase } from '../structure/beams';
 import { EFFECTIVE_LENGTH_FACTORS, type EndCondition } from '../structure/columns';
@@ -30,8 +29,9 @@ import { shareLegLoads } from '../structure/legLoads';
 import { oneWayStripDeflection, simplySupportedPlateDeflection } from '../structure/plates';
 import { PUSH_TEST_MIN_HEIGHT_MM, STABILITY_PUSH_FORCE_N } from '../structure/stability';
 import { tipOverForce } from '../structure/tipOver';
-import { memberAlong, type AnalysisContext, type PanelInfo, type ProfileInfo } from './context';
+import { memberAlong, type AnalysisContext, type PanelInfo, type ProfileInfo } from '../analysis/context';
 import { footprintLeverArm } from './footprint';
+import { findLegs, frameBracing, panelSupports } from './frameShape';
 
 /** Standard gravity, m/s² (exact by definition, CGPM 1901). */
 export const GRAVITY = 9.80665;
@@ -41,11 +41,6 @@ export const BRACED_LEG_END_CONDITION: EndCondition = 'pinned-pinned';
 export const UNBRACED_LEG_END_CONDITION: EndCondition = 'pinned-fixed-sway';
 /** A point load this close to mid-span (share of span) may use the fixed-ends centre-load case. */
 const CENTRE_BAND = 0.1;
-/** A direction component above this counts as vertical. */
-const VERTICAL = 0.999;
-const FLOOR_TOLERANCE_MM = 1;
-/** A profile direction this far off every axis is a diagonal brace. */
-const DIAGONAL = 0.05;
 
 export interface FrameMass {
   /** kg */
@@ -334,68 +329,6 @@ function subtract(a: readonly number[], b: readonly number[]): Vec3 {
 
 function clampAlong(info: ProfileInfo, t: number): number {
   return Math.min(Math.max(t, 0), info.profile.length);
-}
-
-/** The two profiles along the panel's longer edges that carry it (its frame, or profiles under a face-mounted sheet). */
-export function panelSupports(ctx: AnalysisContext, panel: PanelInfo): ProfileInfo[] {
-  const { n, w, h } = panelAxes(panel.panel.rect.normal);
-  const longAxis = panel.panel.rect.width >= panel.panel.rect.height ? w : h;
-  let candidates: ProfileInfo[];
-  if (panel.panel.mounting === 'captured' && panel.bounding.length > 0) {
-    candidates = panel.bounding;
-  } else {
-    candidates = [];
-    ctx.profileGrid.forEachNear(panel.box, (i) => candidates.push(ctx.profiles[i]), 1);
-    candidates = candidates.filter((c) => dominantAxis(c.profile.direction) !== n);
-  }
-  const along = candidates.filter((c) => dominantAxis(c.profile.direction) === longAxis);
-  const pool = along.length >= 2 ? along : candidates;
-  if (pool.length <= 2) return pool;
-  const across = longAxis === w ? h : w;
-  const sorted = [...pool].sort((a, b) => a.startPoint[across] - b.startPoint[across]);
-  return [sorted[0], sorted[sorted.length - 1]];
-}
-
-/** Vertical profiles whose lower end stands at the lowest level of the frame. */
-export function findLegs(ctx: AnalysisContext): ProfileInfo[] {
-  let floor = Infinity;
-  for (const p of ctx.profiles) floor = Math.min(floor, p.box.minY);
-  const legs: ProfileInfo[] = [];
-  for (const p of ctx.profiles) {
-    if (Math.abs(p.profile.direction[1]) < VERTICAL) continue;
-    const bottom = Math.min(p.startPoint[1], p.endPoint[1]);
-    if (bottom - floor <= FLOOR_TOLERANCE_MM + Math.max(p.width, p.height) / 2) legs.push(p);
-  }
-  return legs;
-}
-
-/**
- * Which plan directions have something against racking: a diagonal profile, a gusset-plate joint
- * or a panel in a vertical plane along that direction.
- */
-export function frameBracing(ctx: AnalysisContext): { x: boolean; z: boolean } {
-  let x = false;
-  let z = false;
-  for (const p of ctx.profiles) {
-    const d = p.profile.direction;
-    const offAxis = [Math.abs(d[0]), Math.abs(d[1]), Math.abs(d[2])].filter((c) => c > DIAGONAL).length >= 2;
-    if (!offAxis || Math.abs(d[1]) <= DIAGONAL) continue;
-    if (Math.abs(d[0]) > DIAGONAL) x = true;
-    if (Math.abs(d[2]) > DIAGONAL) z = true;
-  }
-  for (const joint of ctx.design.joints) {
-    if (joint.kind !== 'gusset-plate') continue;
-    const axes = joint.members.map((m) => ctx.profileById.get(m.profileId)).filter((i): i is ProfileInfo => !!i).map((i) => dominantAxis(i.profile.direction));
-    if (!axes.includes(1)) continue;
-    if (axes.includes(0)) x = true;
-    if (axes.includes(2)) z = true;
-  }
-  for (const panel of ctx.panels) {
-    const n = panel.panel.rect.normal;
-    if (n === 'z') x = true;
-    if (n === 'x') z = true;
-  }
-  return { x, z };
 }
 
 function legChecks(ctx: AnalysisContext, legs: ProfileInfo[], loads: { force: number; x: number; z: number }[], racking: RackingResult, E: number, f0: number): LegResult[] {

@@ -6,6 +6,16 @@
 import { besideOffset, mergeDesign } from './mergeDesign';
 import { OperationError, type JointChanges, type SettingsChanges } from './operationTypes';
 import type { DesignDocument, LoadCase, Vec3 } from './schema';
+import { LENGTH_UNITS, type LengthUnit } from '../units';
+
+/**
+ * Sets the units the design is shown in ('mm' or 'in'). Only a display preference, saved with the
+ * design so it opens the way it was made: every length inside stays in mm.
+ */
+export function setUnits(design: DesignDocument, units: LengthUnit): DesignDocument {
+  if (!(LENGTH_UNITS as readonly string[]).includes(units)) throw new OperationError(`Units must be ${LENGTH_UNITS.join(' or ')}, not "${String(units)}"`);
+  return design.units === units ? design : { ...design, units };
+}
 
 /** Changes design.settings fields (stock length, kerf, end trim, reusable offcut, …), mm. */
 export function updateSettings(design: DesignDocument, changes: SettingsChanges): DesignDocument {

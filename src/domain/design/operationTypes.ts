@@ -2,6 +2,7 @@
  * The inputs of the design operations and their serialisable form, `DesignOperation`
  * (type + payload), which findings carry as fixes and the editor replays. Lengths mm.
  */
+import type { LengthUnit } from '../units';
 import type { Accessory, AccessoryKind, AssemblyStep, Axis, Cutout, DesignDocument, DesignSettings, Joint, JointKind, JointMember, LoadCase, Panel, Vec3 } from './schema';
 
 export class OperationError extends Error {
@@ -124,6 +125,7 @@ export type DesignOperation =
   | { type: 'autoEndCaps'; payload?: Record<string, never> }
   | { type: 'addFeetToFreeBottomEnds'; payload?: { kind?: 'leveling-foot' | 'caster' } }
   | { type: 'updateSettings'; payload: { changes: SettingsChanges } }
+  | { type: 'setUnits'; payload: { units: LengthUnit } }
   | { type: 'addLoadCase'; payload: { loadCase: LoadCase } }
   | { type: 'removeLoadCase'; payload: { loadCaseId: string } }
   | { type: 'updateJoint'; payload: { jointId: string; changes: JointChanges } }
@@ -146,5 +148,8 @@ export type DesignOperation =
 
 /** Operations that edit the assembly sequence rather than the parts. */
 export const SEQUENCE_OPERATION_TYPES: ReadonlySet<string> = new Set(['moveStep', 'moveStepBefore', 'moveStepAfter', 'mergeSteps', 'splitStep', 'movePartsToStep', 'updateStep', 'regenerateSequence']);
+
+/** Operations that change only how the design is shown: its parts and assembly steps stay as they are. */
+export const DISPLAY_OPERATION_TYPES: ReadonlySet<string> = new Set(['setUnits']);
 
 export type DesignOperationType = DesignOperation['type'];

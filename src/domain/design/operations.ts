@@ -8,7 +8,7 @@ import { connectorFor, defaultCatalogue, getConnector, getSystem } from '../cata
 import type { Catalogue } from '../catalogue/types';
 import { normalize } from '../geometry/vectors';
 import { addHingedDoor, addSlidingDoors } from './doorOperations';
-import { addLoadCase, insertDesign, removeLoadCase, replaceDesign, updateJoint, updateSettings } from './documentOperations';
+import { addLoadCase, insertDesign, removeLoadCase, replaceDesign, setUnits, updateJoint, updateSettings } from './documentOperations';
 import { addFeetToFreeBottomEnds, autoEndCaps } from './endTreatments';
 import { pruneFrameGroups } from './frameGroupMembers';
 import { createIdAllocator, type IdAllocator } from './ids';
@@ -17,6 +17,7 @@ import { arrayParts, duplicateParts, mirrorParts, refreshJointPositions, rotateP
 import { followPartChanges, mergeSteps, moveStep, moveStepAfter, moveStepBefore, movePartsToStep, regenerateSequence, splitStep, updateStep } from '../assembly/sequenceOperations';
 import {
   OperationError,
+  DISPLAY_OPERATION_TYPES,
   SEQUENCE_OPERATION_TYPES,
   type AccessoryInput,
   type DesignOperation,
@@ -349,11 +350,12 @@ export function addAccessory(design: DesignDocument, input: AccessoryInput, cata
 
 /**
  * Applies one serialisable operation. After a change to the parts, an assembly order the designer
- * never edited is generated again so it keeps up with the design.
+ * never edited is generated again so it keeps up with the design (not after a display-only change
+ * such as the units).
  */
 export function applyOperation(design: DesignDocument, op: DesignOperation, catalogue: Catalogue = defaultCatalogue): DesignDocument {
   const next = applyOperationOnly(design, op, catalogue);
-  return SEQUENCE_OPERATION_TYPES.has(op.type) ? next : followPartChanges(design, next);
+  return SEQUENCE_OPERATION_TYPES.has(op.type) || DISPLAY_OPERATION_TYPES.has(op.type) ? next : followPartChanges(design, next);
 }
 
 function applyOperationOnly(design: DesignDocument, op: DesignOperation, catalogue: Catalogue): DesignDocument {
@@ -398,6 +400,8 @@ function applyOperationOnly(design: DesignDocument, op: DesignOperation, catalog
       return addFeetToFreeBottomEnds(design, op.payload?.kind ?? 'leveling-foot', catalogue);
     case 'updateSettings':
       return updateSettings(design, op.payload.changes);
+    case 'setUnits':
+      return setUnits(design, op.payload.units);
     case 'addLoadCase':
       return addLoadCase(design, op.payload.loadCase);
     case 'removeLoadCase':

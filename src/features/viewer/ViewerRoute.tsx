@@ -3,7 +3,7 @@ import { Link, useParams } from 'react-router';
 import { Eye, EyeOff } from 'lucide-react';
 import { ErrorNotice, PageSkeleton } from '@/components/ui';
 import { DesignViewer, StepList, StepPlayerControls, StepPlayerScene, usePlayerKeys, useStepPlayer, type CameraRequest, type PlayerView, type StepPlayerState } from '@/components/viewer';
-import type { DesignAnalysis } from '@/domain/analysisTypes';
+import type { DesignAnalysis } from '@/domain/analysis/types';
 import { sequenceOf } from '@/domain/assembly';
 import { defaultCatalogue } from '@/domain/catalogue';
 import type { DesignDocument } from '@/domain/design/schema';
@@ -170,7 +170,7 @@ function useDeferredAnalysis(design: DesignDocument): DesignAnalysis | null {
   useEffect(() => {
     let cancelled = false;
     const timer = window.setTimeout(() => {
-      void import('@/domain/analyze').then(({ analyzeDesign }) => {
+      void import('@/domain/analysis/analyze').then(({ analyzeDesign }) => {
         if (!cancelled) setAnalysis(analyzeDesign(design, defaultCatalogue));
       });
     }, 50);

@@ -3,7 +3,7 @@ import { boxFrameGenerator, generateDesign } from '@/domain/design/generators';
 import type { DesignDocument } from '@/domain/design/schema';
 import { commandFromJSON, groupCommand, operationCommand, type EditorCommand } from '@/features/editor/commands';
 import { insertDesignCommand } from '@/features/editor/commands/insertDesignCommand';
-import { updateJointCommand, updatePanelCommand, updateProfileCommand } from '@/features/editor/commands/patchCommands';
+import { setDesignUnitsCommand, updateJointCommand, updatePanelCommand, updateProfileCommand } from '@/features/editor/commands/patchCommands';
 import { replaceDesignCommand } from '@/features/editor/commands/replaceDesignCommand';
 import { deletePartsCommand } from '@/features/editor/commands/selectionCommands';
 import { addLoadCaseCommand, removeLoadCaseCommand, updateSettingsCommand } from '@/features/editor/panels/panelCommands';
@@ -27,6 +27,7 @@ describe('a recorded command history', () => {
       updatePanelCommand('Thinner sheet', panel.id, { thickness: 3 }),
       updateJointCommand('Socket heads', joint.id, { fastenerHead: 'socket' }),
       updateProfileCommand('Longer', profile.id, { length: profile.length + 50 }),
+      setDesignUnitsCommand('in'),
       insertDesignCommand('Add a box frame', generateDesign('box-frame', boxFrameGenerator.defaults)),
       groupCommand('Two edits', [deletePartsCommand([original.profiles[1].id]), operationCommand('Caps', { type: 'autoEndCaps' })]),
     ];
@@ -41,6 +42,7 @@ describe('a recorded command history', () => {
     const replayed = recorded.map((text) => commandFromJSON(JSON.parse(text))).reduce((design, command) => command.apply(design), original);
     expect(replayed).toEqual(edited);
     expect(replayed.settings.kerf).toBe(2.5);
+    expect(replayed.units).toBe('in');
     expect(replayed.loadCases.map((loadCase) => loadCase.id)).toEqual(['load-1']);
     expect(replayed.profiles.length).toBeGreaterThan(original.profiles.length);
   });

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/apiClient';
 import { buildDetailSchema } from '@/domain/contracts/builds';
-import { designBuildKeys } from './designBuilds';
+import { buildKeys } from '@/lib/queryKeys';
 
 export interface CreateBuildInput {
   designId: number;
@@ -17,5 +17,5 @@ export async function createBuild(input: CreateBuildInput) {
 
 export function useCreateBuild() {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: createBuild, onSuccess: () => queryClient.invalidateQueries({ queryKey: designBuildKeys.all }) });
+  return useMutation({ mutationFn: createBuild, onSuccess: () => queryClient.invalidateQueries({ queryKey: buildKeys.all }) });
 }

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/apiClient';
-import { designKeys } from './designKeys';
+import { designKeys } from '@/lib/queryKeys';
 import type { DesignSummary } from './schemas';
 
 export function deleteDesign(designId: number): Promise<void> {

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/apiClient';
-import { sharingKeys } from './sharingSchemas';
+import { designKeys } from '@/lib/queryKeys';
 
 export async function deleteUpload({ id }: { id: number; designId: number }): Promise<void> {
   await apiFetch(`/api/uploads/${id}`, { method: 'DELETE' });
@@ -8,5 +8,5 @@ export async function deleteUpload({ id }: { id: number; designId: number }): Pr
 
 export function useDeleteUpload() {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: deleteUpload, onSuccess: (_result, input) => queryClient.invalidateQueries({ queryKey: sharingKeys.uploads(input.designId) }) });
+  return useMutation({ mutationFn: deleteUpload, onSuccess: (_result, input) => queryClient.invalidateQueries({ queryKey: designKeys.uploads(input.designId) }) });
 }

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { apiFetch } from '@/lib/apiClient';
-import { designKeys } from './designKeys';
+import { designKeys } from '@/lib/queryKeys';
 import { designSummarySchema } from './schemas';
 
 /** A new design from a design document file; the server checks it in full and writes nothing on a bad file. */

@@ -2,7 +2,7 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import { z } from 'zod';
 import { apiFetch } from '@/lib/apiClient';
 import { personRefSchema } from '@/domain/contracts/designs';
-import { designBuildKeys } from './designBuilds';
+import { buildKeys } from '@/lib/queryKeys';
 
 const responseSchema = z.object({ builders: z.array(personRefSchema) });
 
@@ -11,7 +11,7 @@ export async function listBuilders(signal?: AbortSignal) {
   return (await apiFetch('/api/builds/builders', { schema: responseSchema, signal })).builders;
 }
 
-export const buildersQueryOptions = () => queryOptions({ queryKey: designBuildKeys.builders(), queryFn: ({ signal }) => listBuilders(signal) });
+export const buildersQueryOptions = () => queryOptions({ queryKey: buildKeys.builders(), queryFn: ({ signal }) => listBuilders(signal) });
 
 export function useBuilders(enabled: boolean) {
   return useQuery({ ...buildersQueryOptions(), enabled });

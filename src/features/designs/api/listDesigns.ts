@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/apiClient';
-import { designKeys } from './designKeys';
+import { designKeys } from '@/lib/queryKeys';
 import { designsListResponseSchema, type DesignSummary } from './schemas';
 
 export async function listDesigns(signal?: AbortSignal): Promise<DesignSummary[]> {

@@ -32,8 +32,3 @@ export const uploadSchema = z.object({
 });
 export type Upload = z.infer<typeof uploadSchema>;
 
-export const sharingKeys = {
-  history: (designId: number) => ['designs', 'detail', designId, 'history'] as const,
-  diff: (designId: number, from: number, to: number) => ['designs', 'detail', designId, 'diff', from, to] as const,
-  uploads: (designId: number) => ['designs', 'detail', designId, 'uploads'] as const,
-};

@@ -1,7 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { apiFetch } from '@/lib/apiClient';
-import { sharingKeys, uploadSchema, type Upload } from './sharingSchemas';
+import { uploadSchema, type Upload } from './sharingSchemas';
+import { designKeys } from '@/lib/queryKeys';
 
 /** Attaches a photo or PDF to a design (multipart, field "file"). */
 export async function uploadFile({ designId, file }: { designId: number; file: File }): Promise<Upload> {
@@ -12,5 +13,5 @@ export async function uploadFile({ designId, file }: { designId: number; file: F
 
 export function useUploadFile() {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: uploadFile, onSuccess: (_upload, input) => queryClient.invalidateQueries({ queryKey: sharingKeys.uploads(input.designId) }) });
+  return useMutation({ mutationFn: uploadFile, onSuccess: (_upload, input) => queryClient.invalidateQueries({ queryKey: designKeys.uploads(input.designId) }) });
 }

@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/apiClient';
-import { editorKeys } from './editorKeys';
+import { designKeys } from '@/lib/queryKeys';
 import { editorDesignResponseSchema, type EditorDesignDetail } from './schemas';
 
 /** GET /api/designs/:id — the design and its latest revision, document validated. */
@@ -10,7 +10,7 @@ export function getEditorDesign(designId: number, signal?: AbortSignal): Promise
 
 export const editorDesignQueryOptions = (designId: number) =>
   queryOptions({
-    queryKey: editorKeys.design(designId),
+    queryKey: designKeys.detail(designId),
     queryFn: ({ signal }) => getEditorDesign(designId, signal),
     // The store owns the document once loaded; a background refetch must not look like news.
     staleTime: Infinity,

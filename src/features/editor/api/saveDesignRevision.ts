@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import type { DesignDocument } from '@/domain/design/schema';
 import { apiFetch } from '@/lib/apiClient';
-import { editorKeys } from './editorKeys';
+import { designKeys } from '@/lib/queryKeys';
 import { savedRevisionSchema, type EditorDesignDetail, type EditorRevision } from './schemas';
 
 export interface SaveDesignRevisionInput {
@@ -32,7 +32,7 @@ export function useSaveDesignRevision() {
   return useMutation({
     mutationFn: saveDesignRevision,
     onSuccess: (revision, { designId }) => {
-      queryClient.setQueryData<EditorDesignDetail>(editorKeys.design(designId), (detail) =>
+      queryClient.setQueryData<EditorDesignDetail>(designKeys.detail(designId), (detail) =>
         detail
           ? {
               design: { ...detail.design, latestRevision: revision.number, updatedAt: revision.createdAt, updatedBy: revision.createdBy },
@@ -40,8 +40,9 @@ export function useSaveDesignRevision() {
             }
           : detail,
       );
-      // The designs feature caches lists under ['designs', ...]; refresh them without importing that feature.
-      void queryClient.invalidateQueries({ queryKey: ['designs'] });
+      // The list's "updated" line and the design's history change; the detail was just set above.
+      void queryClient.invalidateQueries({ queryKey: designKeys.lists() });
+      void queryClient.invalidateQueries({ queryKey: designKeys.history(designId) });
     },
   });
 }

@@ -1,5 +1,5 @@
 import type { JointChanges, PanelChanges, ProfileChanges } from '@/domain/design/operationTypes';
-import type { DesignDocument } from '@/domain/design/schema';
+import type { LengthUnit } from '@/domain/units';
 import type { EditorCommand } from './EditorCommand';
 import { operationCommand } from './operationCommand';
 
@@ -18,19 +18,6 @@ export function updateJointCommand(label: string, jointId: string, changes: Join
 }
 
 /** The units the design is shown in: saved with the design, so it opens the way it was made. */
-export function setDesignUnitsCommand(units: DesignDocument['units']): EditorCommand {
-  let previous: DesignDocument['units'] | null = null;
-  return {
-    label: units === 'in' ? 'Show inches' : 'Show millimetres',
-    apply(design) {
-      previous = design.units;
-      return { ...design, units };
-    },
-    undo(design) {
-      return previous ? { ...design, units: previous } : design;
-    },
-    toJSON() {
-      return { type: 'set-units', units };
-    },
-  };
+export function setDesignUnitsCommand(units: LengthUnit): EditorCommand {
+  return operationCommand(units === 'in' ? 'Show inches' : 'Show millimetres', { type: 'setUnits', payload: { units } });
 }

@@ -1,9 +1,11 @@
 import { useCallback, useMemo, useState } from 'react';
 import { useParams, useSearchParams } from 'react-router';
-import { Code, Layers, Ruler, Scissors, Table2, Move3d } from 'lucide-react';
-import { analyzeDesign } from '@/domain/analyze';
+import { Code, Layers, ListOrdered, Ruler, Scissors, Table2, Move3d } from 'lucide-react';
+import { analyzeDesign } from '@/domain/analysis/analyze';
+import { sequenceOf } from '@/domain/assembly';
 import type { LengthUnit } from '@/domain/units';
-import { DesignViewer } from '@/components/viewer';
+import { DesignViewer, StepList, StepPlayerControls, StepPlayerScene, usePlayerKeys, useStepPlayer } from '@/components/viewer';
+import { SeeInRoom } from '@/components/viewer/room';
 import { MeasureTool, OverallDimensions, SectionPlane, type SectionAxis } from '@/components/viewer/tools';
 import { PartsTab } from '@/components/outputs';
 import { Button, Dialog, ErrorNotice, PageSkeleton } from '@/components/ui';
@@ -11,12 +13,14 @@ import { isApiError } from '@/lib/apiClient';
 import { messageOf } from '@/lib/formErrors';
 import { cn } from '@/lib/cn';
 import { useSharedDesign } from '../api/getSharedDesign';
-import { GltfExportButton } from './GltfExportButton';
+import { GltfExportButton, UsdzExportButton } from './ExportButtons';
 
 /**
- * The read-only link viewer (no sign-in): orbit and zoom, panels on/off, overall dimensions, a
- * section plane along X, Y or Z, a two-point measure, the bill of materials and an embed snippet.
- * `?embed=1` hides the page chrome for iframes.
+ * The read-only link viewer (no sign-in): orbit and zoom, panels on/off, the exploded-view player
+ * with its explode slider (the shared player, mounted as on the viewer page), overall dimensions, a
+ * section plane along X, Y or Z, a two-point measure, the bill of materials, glTF and USDZ exports,
+ * "See it in the room" where the browser offers it, and an embed snippet. `?embed=1` hides the
+ * page chrome for iframes.
  */
 export default function LinkViewerPage() {
   const { token = '' } = useParams();
@@ -45,6 +49,11 @@ function SharedView({ token, embedded, data }: { token: string; embedded: boolea
   const design = data.revision.document;
   const units: LengthUnit = design.units === 'in' ? 'in' : 'mm';
   const analysis = useMemo(() => analyzeDesign(design), [design]);
+  // The design's saved order (or a generated one) from the assembly core, with its motions.
+  const steps = useMemo(() => sequenceOf(design).steps, [design]);
+  const player = useStepPlayer(steps);
+  usePlayerKeys(player);
+  const [stepsOpen, setStepsOpen] = useState(true);
   const [panels, setPanels] = useState(true);
   const [dimensions, setDimensions] = useState(true);
   const [sectionAxis, setSectionAxis] = useState<SectionAxis | null>(null);
@@ -55,6 +64,9 @@ function SharedView({ token, embedded, data }: { token: string; embedded: boolea
   const [embedOpen, setEmbedOpen] = useState(false);
   const [selection, setSelection] = useState<string[]>([]);
   const onMeasure = useCallback((mm: number | null) => setMeasured(mm), []);
+  const onPartClick = useCallback((id: string) => setSelection((current) => (current.includes(id) ? [] : [id])), []);
+  const onEmptyClick = useCallback(() => setSelection([]), []);
+  const display = useMemo(() => ({ units, panels, findingMarkers: false }), [units, panels]);
 
   const bounds = useMemo(() => designBounds(design), [design]);
   const sectionOffset = sectionAxis ? bounds.min[sectionAxis] + (bounds.max[sectionAxis] - bounds.min[sectionAxis]) * sectionAt : 0;
@@ -64,7 +76,7 @@ function SharedView({ token, embedded, data }: { token: string; embedded: boolea
     <div className="flex h-dvh flex-col bg-paper" data-testid="link-viewer">
       {!embedded && (
         <header className="flex flex-wrap items-center gap-3 border-b border-paper-line bg-paper-raised px-4 py-2">
-          <div className="min-w-0 flex-1">
+          <div className="min-w-0 flex-1 basis-full sm:basis-0">
             <h1 className="truncate text-lg font-semibold text-ink">{data.design.name}</h1>
             <p className="text-xs text-ink-muted">
               Read-only view · revision {data.revision.number}
@@ -75,6 +87,8 @@ function SharedView({ token, embedded, data }: { token: string; embedded: boolea
             Embed
           </Button>
           <GltfExportButton design={design} />
+          <UsdzExportButton design={design} />
+          <SeeInRoom design={design} />
         </header>
       )}
       <div role="toolbar" aria-label="View tools" className="flex flex-wrap items-center gap-2 border-b border-paper-line bg-paper-raised px-4 py-2 text-sm">
@@ -103,6 +117,7 @@ function SharedView({ token, embedded, data }: { token: string; embedded: boolea
             />
           )}
         </fieldset>
+        <Toggle pressed={stepsOpen} onClick={() => setStepsOpen(!stepsOpen)} icon={<ListOrdered aria-hidden className="size-4" />}>Steps</Toggle>
         <Toggle pressed={bomOpen} onClick={() => setBomOpen(!bomOpen)} icon={<Table2 aria-hidden className="size-4" />}>Bill of materials</Toggle>
         {measuring && (
           <span className="text-ink-soft" aria-live="polite">
@@ -110,21 +125,30 @@ function SharedView({ token, embedded, data }: { token: string; embedded: boolea
           </span>
         )}
       </div>
-      <div className="flex min-h-0 flex-1">
-        <div className="relative min-w-0 flex-1">
+      <div className="flex min-h-0 flex-1 flex-col lg:flex-row">
+        <div className="relative min-h-[55%] min-w-0 flex-1">
           <DesignViewer
             design={design}
             analysis={analysis}
             selection={selection}
-            display={{ units, panels, findingMarkers: false }}
-            onPartClick={measuring ? undefined : (id) => setSelection((current) => (current.includes(id) ? [] : [id]))}
-            onEmptyClick={() => setSelection([])}
+            display={display}
+            cameraRequest={player.cameraRequest}
+            onPartClick={measuring ? undefined : onPartClick}
+            onEmptyClick={onEmptyClick}
+            testId="link-viewer-canvas"
           >
+            <StepPlayerScene view={player.view} onSettled={player.onSettled} />
             <SectionPlane axis={sectionAxis} offset={sectionOffset} />
             {dimensions && <OverallDimensions units={units} selectedLengths={selectedLengths} designKey={design} />}
             <MeasureTool enabled={measuring} units={units} onMeasure={onMeasure} />
           </DesignViewer>
         </div>
+        {stepsOpen && (
+          <aside aria-label="Assembly steps" className="flex max-h-[45%] w-full shrink-0 flex-col gap-3 overflow-y-auto border-t border-paper-line bg-paper-raised p-3 lg:max-h-none lg:w-[340px] lg:border-l lg:border-t-0">
+            <StepPlayerControls player={player} />
+            <StepList player={player} />
+          </aside>
+        )}
         {bomOpen && (
           <aside aria-label="Bill of materials" className="w-full max-w-xl overflow-auto border-l border-paper-line bg-paper-raised p-3">
             <PartsTab lines={analysis.bom} units={units} designName={design.name} />

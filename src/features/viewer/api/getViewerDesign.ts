@@ -3,7 +3,7 @@ import { z } from 'zod';
 import { storedDesignDocumentSchema } from '@/domain/design/migrations';
 import { apiFetch } from '@/lib/apiClient';
 import { designSummarySchema, revisionMetaSchema } from '@/domain/contracts';
-import { viewerKeys } from './viewerKeys';
+import { designKeys } from '@/lib/queryKeys';
 
 export const viewerDesignResponseSchema = z.object({
   design: designSummarySchema,
@@ -17,7 +17,7 @@ export function getViewerDesign(designId: number, signal?: AbortSignal): Promise
 }
 
 export const viewerDesignQueryOptions = (designId: number) =>
-  queryOptions({ queryKey: viewerKeys.design(designId), queryFn: ({ signal }) => getViewerDesign(designId, signal) });
+  queryOptions({ queryKey: designKeys.detail(designId), queryFn: ({ signal }) => getViewerDesign(designId, signal) });
 
 export function useViewerDesign(designId: number) {
   return useQuery({ ...viewerDesignQueryOptions(designId), enabled: Number.isInteger(designId) && designId > 0 });

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/apiClient';
 import { buildDetailSchema, type BuildState } from '@/domain/contracts/builds';
-import { buildKeys } from './buildKeys';
+import { buildKeys } from '@/lib/queryKeys';
 
 /** POST /api/builds/:id/state — records the change with who and when. */
 export async function changeBuildState(input: { buildId: number; state: BuildState }) {

@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiFetch } from '@/lib/apiClient';
 import { buildDetailSchema, type BuildDetail } from '@/domain/contracts/builds';
-import { buildKeys } from './buildKeys';
+import { buildKeys } from '@/lib/queryKeys';
 
 /** GET /api/builds/:id — the build, its state history and every progress record on its revision. */
 export async function getBuild(buildId: number, signal?: AbortSignal): Promise<BuildDetail> {

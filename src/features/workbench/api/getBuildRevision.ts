@@ -3,7 +3,7 @@ import { z } from 'zod';
 import { parseDesignDocument } from '@/domain/design/parse';
 import type { DesignDocument } from '@/domain/design/schema';
 import { ApiError, apiFetch } from '@/lib/apiClient';
-import { buildKeys } from './buildKeys';
+import { designKeys } from '@/lib/queryKeys';
 
 const responseSchema = z.object({ revision: z.object({ number: z.number(), document: z.unknown() }) });
 
@@ -17,7 +17,7 @@ export async function getBuildRevision(designId: number, revision: number, signa
 
 export const buildRevisionQueryOptions = (designId: number, revision: number) =>
   queryOptions({
-    queryKey: buildKeys.revision(designId, revision),
+    queryKey: designKeys.revision(designId, revision),
     queryFn: ({ signal }) => getBuildRevision(designId, revision, signal),
     // A revision never changes.
     staleTime: Infinity,

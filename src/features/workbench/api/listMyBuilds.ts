@@ -2,7 +2,7 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import { z } from 'zod';
 import { apiFetch } from '@/lib/apiClient';
 import { buildSummarySchema, type BuildSummary } from '@/domain/contracts/builds';
-import { buildKeys } from './buildKeys';
+import { buildKeys } from '@/lib/queryKeys';
 
 const responseSchema = z.object({ builds: z.array(buildSummarySchema) });
 

@@ -1,5 +1,5 @@
 import { useMemo } from 'react';
-import { analyzeDesign } from '@/domain/analyze';
+import { analyzeDesign } from '@/domain/analysis/analyze';
 import { sequenceOf } from '@/domain/assembly';
 import { buildInstructions, designCautions } from '@/domain/buildInstructions';
 import { useBuild } from '../api/getBuild';

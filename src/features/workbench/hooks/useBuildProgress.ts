@@ -1,7 +1,7 @@
 import { useCallback, useEffect, useMemo, useState } from 'react';
 import { useQueryClient } from '@tanstack/react-query';
 import type { BuildDetail, BuildNotice, ProgressKind } from '@/domain/contracts/builds';
-import { buildKeys } from '../api/buildKeys';
+import { buildKeys } from '@/lib/queryKeys';
 import type { QueuedTick } from '../offline/outbox';
 import { tickOutbox } from '../offline/tickOutbox';
 import { useOnline } from './useOnline';
