@@ -2,8 +2,7 @@
  * The viewer (issue bars): in headless Chromium on CPU rendering, the read-only viewer page
  * (/designs/:id/view) of a generated 2,000-profile frame must draw under 300 k triangles in its
  * default view (level of detail), and a step-player frame must take under 2 ms of script time
- * (instance matrices of the current step rewritten; the generated frame has no saved steps, so
- * its one step holds every part: the worst case). The demo enclosure's viewer must show its first
+ * (instance matrices of the sequence's largest step rewritten mid-travel: the worst case). The demo enclosure's viewer must show its first
  * frame under 3 s from navigation. Needs a built client (CLIENT_DIST, default dist/); starts its
  * own server on a throw-away database in the system temp folder.
  */
@@ -31,6 +30,8 @@ async function startServer(dbFile: string): Promise<ChildProcess> {
       PORT: String(PORT),
       DATABASE_PATH: dbFile,
       SESSION_SECRET: 'viewer-bench-session-secret-not-for-production-0123',
+      // Production seeds nothing unless asked; the bench signs in as the demo designer.
+      SEED_DEMO: '1',
       CLIENT_DIST: process.env.CLIENT_DIST ?? 'dist',
     },
     stdio: 'ignore',
@@ -114,7 +115,7 @@ export async function run(): Promise<BenchRow[]> {
       { benchmark: BENCH, metric: 'first frame, demo enclosure viewer (median of 3)', value: firstFrame, unit: 'ms', bar: '< 3000', pass: firstFrame < 3000 },
       { benchmark: BENCH, metric: `triangles, ${document.profiles.length}-profile frame, default view`, value: figures.triangles, unit: 'triangles', bar: '< 300000', pass: figures.triangles < 300_000 },
       { benchmark: BENCH, metric: 'draw calls, default view', value: figures.calls, unit: 'calls' },
-      { benchmark: BENCH, metric: 'player frame script time, every part travelling', value: playerMs, unit: 'ms', bar: '< 2', pass: playerMs < 2 },
+      { benchmark: BENCH, metric: 'player frame script time, largest step travelling', value: playerMs, unit: 'ms', bar: '< 2', pass: playerMs < 2 },
     ];
   } finally {
     await browser.close();

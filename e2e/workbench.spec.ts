@@ -13,7 +13,7 @@ async function newSignedInPage(browser: Browser, role: 'designer' | 'builder', v
 test.describe.serial('the builder’s workbench', () => {
   let buildId = 0;
 
-  test('a designer assigns the demo enclosure; the builder cuts, steps through, ticks, reloads and resumes; the designer sees progress', async ({ browser }) => {
+  test('a designer assigns the demo enclosure; the builder cuts, steps through, ticks, reloads and resumes; the designer sees progress', async ({ browser }, testInfo) => {
     const designer = await newSignedInPage(browser, 'designer', { width: 1280, height: 900 });
     const card = designer.getByRole('listitem').filter({ has: designer.getByRole('heading', { name: 'Two-level printer enclosure' }) });
     await card.getByRole('button', { name: 'Assign build' }).click();
@@ -68,6 +68,8 @@ test.describe.serial('the builder’s workbench', () => {
       }
     }
 
+    await builder.screenshot({ path: testInfo.outputPath('build-tab-step-4.png') });
+
     // Reload: the page opens at the first step not yet done.
     await builder.reload();
     await expect(builder.getByTestId('step-position')).toContainText('Step 3 of 15');
@@ -102,6 +104,13 @@ test.describe.serial('the builder’s workbench', () => {
     await expect(builder.getByTestId('print-cover')).toContainText('Two people to lift');
     const blocks = builder.getByTestId('print-step');
     await expect(blocks).toHaveCount(15);
+    // Each picture is rendered from the shared 3D viewer with the exploded-view player, one after another.
+    await expect(builder.getByTestId('step-pictures-status')).toHaveText('15 step pictures ready', { timeout: 120_000 });
+    await expect(builder.getByTestId('step-picture-renderer')).toHaveCount(0);
+    await builder.screenshot({ path: testInfo.outputPath('print-view.png'), fullPage: false });
+    const pictureSources = await blocks.locator('img').evaluateAll((images) => images.map((image) => (image as HTMLImageElement).src));
+    // Fifteen different pictures: each step shows a different state of the piece.
+    expect(new Set(pictureSources).size).toBe(15);
     const pictureWidths = await blocks.locator('img').evaluateAll((images) => images.map((image) => (image as HTMLImageElement).naturalWidth));
     expect(pictureWidths).toHaveLength(15);
     expect(pictureWidths.every((width) => width > 0)).toBe(true);

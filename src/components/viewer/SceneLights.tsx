@@ -1,5 +1,6 @@
-import { useMemo } from 'react';
+import { useEffect, useMemo, useState } from 'react';
 import { ContactShadows } from '@react-three/drei';
+import { useThree } from '@react-three/fiber';
 import type { DesignDocument } from '@/domain/design/schema';
 import { designFootprint } from './footprint';
 
@@ -14,9 +15,11 @@ interface SceneLightsProps {
  * Lights only (no environment maps, nothing downloaded): a sky/ground fill, a warm key from the
  * front-left above, a cool rim from behind and a low fill, so slot lips and chambers read as edges;
  * plus a soft contact shadow rendered ONCE per design (not every frame) so the piece stands on the
- * floor instead of floating.
+ * floor instead of floating. The shadow is added just after the first frame: its depth and blur
+ * passes and their shaders would otherwise hold back the first picture (seconds on CPU rendering).
  */
 export function SceneLights({ design, contactShadow = true }: SceneLightsProps) {
+  const afterFirstFrame = useAfterFirstFrame();
   const fp = useMemo(() => designFootprint(design), [design]);
   const width = fp.maxX - fp.minX;
   const depth = fp.maxZ - fp.minZ;
@@ -28,7 +31,7 @@ export function SceneLights({ design, contactShadow = true }: SceneLightsProps) 
       <directionalLight position={[2500, 5200, -4200]} intensity={2.8} color="#fff6ec" />
       <directionalLight position={[-4000, 2400, 3500]} intensity={1.3} color="#dbe7f3" />
       <directionalLight position={[3000, -1500, -2500]} intensity={0.35} color="#f2eee6" />
-      {contactShadow && (
+      {contactShadow && afterFirstFrame && (
         <ContactShadows
           // A new design renders a new shadow; otherwise it is drawn once and kept.
           key={`${Math.round(span)}|${Math.round(height)}|${design.profiles.length}|${design.panels.length}`}
@@ -44,6 +47,27 @@ export function SceneLights({ design, contactShadow = true }: SceneLightsProps) 
       )}
     </>
   );
+}
+
+/** False until the canvas has drawn its first frame (then a frame is requested for what follows). */
+function useAfterFirstFrame(): boolean {
+  const [ready, setReady] = useState(false);
+  const invalidate = useThree((s) => s.invalidate);
+  useEffect(() => {
+    // Two animation frames: the first frame is drawn in the first, this runs after it.
+    let second = 0;
+    const first = requestAnimationFrame(() => {
+      second = requestAnimationFrame(() => {
+        setReady(true);
+        invalidate();
+      });
+    });
+    return () => {
+      cancelAnimationFrame(first);
+      cancelAnimationFrame(second);
+    };
+  }, [invalidate]);
+  return ready;
 }
 
 function highest(design: DesignDocument): number {

@@ -15,7 +15,7 @@ export interface SlotwiseSceneHook {
   worldToScreen(point: [number, number, number]): { x: number; y: number };
   /** Median time of `frames` synchronous renders (each waited for with a 1-pixel read), ms. */
   frameTimeMs(frames?: number): number;
-  /** Median script time of `frames` step-player frames (matrices of the current step rewritten, no render), ms; null without a player. */
+  /** Median script time of `frames` step-player frames (matrices of the largest step rewritten, no render), ms; null without a player. */
   playerFrameMs(frames?: number): number | null;
   /** Profiles currently drawn (instances or meshes), and the render mode. */
   stats(): { profilesDrawn: number; renderMode: string; objects: number };

@@ -122,6 +122,8 @@ export function buildSequence(design: DesignDocument, steps: AssemblyStep[], cat
   steps.forEach((s, i) => s.partIds.forEach((id) => stepOfPart.has(id) || stepOfPart.set(id, i)));
   const { motions, tNuts } = computeMotions({ design, catalogue: cat, stepOf: stepOfPart });
   const allFasteners: Fastener[] = [];
+  /** Mass of the profiles and panels placed so far (this step included), kg. */
+  let placedKg = 0;
 
   const out: SequenceStep[] = steps.map((s, index) => {
     const profileIds = s.partIds.filter((id) => t.profiles.has(id));
@@ -133,9 +135,14 @@ export function buildSequence(design: DesignDocument, steps: AssemblyStep[], cat
     const sub = s.subAssemblyId ? subs.get(s.subAssemblyId) : undefined;
     const orientation: BuildOrientation = s.orientation ?? sub?.buildOrientation ?? 'as-placed';
     let massKg = profileIds.reduce((kg, id) => kg + profileKg(t.profiles.get(id)!, cat), 0) + panelIds.reduce((kg, id) => kg + panelKg(t.panels.get(id)!, cat), 0);
+    placedKg += massKg;
+    const tips = s.kind === 'flip' || accessoryIds.some((id) => ['leveling-foot', 'caster'].includes(t.accessories.get(id)!.kind));
     if ((s.kind === 'join' || s.kind === 'flip') && sub) {
       // What is lifted or turned: the whole sub-assembly with its panels.
       massKg = sub.profileIds.reduce((kg, id) => kg + (t.profiles.has(id) ? profileKg(t.profiles.get(id)!, cat) : 0), 0) + sub.panelIds.reduce((kg, id) => kg + (t.panels.has(id) ? panelKg(t.panels.get(id)!, cat) : 0), 0);
+    } else if (tips) {
+      // Feet and casters go in with the piece tipped, and a flip turns it: the piece built so far is moved.
+      massKg = placedKg;
     }
     const cautions: StepCaution[] = [];
     if (massKg > TWO_PERSON_LIFT_KG) {
@@ -144,7 +151,7 @@ export function buildSequence(design: DesignDocument, steps: AssemblyStep[], cat
     if (profileIds.some((id) => t.profiles.get(id)!.machining.length > 0)) {
       cautions.push({ kind: 'eye-protection', message: 'These profiles have holes or tapped ends: wear eye protection if you drill or tap them yourself, and clamp the work.', basis: COMMON_PRACTICE });
     }
-    if (s.kind === 'flip' || accessoryIds.some((id) => ['leveling-foot', 'caster'].includes(t.accessories.get(id)!.kind))) {
+    if (tips) {
       cautions.push({ kind: 'tipping', message: 'Turn or tip the piece with a helper and never work under a raised frame.', basis: COMMON_PRACTICE });
     }
     if (panelIds.some((id) => t.panels.get(id)!.role === 'door') || s.kind === 'join') {

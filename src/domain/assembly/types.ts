@@ -94,7 +94,10 @@ export interface SequenceStep {
   hardware: StepHardware[];
   tools: StepTool[];
   cautions: StepCaution[];
-  /** Mass of the parts placed in this step, kg; for flip and join steps the mass being moved. */
+  /**
+   * Mass of the parts placed in this step, kg; for flip and join steps, and steps that tip the
+   * piece to fit feet or casters, the mass being moved (the sub-assembly, or the piece so far).
+   */
   massKg: number;
   motions: PartMotion[];
   tNuts: TNutMotion[];

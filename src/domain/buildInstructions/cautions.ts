@@ -4,15 +4,20 @@
  * Units: mm, kg.
  */
 import type { DesignAnalysis } from '../analysis/types';
+import { TWO_PERSON_LIFT_KG as CORE_TWO_PERSON_LIFT_KG, type CautionKind as StepCautionKind } from '../assembly';
 
-/** kg above which a frame or piece is lifted by two people (common practice, no source; local manual-handling rules may set lower). */
-export const TWO_PERSON_LIFT_KG = 25;
+/**
+ * kg above which a frame or piece is lifted by two people: the assembly core's threshold, so the
+ * cover and the steps agree (common practice; local manual-handling rules may set lower).
+ */
+export const TWO_PERSON_LIFT_KG = CORE_TWO_PERSON_LIFT_KG;
 /** mm of height from which a free-standing frame is secured to a wall (common practice, no source). */
 export const SECURE_TO_WALL_HEIGHT_MM = 1200;
 /** Height over the narrowest footprint side above which a frame counts as tall (common practice, no source). */
 export const SECURE_TO_WALL_SLENDERNESS = 2;
 
-export type CautionKind = 'two-person-lift' | 'eye-protection' | 'secure-to-wall';
+/** The core's step cautions, the design-wide wall caution, and a caution the designer wrote. */
+export type CautionKind = StepCautionKind | 'secure-to-wall' | 'designer';
 
 export interface Caution {
   kind: CautionKind;

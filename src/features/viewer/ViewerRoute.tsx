@@ -1,15 +1,18 @@
-import { memo, useEffect, useLayoutEffect, useMemo, useRef, useState } from 'react';
+import { lazy, memo, Suspense, useEffect, useLayoutEffect, useMemo, useRef, useState } from 'react';
 import { Link, useParams } from 'react-router';
 import { Eye, EyeOff } from 'lucide-react';
-import { PartsTab, ToolsTab } from '@/components/outputs';
 import { ErrorNotice, PageSkeleton } from '@/components/ui';
-import { DesignViewer, StepList, StepPlayerControls, StepPlayerScene, stepsFromDesign, usePlayerKeys, useStepPlayer, type CameraRequest, type PlayerView, type StepPlayerState } from '@/components/viewer';
+import { DesignViewer, StepList, StepPlayerControls, StepPlayerScene, usePlayerKeys, useStepPlayer, type CameraRequest, type PlayerView, type StepPlayerState } from '@/components/viewer';
 import type { DesignAnalysis } from '@/domain/analysis/types';
-import { analyzeDesign } from '@/domain/analysis/analyze';
+import { sequenceOf } from '@/domain/assembly';
 import { defaultCatalogue } from '@/domain/catalogue';
 import type { DesignDocument } from '@/domain/design/schema';
 import { isApiError } from '@/lib/apiClient';
 import { useViewerDesign } from './api/getViewerDesign';
+
+// The tables and the analysis load after the first frame, not before it.
+const PartsTab = lazy(() => import('@/components/outputs').then((m) => ({ default: m.PartsTab })));
+const ToolsTab = lazy(() => import('@/components/outputs').then((m) => ({ default: m.ToolsTab })));
 import { ViewerSheet } from './components/ViewerSheet';
 
 /**
@@ -34,7 +37,8 @@ export default function ViewerRoute() {
 }
 
 function ViewerSession({ designId, name, design }: { designId: number; name: string; design: DesignDocument }) {
-  const steps = useMemo(() => stepsFromDesign(design), [design]);
+  // The design's saved order (or a generated one) from the assembly core, with its motions.
+  const steps = useMemo(() => sequenceOf(design, defaultCatalogue).steps, [design]);
   const player = useStepPlayer(steps);
   usePlayerKeys(player);
   const [panels, setPanels] = useState(true);
@@ -131,8 +135,10 @@ function ViewerTabs({
       </div>
       <div role="tabpanel" className="min-w-0 overflow-x-auto">
         {tab === 'steps' && <StepList player={player} />}
-        {tab === 'parts' && (analysis ? <PartsTab lines={analysis.bom} units={design.units} designName={design.name} /> : <p className="text-sm text-ink-muted">Counting parts…</p>)}
-        {tab === 'tools' && (analysis ? <ToolsTab tools={analysis.tools} /> : <p className="text-sm text-ink-muted">Listing tools…</p>)}
+        <Suspense fallback={<p className="text-sm text-ink-muted">Loading the table…</p>}>
+          {tab === 'parts' && (analysis ? <PartsTab lines={analysis.bom} units={design.units} designName={design.name} /> : <p className="text-sm text-ink-muted">Counting parts…</p>)}
+          {tab === 'tools' && (analysis ? <ToolsTab tools={analysis.tools} /> : <p className="text-sm text-ink-muted">Listing tools…</p>)}
+        </Suspense>
       </div>
     </div>
   );
@@ -158,12 +164,20 @@ function useFillWindowBelow() {
   return ref;
 }
 
-/** The analysis, computed after the first frame so the model shows first. */
+/** The analysis, loaded and computed after the first frame so the model shows first. */
 function useDeferredAnalysis(design: DesignDocument): DesignAnalysis | null {
   const [analysis, setAnalysis] = useState<DesignAnalysis | null>(null);
   useEffect(() => {
-    const timer = window.setTimeout(() => setAnalysis(analyzeDesign(design, defaultCatalogue)), 50);
-    return () => window.clearTimeout(timer);
+    let cancelled = false;
+    const timer = window.setTimeout(() => {
+      void import('@/domain/analysis/analyze').then(({ analyzeDesign }) => {
+        if (!cancelled) setAnalysis(analyzeDesign(design, defaultCatalogue));
+      });
+    }, 50);
+    return () => {
+      cancelled = true;
+      window.clearTimeout(timer);
+    };
   }, [design]);
   return analysis;
 }

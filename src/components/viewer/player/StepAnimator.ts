@@ -2,12 +2,14 @@
  * Moves drawn instances for the exploded-view player, imperatively: earlier steps sit in place
  * (pushed out by the global explode), the current step's parts travel from their explode offsets
  * into place along their insertion directions, later steps are hidden or drawn as ghosts, and a
- * change of build orientation turns the whole piece over. No React: the player's frame hook calls
+ * change of build orientation turns the whole piece over. Motions (insertion direction, explode
+ * offset) and orientations come from the assembly core's steps. No React: the player's frame hook calls
  * `frame(now)` and invalidates while it returns true. Lengths in mm, times in ms.
  */
 import * as THREE from 'three';
+import type { BuildOrientation, PartMotion } from '@/domain/assembly';
 import type { DrawnBatch, DrawnRegistry } from '../sceneContext';
-import type { PartMotion, PlayerView } from './playerTypes';
+import type { PlayerView } from './playerTypes';
 
 /** How long one step's parts take to travel into place, ms. */
 export const TRAVEL_MS = 900;
@@ -20,6 +22,11 @@ interface Instance {
 }
 
 const ZERO = new Float32Array(16);
+
+/** The faint material later steps are drawn in when ghosted; the caller disposes it. */
+export function createGhostMaterial(): THREE.Material {
+  return new THREE.MeshStandardMaterial({ color: '#9fb3c2', transparent: true, opacity: 0.16, depthWrite: false, metalness: 0, roughness: 0.8 });
+}
 const identity = new THREE.Quaternion();
 
 export class StepAnimator {
@@ -101,13 +108,38 @@ export class StepAnimator {
     return moving;
   }
 
-  /** One travelling frame of the current step, mid-way (for the frame-time benchmark). */
+  /**
+   * One travelling frame, mid-way, of the step with the most parts (the worst case, for the
+   * frame-time benchmark); the next frame rewrites every instance.
+   */
   probeFrame(): void {
     const view = this.view;
     if (!view) return;
     if (this.drawn.version !== this.version) this.rebuildIndex(view);
+    let largest = view.stepIndex;
+    view.steps.forEach((step, i) => {
+      if (step.motions.length > (view.steps[largest]?.motions.length ?? 0)) largest = i;
+    });
     this.updateOrientationMatrix();
-    this.writeStep(view, view.stepIndex, 0.5);
+    this.writeStep(view, largest, 0.5);
+    this.needsFull = true;
+  }
+
+  /**
+   * A still picture of `view`: the piece in the current step's orientation (no flip), earlier
+   * steps in place, the current step's parts `travel` of the way in (0 = at their explode offset,
+   * 1 = in place). For step pictures rendered one after another.
+   */
+  pose(view: PlayerView, travel: number): void {
+    this.view = view;
+    if (this.drawn.version !== this.version) this.rebuildIndex(view);
+    this.orientation.copy(orientationOf(view, view.stepIndex));
+    this.flip = null;
+    this.travelStartedAt = Number.NEGATIVE_INFINITY;
+    this.settledStep = view.stepIndex;
+    this.updateOrientationMatrix();
+    this.writeAll(view, Math.min(1, Math.max(0, travel)));
+    this.needsFull = false;
   }
 
   /** Removes ghosts and puts every instance back where the layout put it. */
@@ -137,10 +169,8 @@ export class StepAnimator {
     this.stepOf.clear();
     this.motionOf.clear();
     view.steps.forEach((step, s) => {
-      for (const motion of step.parts) {
-        this.stepOf.set(motion.partId, s);
-        this.motionOf.set(motion.partId, motion);
-      }
+      for (const partId of step.partIds) if (!this.stepOf.has(partId)) this.stepOf.set(partId, s);
+      for (const motion of step.motions) this.motionOf.set(motion.partId, motion);
     });
     const box = new THREE.Box3();
     const p = new THREE.Vector3();
@@ -217,7 +247,7 @@ export class StepAnimator {
     const step = view.steps[stepIndex];
     if (!step) return;
     const factor = Math.max(view.explode, 1 - eased);
-    for (const motion of step.parts) {
+    for (const motion of step.motions) {
       const list = this.instancesOf.get(motion.partId);
       if (!list) continue;
       for (let k = 0; k < list.length; k++) this.writeInstance(list[k].batch, list[k].index, factor === 0 ? null : motion, factor);
@@ -254,10 +284,10 @@ export class StepAnimator {
       const o = i * 16;
       for (let k = 0; k < 16; k++) array[o + k] = base[o + k];
       if (motion && factor) {
-        const d = motion.offset * factor;
-        array[o + 12] -= motion.insertion[0] * d;
-        array[o + 13] -= motion.insertion[1] * d;
-        array[o + 14] -= motion.insertion[2] * d;
+        // explodeOffset = -insertionDirection x distance (mm): the part starts there and travels in.
+        array[o + 12] += motion.explodeOffset[0] * factor;
+        array[o + 13] += motion.explodeOffset[1] * factor;
+        array[o + 14] += motion.explodeOffset[2] * factor;
       }
       return;
     }
@@ -265,14 +295,13 @@ export class StepAnimator {
     array.set(this.tmp2.elements, i * 16);
   }
 
-  /** tmp2 = orientation · translate(-insertion · offset · factor) · base[i]. */
+  /** tmp2 = orientation · translate(explodeOffset · factor) · base[i]. */
   private composed(base: Float32Array, i: number, factor: number, motion: PartMotion | null): void {
     const m = this.tmp2.fromArray(base, i * 16);
     if (motion && factor > 0) {
-      const d = motion.offset * factor;
-      m.elements[12] -= motion.insertion[0] * d;
-      m.elements[13] -= motion.insertion[1] * d;
-      m.elements[14] -= motion.insertion[2] * d;
+      m.elements[12] += motion.explodeOffset[0] * factor;
+      m.elements[13] += motion.explodeOffset[1] * factor;
+      m.elements[14] += motion.explodeOffset[2] * factor;
     }
     if (!this.upright) m.premultiply(this.orient);
   }
@@ -297,10 +326,22 @@ export class StepAnimator {
   }
 }
 
+/**
+ * Build orientations as turns of the whole piece about its centre (Y up, front -Z): the core says
+ * how the piece lies while a step is done; the player turns it so the step reads as built.
+ */
+const TURNS: Record<BuildOrientation, { axis: [number, number, number]; angleDeg: number } | null> = {
+  'as-placed': null,
+  // Back (+Z) down: a quarter turn about X.
+  'lying-on-back': { axis: [1, 0, 0], angleDeg: 90 },
+  'upside-down': { axis: [1, 0, 0], angleDeg: 180 },
+  'on-side': { axis: [0, 0, 1], angleDeg: 90 },
+};
+
 function orientationOf(view: PlayerView, stepIndex: number): THREE.Quaternion {
-  const o = view.steps[stepIndex]?.orientation;
-  if (!o || o.angleDeg === 0) return new THREE.Quaternion();
-  return new THREE.Quaternion().setFromAxisAngle(new THREE.Vector3(...o.axis).normalize(), THREE.MathUtils.degToRad(o.angleDeg));
+  const turn = TURNS[view.steps[stepIndex]?.orientation ?? 'as-placed'];
+  if (!turn) return new THREE.Quaternion();
+  return new THREE.Quaternion().setFromAxisAngle(new THREE.Vector3(...turn.axis).normalize(), THREE.MathUtils.degToRad(turn.angleDeg));
 }
 
 function easeInOut(t: number): number {

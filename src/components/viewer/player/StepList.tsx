@@ -23,10 +23,10 @@ export function StepList({ player }: StepListProps) {
             <span className="w-6 shrink-0 text-right tabular-nums">{i + 1}.</span>
             <span className="min-w-0">
               {step.title}
-              {step.parts.length > 0 ? (
+              {step.partIds.length > 0 ? (
                 <span className="font-normal text-ink-muted">
                   {' '}
-                  · {step.parts.length} {step.parts.length === 1 ? 'part' : 'parts'}
+                  · {step.partIds.length} {step.partIds.length === 1 ? 'part' : 'parts'}
                 </span>
               ) : null}
             </span>

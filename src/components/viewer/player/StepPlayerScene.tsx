@@ -1,9 +1,8 @@
 import { useEffect, useLayoutEffect, useMemo, useRef } from 'react';
 import { useFrame, useThree } from '@react-three/fiber';
-import * as THREE from 'three';
 import { useScene } from '../sceneContext';
 import type { PlayerView } from './playerTypes';
-import { StepAnimator } from './StepAnimator';
+import { createGhostMaterial, StepAnimator } from './StepAnimator';
 
 interface StepPlayerSceneProps {
   /** What to show: steps, current step, ghosts, explode (required; from useStepPlayer). */
@@ -22,10 +21,7 @@ export function StepPlayerScene({ view, onSettled }: StepPlayerSceneProps) {
   const invalidate = useThree((s) => s.invalidate);
   const settledRef = useRef(onSettled);
   settledRef.current = onSettled;
-  const ghostMaterial = useMemo(
-    () => new THREE.MeshStandardMaterial({ color: '#9fb3c2', transparent: true, opacity: 0.16, depthWrite: false, metalness: 0, roughness: 0.8 }),
-    [],
-  );
+  const ghostMaterial = useMemo(() => createGhostMaterial(), []);
   const animator = useMemo(() => new StepAnimator(drawn, ghostMaterial, (i) => settledRef.current(i)), [drawn, ghostMaterial]);
   useEffect(
     () => () => {

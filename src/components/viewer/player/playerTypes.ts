@@ -1,38 +1,14 @@
 /**
- * What the exploded-view player plays. A minimal local shape: the assembly sequence core
- * (`src/domain/assembly/`) is the one source for steps once it lands; `stepsFromDesign` adapts
- * the design's saved steps to this shape until then. Lengths in mm.
+ * What the exploded-view player shows. Steps are the assembly core's `SequenceStep`s
+ * (`src/domain/assembly/`, e.g. `sequenceOf(design).steps`): their per-part motions (insertion
+ * direction and explode offset, mm) and build orientation drive the animation. Lengths in mm.
  */
-import type { Vec3 } from '@/domain/geometry';
-
-/** How one part travels into place. */
-export interface PartMotion {
-  partId: string;
-  /** Unit vector of travel into place (the part starts at -insertion * offset from its seat). */
-  insertion: Vec3;
-  /** Distance the part travels, mm (its explode offset). */
-  offset: number;
-}
-
-export interface PlayerStep {
-  id: string;
-  title: string;
-  /** Parts placed in this step (profiles, joints with their hardware, panels, accessories). */
-  parts: PartMotion[];
-  notes?: string;
-  caution?: string;
-  /**
-   * Build orientation while this step is shown: the whole piece turned by `angleDeg` about `axis`
-   * through its centre (a sub-assembly built upside down). A change between steps animates as a flip.
-   */
-  orientation?: { axis: Vec3; angleDeg: number };
-  /** A step that only turns the piece over (no parts). */
-  flip?: boolean;
-}
+import type { SequenceStep } from '@/domain/assembly';
 
 /** What the player shows now; the scene animates toward it. */
 export interface PlayerView {
-  steps: readonly PlayerStep[];
+  /** The design's assembly sequence, in order (from the assembly core). */
+  steps: readonly SequenceStep[];
   /** Index of the current step (its parts travel in), 0-based. */
   stepIndex: number;
   /** Later steps ghosted (true) or hidden (false). */

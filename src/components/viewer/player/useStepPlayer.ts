@@ -1,6 +1,7 @@
 import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import type { CameraRequest } from '../viewerTypes';
-import type { PlayerStep, PlayerView } from './playerTypes';
+import type { SequenceStep } from '@/domain/assembly';
+import type { PlayerView } from './playerTypes';
 
 /** Pause between two steps while playing, ms. */
 const DWELL_MS = 450;
@@ -25,9 +26,10 @@ export interface StepPlayerState {
 /**
  * The player's state: the current step, playing or not, ghosts, explode. React state changes once
  * per step, never per frame; the scene's StepPlayerScene animates between states. Opens on the
- * finished piece (the last step, settled).
+ * finished piece (the last step, settled). `steps` are the assembly core's (e.g.
+ * `useMemo(() => sequenceOf(design).steps, [design])`); keep the array stable between renders.
  */
-export function useStepPlayer(steps: readonly PlayerStep[]): StepPlayerState {
+export function useStepPlayer(steps: readonly SequenceStep[]): StepPlayerState {
   const last = Math.max(0, steps.length - 1);
   const [stepIndex, setStepIndex] = useState(last);
   const [playing, setPlaying] = useState(false);
@@ -49,10 +51,10 @@ export function useStepPlayer(steps: readonly PlayerStep[]): StepPlayerState {
   const frameStep = useCallback(
     (index: number) => {
       const step = steps[index];
-      if (!step || step.parts.length === 0) return;
+      if (!step || step.partIds.length === 0) return;
       nonce.current += 1;
       // The piece as built so far, with this step's parts: the new parts are seen in their place.
-      const ids = steps.slice(0, index + 1).flatMap((s) => s.parts.map((p) => p.partId));
+      const ids = framedPartIds(steps, index);
       setCameraRequest({ ids, nonce: nonce.current });
     },
     [steps],
@@ -123,4 +125,9 @@ export function useStepPlayer(steps: readonly PlayerStep[]): StepPlayerState {
     setExplode,
     onSettled,
   };
+}
+
+/** The parts a step's camera frames: everything built up to and including step `index`. */
+export function framedPartIds(steps: readonly SequenceStep[], index: number): string[] {
+  return steps.slice(0, index + 1).flatMap((s) => s.partIds);
 }

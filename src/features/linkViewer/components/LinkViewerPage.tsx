@@ -2,8 +2,9 @@ import { useCallback, useMemo, useState } from 'react';
 import { useParams, useSearchParams } from 'react-router';
 import { Code, Layers, ListOrdered, Ruler, Scissors, Table2, Move3d } from 'lucide-react';
 import { analyzeDesign } from '@/domain/analysis/analyze';
+import { sequenceOf } from '@/domain/assembly';
 import type { LengthUnit } from '@/domain/units';
-import { DesignViewer, StepList, StepPlayerControls, StepPlayerScene, stepsFromDesign, usePlayerKeys, useStepPlayer } from '@/components/viewer';
+import { DesignViewer, StepList, StepPlayerControls, StepPlayerScene, usePlayerKeys, useStepPlayer } from '@/components/viewer';
 import { SeeInRoom } from '@/components/viewer/room';
 import { MeasureTool, OverallDimensions, SectionPlane, type SectionAxis } from '@/components/viewer/tools';
 import { PartsTab } from '@/components/outputs';
@@ -48,7 +49,8 @@ function SharedView({ token, embedded, data }: { token: string; embedded: boolea
   const design = data.revision.document;
   const units: LengthUnit = design.units === 'in' ? 'in' : 'mm';
   const analysis = useMemo(() => analyzeDesign(design), [design]);
-  const steps = useMemo(() => stepsFromDesign(design), [design]);
+  // The design's saved order (or a generated one) from the assembly core, with its motions.
+  const steps = useMemo(() => sequenceOf(design).steps, [design]);
   const player = useStepPlayer(steps);
   usePlayerKeys(player);
   const [stepsOpen, setStepsOpen] = useState(true);

@@ -46,7 +46,7 @@ export default function BuildPage() {
 
   if (data.build.isError) return <PageFrame><ErrorNotice title="This build could not be opened" message={data.build.error.message} /></PageFrame>;
   if (data.revision.isError) return <PageFrame><ErrorNotice title="The design of this build could not be loaded" message={data.revision.error.message} /></PageFrame>;
-  if (!data.detail || !data.design || !data.analysis || !data.steps) return <PageSkeleton label="Loading the build" />;
+  if (!data.detail || !data.design || !data.analysis || !data.steps || !data.sequence) return <PageSkeleton label="Loading the build" />;
   const { build } = data.detail;
 
   return (
@@ -126,7 +126,7 @@ export default function BuildPage() {
       {tab === 'cut' ? <CutTab design={data.design} analysis={data.analysis} progress={progress} canTick={canTick} /> : null}
       {tab === 'kit' ? <KitTab analysis={data.analysis} progress={progress} canTick={canTick} /> : null}
       {tab === 'build' && stepIndex !== null ? (
-        <BuildTab design={data.design} steps={data.steps} index={stepIndex} onIndex={setStepIndex} progress={progress} canTick={canTick} />
+        <BuildTab design={data.design} steps={data.steps} sequenceSteps={data.sequence.steps} index={stepIndex} onIndex={setStepIndex} progress={progress} canTick={canTick} />
       ) : null}
     </PageFrame>
   );

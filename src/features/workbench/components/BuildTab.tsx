@@ -1,24 +1,27 @@
 import { useCallback, useRef } from 'react';
 import { ChevronLeft, ChevronRight } from 'lucide-react';
 import type { DesignDocument } from '@/domain/design/schema';
+import type { SequenceStep } from '@/domain/assembly';
 import type { InstructionStep } from '@/domain/buildInstructions';
 import { Button } from '@/components/ui';
 import type { BuildProgress } from '../hooks/useBuildProgress';
-import { StepCanvas } from './StepCanvas';
+import { StepView } from './StepView';
 import { StepDetails } from './StepDetails';
 import { TickButton } from './TickButton';
 
 export interface BuildTabProps {
   design: DesignDocument;
   steps: InstructionStep[];
+  /** The same steps as the assembly core gives them, for the player (stable between renders). */
+  sequenceSteps: readonly SequenceStep[];
   index: number;
   onIndex: (index: number) => void;
   progress: BuildProgress;
   canTick: boolean;
 }
 
-/** Step-through: picture, what the step needs, tick it off; swipe or the big buttons move between steps. */
-export function BuildTab({ design, steps, index, onIndex, progress, canTick }: BuildTabProps) {
+/** Step-through: the step in the shared exploded-view player, what the step needs, tick it off; swipe or the big buttons move between steps. */
+export function BuildTab({ design, steps, sequenceSteps, index, onIndex, progress, canTick }: BuildTabProps) {
   const step = steps[index];
   const swipeStart = useRef<{ x: number; y: number } | null>(null);
   const go = useCallback((next: number) => onIndex(Math.max(0, Math.min(steps.length - 1, next))), [onIndex, steps.length]);
@@ -47,7 +50,7 @@ export function BuildTab({ design, steps, index, onIndex, progress, canTick }: B
           if (Math.abs(dx) > 60 && Math.abs(dx) > Math.abs(event.clientY - start.y)) go(dx < 0 ? index + 1 : index - 1);
         }}
       >
-        <StepCanvas design={design} steps={steps} index={index} />
+        <StepView design={design} steps={sequenceSteps} index={index} />
       </div>
       <div className="flex flex-col gap-4">
         <div className="flex items-start gap-3">

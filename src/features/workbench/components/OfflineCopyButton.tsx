@@ -7,7 +7,8 @@ const CACHE = 'slotwise-builds';
 
 /**
  * Keeps this build on the device: the build and its design revision go into the service worker's
- * cache (step pictures are drawn from the revision, so they need nothing more).
+ * cache. Step pictures are rendered on the device from the revision by the shared 3D viewer,
+ * whose code the service worker precaches with the rest of the app, so they need nothing more.
  */
 export function OfflineCopyButton({ detail }: { detail: BuildDetail }) {
   const [state, setState] = useState<'idle' | 'saving' | 'saved' | 'failed'>('idle');

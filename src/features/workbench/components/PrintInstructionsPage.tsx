@@ -1,10 +1,12 @@
-import { useMemo } from 'react';
+import { useCallback, useMemo, useState } from 'react';
 import { useParams } from 'react-router';
 import { Printer } from 'lucide-react';
 import { Button, ErrorNotice, PageSkeleton } from '@/components/ui';
 import { LOCAL_RULES } from '@/domain/buildInstructions';
 import { formatLength, formatMass } from '@/domain/units';
-import { stepPictureDataUrl } from '../picture/drawStep';
+import { DesignViewer, StepPictures, type StepPicture } from '@/components/viewer';
+import type { SequenceStep } from '@/domain/assembly';
+import type { DesignDocument } from '@/domain/design/schema';
 import { useBuildData } from '../hooks/useBuildData';
 import { StepDetails } from './StepDetails';
 import './print.css';
@@ -13,13 +15,16 @@ import './print.css';
 export default function PrintInstructionsPage() {
   const buildId = Number(useParams().buildId);
   const data = useBuildData(buildId);
-  const pictures = useMemo(() => {
-    if (!data.design || !data.steps) return [];
-    const steps = data.steps;
-    return steps.map((step, index) =>
-      stepPictureDataUrl({ design: data.design!, donePartIds: new Set(steps.slice(0, index).flatMap((earlier) => earlier.partIds)), stepPartIds: new Set(step.partIds), insertionDirection: step.insertionDirection }, 800, 560),
-    );
-  }, [data.design, data.steps]);
+  const [pictures, setPictures] = useState<string[]>([]);
+  const [rendered, setRendered] = useState(false);
+  const onPicture = useCallback((picture: StepPicture) => {
+    setPictures((current) => {
+      const next = [...current];
+      next[picture.index] = picture.dataUrl;
+      return next;
+    });
+  }, []);
+  const onDone = useCallback(() => setRendered(true), []);
 
   if (data.build.isError) return <ErrorNotice title="This build could not be opened" message={data.build.error.message} />;
   if (!data.detail || !data.design || !data.analysis || !data.steps || !data.cautions) return <PageSkeleton label="Preparing the instructions" />;
@@ -30,11 +35,15 @@ export default function PrintInstructionsPage() {
 
   return (
     <main className="print-document mx-auto max-w-[60rem] bg-white p-6 text-ink">
-      <div className="no-print mb-4 flex justify-end">
-        <Button variant="primary" icon={<Printer aria-hidden className="size-4" />} onClick={() => window.print()}>
+      <div className="no-print mb-4 flex items-center justify-end gap-3">
+        <p className="text-sm text-ink-soft" aria-live="polite" data-testid="step-pictures-status">
+          {rendered ? `${steps.length} step pictures ready` : `Rendering step pictures ${pictures.filter(Boolean).length}/${steps.length}`}
+        </p>
+        <Button variant="primary" icon={<Printer aria-hidden className="size-4" />} disabled={!rendered} onClick={() => window.print()}>
           Print
         </Button>
       </div>
+      {!rendered && data.sequence ? <PictureRenderer design={design} steps={data.sequence.steps} onPicture={onPicture} onDone={onDone} /> : null}
       <section className="print-cover" data-testid="print-cover">
         <h1 className="text-3xl font-semibold">{design.name}</h1>
         <p className="text-ink-soft">
@@ -105,10 +114,29 @@ export default function PrintInstructionsPage() {
           <h2 className="text-xl font-semibold">
             Step {step.number} of {steps.length}: {step.title}
           </h2>
-          <img src={pictures[index]} alt={`Step ${step.number}: ${step.title}`} className="print-picture my-2 w-full max-w-[36rem] border border-paper-line" />
+          {pictures[index] ? (
+            <img src={pictures[index]} alt={`Step ${step.number}: ${step.title}`} className="print-picture my-2 w-full max-w-[36rem] border border-paper-line" />
+          ) : (
+            <div className="print-picture my-2 flex aspect-[10/7] w-full max-w-[36rem] items-center justify-center border border-paper-line text-sm text-ink-muted">Rendering the picture…</div>
+          )}
           <StepDetails step={step} />
         </section>
       ))}
     </main>
+  );
+}
+
+/**
+ * The shared 3D viewer, off screen at a fixed size, rendering one picture per step with the
+ * exploded-view player (see StepPictures); unmounted once every picture is made.
+ */
+function PictureRenderer({ design, steps, onPicture, onDone }: { design: DesignDocument; steps: readonly SequenceStep[]; onPicture: (picture: StepPicture) => void; onDone: () => void }) {
+  const display = useMemo(() => ({ units: design.units, findingMarkers: false, grid: false }), [design.units]);
+  return (
+    <div aria-hidden className="no-print" style={{ position: 'fixed', left: -10_000, top: 0, width: 800, height: 560 }}>
+      <DesignViewer design={design} display={display} viewPlan={false} testId="step-picture-renderer">
+        <StepPictures steps={steps} onPicture={onPicture} onDone={onDone} />
+      </DesignViewer>
+    </div>
   );
 }

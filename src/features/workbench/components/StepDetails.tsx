@@ -35,8 +35,8 @@ export function StepDetails({ step }: { step: InstructionStep }) {
           <h3 className="text-sm font-semibold uppercase tracking-wide text-ink-soft">Fasteners and hardware</h3>
           <ul className="list-disc pl-5">
             {step.hardware.map((line) => (
-              <li key={`${line.code}-${line.description}`}>
-                <strong className="tabular-nums">{line.quantity}</strong> {line.unit === 'm' ? 'm' : '×'} {line.description}
+              <li key={`${line.category}-${line.catalogueId}`}>
+                <strong className="tabular-nums">{line.quantity}</strong> × {line.name}
               </li>
             ))}
           </ul>
@@ -45,7 +45,13 @@ export function StepDetails({ step }: { step: InstructionStep }) {
       {step.tools.length > 0 ? (
         <div>
           <h3 className="text-sm font-semibold uppercase tracking-wide text-ink-soft">Tools</h3>
-          <p>{step.tools.map((tool) => tool.name).join(', ')}</p>
+          <ul className="list-disc pl-5">
+            {step.tools.map((tool) => (
+              <li key={tool.id}>
+                {tool.label} hex key <span className="text-xs text-ink-muted">({tool.standard}; {tool.screws.join(', ')})</span>
+              </li>
+            ))}
+          </ul>
         </div>
       ) : null}
     </div>

@@ -1,5 +1,6 @@
 import { useMemo } from 'react';
 import { analyzeDesign } from '@/domain/analysis/analyze';
+import { sequenceOf } from '@/domain/assembly';
 import { buildInstructions, designCautions } from '@/domain/buildInstructions';
 import { useBuild } from '../api/getBuild';
 import { useBuildRevision } from '../api/getBuildRevision';
@@ -13,9 +14,11 @@ export function useBuildData(buildId: number) {
   const derived = useMemo(() => {
     if (!design) return null;
     const analysis = analyzeDesign(design, undefined, { timings: false });
-    return { analysis, steps: buildInstructions(design, analysis), cautions: designCautions(analysis) };
+    // One sequence from the assembly core for the instructions and the player: the designer's order.
+    const sequence = sequenceOf(design);
+    return { analysis, sequence, steps: buildInstructions(design, analysis, sequence), cautions: designCautions(analysis) };
   }, [design]);
-  return { build, revision, detail, design, ...(derived ?? { analysis: undefined, steps: undefined, cautions: undefined }) };
+  return { build, revision, detail, design, ...(derived ?? { analysis: undefined, sequence: undefined, steps: undefined, cautions: undefined }) };
 }
 
 /** The kit line key ticked on the server. */
