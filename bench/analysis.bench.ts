@@ -4,7 +4,7 @@
  * all-pairs check at 2,000 profiles (same findings, speed-up). Wall time is the bar; CPU time of
  * this process is shown beside it because the shared machine is often busy.
  */
-import { analyzeDesign, createAnalysisContext } from '../src/domain/analyze';
+import { analyzeDesign, createAnalysisContext } from '../src/domain/analysis/analyze';
 import { interferenceFindings, interferenceFindingsAllPairs } from '../src/domain/checks/interferenceFindings';
 import { largeFrame } from './largeFrame';
 import type { BenchRow } from './types';

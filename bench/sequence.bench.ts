@@ -3,7 +3,7 @@
  * median), with the enriched sequence (motions, tools, cautions) and the feasibility check beside
  * it. Wall time is the bar; CPU time of this process is shown because the machine is shared.
  */
-import { createAnalysisContext } from '../src/domain/analyze';
+import { createAnalysisContext } from '../src/domain/analysis/analyze';
 import { generateSequence, generateSteps, sequenceFindings } from '../src/domain/assembly';
 import { largeFrame } from './largeFrame';
 import type { BenchRow } from './types';

@@ -26,7 +26,7 @@ async function main(): Promise<number> {
     } else if (command === 'seed') {
       await runMigrations(db);
       const report = await seedDemo(db);
-      console.log(`Seeded ${report.usersCreated} users and ${report.designsCreated} designs (designs from ${report.designOrigin}).`);
+      console.log(`Seeded ${report.usersCreated} users and ${report.designsCreated} demo designs.`);
     } else {
       const file = await backupDatabase(db, argument);
       console.log(file);

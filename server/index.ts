@@ -15,7 +15,7 @@ async function start(): Promise<void> {
 
   if (config.seedDemo && (await db.models.User.count()) === 0) {
     const report = await seedDemo(db);
-    logger.info(`First run: seeded the demo shop (${report.usersCreated} accounts, ${report.designsCreated} designs from ${report.designOrigin}).`);
+    logger.info(`First run: seeded the demo shop (${report.usersCreated} accounts, ${report.designsCreated} designs).`);
   }
 
   const app = createApp({ config, db, logger });

@@ -17,8 +17,6 @@ export const DEMO_ACCOUNTS: { email: string; displayName: string; role: Role }[]
 export interface SeedReport {
   usersCreated: number;
   designsCreated: number;
-  /** Where the demo designs came from: the domain fixtures, or empty placeholders while those are missing. */
-  designOrigin: 'fixtures' | 'empty';
 }
 
 /** Adds whatever part of the demo shop is missing; running it twice changes nothing. */
@@ -38,7 +36,7 @@ export async function seedDemo(db: Database, options: { passwordCost?: number } 
   });
 
   const designer = await User.findOne({ where: { email: 'designer@harborlane.example' } });
-  const { designs, origin } = await loadDemoDesigns();
+  const designs = await loadDemoDesigns();
   let designsCreated = 0;
   if (designer) {
     const service = createDesignsService(db);
@@ -49,5 +47,5 @@ export async function seedDemo(db: Database, options: { passwordCost?: number } 
       designsCreated += 1;
     }
   }
-  return { usersCreated, designsCreated, designOrigin: origin };
+  return { usersCreated, designsCreated };
 }

@@ -6,8 +6,8 @@
 import { readFileSync } from 'node:fs';
 import { pathToFileURL } from 'node:url';
 import { toCsv } from './outputs/csv';
-import { analyzeDesign } from './analyze';
-import type { DesignAnalysis } from './analysisTypes';
+import { analyzeDesign } from './analysis/analyze';
+import type { DesignAnalysis } from './analysis/types';
 import { parseDesignDocument } from './design/parse';
 
 export type CliSection = 'bom' | 'cutlist' | 'stock' | 'tools' | 'findings';

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { cutListToCsv } from '@/components/outputs/csv';
 import { escapeCsvFormula, toCsv } from '@/domain/outputs/csv';
-import type { CutListGroup } from '@/domain/analysisTypes';
+import type { CutListGroup } from '@/domain/analysis/types';
 
 // Formula injection (defect 6): OWASP "CSV Injection" lists =, +, -, @, tab and carriage return as
 // the characters that make a spreadsheet evaluate a cell.

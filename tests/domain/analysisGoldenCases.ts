@@ -5,7 +5,7 @@
  * coincident profiles whose findings are capped. Speed work on the analysis must leave every
  * output of these byte-for-byte equal.
  */
-import type { DesignAnalysis } from '@/domain/analysisTypes';
+import type { DesignAnalysis } from '@/domain/analysis/types';
 import type { DesignDocument } from '@/domain/design/schema';
 import { demoDesigns } from '@/domain/fixtures';
 import { largeFrame } from '../../bench/largeFrame';

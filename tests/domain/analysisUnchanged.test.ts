@@ -7,7 +7,7 @@
  */
 import { createHash } from 'node:crypto';
 import { describe, expect, it } from 'vitest';
-import { analyzeDesign } from '@/domain/analyze';
+import { analyzeDesign } from '@/domain/analysis/analyze';
 import { canonicalJson, comparableAnalysis, goldenCases } from './analysisGoldenCases';
 
 describe('the analysis output of the golden designs', () => {

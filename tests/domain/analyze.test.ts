@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { analyzeDesign } from '@/domain/analyze';
+import { analyzeDesign } from '@/domain/analysis/analyze';
 import { applyOperation } from '@/domain/design/operations';
 import { demoDesigns } from '@/domain/fixtures';
 import { boxFrame } from './checksDesigns';

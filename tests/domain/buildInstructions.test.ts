@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import jsQR from 'jsqr';
 import { PNG } from 'pngjs';
-import { analyzeDesign } from '@/domain/analyze';
+import { analyzeDesign } from '@/domain/analysis/analyze';
 import { buildInstructions, buildStepPath, designCautions, firstStepOfPiece, LABEL_GRID, labelSheets, pieceLabels, TWO_PERSON_LIFT_KG, wallCaution } from '@/domain/buildInstructions';
 import { demoDesigns } from '@/domain/fixtures';
 import { labelQrDataUrl } from '@/features/workbench/labels/labelQr';

@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { createAnalysisContext } from '@/domain/analyze';
+import { createAnalysisContext } from '@/domain/analysis/analyze';
 import { interferenceFindings, interferenceFindingsAllPairs } from '@/domain/checks/interferenceFindings';
 import { designDocumentSchema, CURRENT_SCHEMA_VERSION } from '@/domain/design/schema';
 

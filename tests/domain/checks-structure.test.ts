@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { analyzeDesign } from '@/domain/analyze';
+import { analyzeDesign } from '@/domain/analysis/analyze';
 import { defaultCatalogue } from '@/domain/catalogue';
 import type { Catalogue } from '@/domain/catalogue/types';
 import { designDocumentSchema, type DesignDocument, type DesignDocumentInput, CURRENT_SCHEMA_VERSION } from '@/domain/design/schema';

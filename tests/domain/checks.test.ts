@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { analyzeDesign, createAnalysisContext } from '@/domain/analyze';
+import { analyzeDesign, createAnalysisContext } from '@/domain/analysis/analyze';
 import { applyOperation } from '@/domain/design/operations';
 import type { DesignDocument } from '@/domain/design/schema';
 import { jointFindings } from '@/domain/checks/jointFindings';

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { accessoryFor, defaultCatalogue } from '@/domain/catalogue';
-import { analyzeDesign } from '@/domain/analyze';
+import { analyzeDesign } from '@/domain/analysis/analyze';
 import { createEmptyDesign } from '@/domain/design/create';
 import { generateDesign } from '@/domain/design/generators';
 import {

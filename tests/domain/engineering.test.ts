@@ -3,10 +3,10 @@
  * numbers must show. Each outside value names its source beside it.
  */
 import { describe, expect, it } from 'vitest';
-import { analyzeDesign, createAnalysisContext } from '@/domain/analyze';
+import { analyzeDesign, createAnalysisContext } from '@/domain/analysis/analyze';
 import { defaultCatalogue, getConnector, getSystem, getVariant } from '@/domain/catalogue';
 import { jointCapacity, nutFactor, SCREW_FIGURES } from '@/domain/catalogue/jointCapacity';
-import { endWord } from '@/domain/checks/describe';
+import { endWord } from '@/domain/analysis/describe';
 import { generateDesign } from '@/domain/design/generators';
 import { designDocumentSchema, CURRENT_SCHEMA_VERSION, type DesignDocument } from '@/domain/design/schema';
 import { parseDesignOrThrow } from '@/domain/design/parse';

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { analyzeDesign } from '@/domain/analyze';
+import { analyzeDesign } from '@/domain/analysis/analyze';
 import { createEmptyDesign } from '@/domain/design/create';
 import { addJoint, addPanel, addProfile, removeParts } from '@/domain/design/operations';
 import { addFrameGroup, applyDesignOperation as applyOperation, regenerateFrameGroup } from '@/domain/design/applyDesignOperation';

@@ -3,7 +3,7 @@
  * and bad input", items 1, 3 and 7). Each test failed on the code before the fix.
  */
 import { describe, expect, it } from 'vitest';
-import { analyzeDesign } from '@/domain/analyze';
+import { analyzeDesign } from '@/domain/analysis/analyze';
 import { MAX_FINDINGS_PER_CHECK } from '@/domain/checks/findingCap';
 import { parseDesignDocument } from '@/domain/design/parse';
 import { CURRENT_SCHEMA_VERSION, DESIGN_LIMITS, designDocumentSchema } from '@/domain/design/schema';

@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { analyzeDesign } from '@/domain/analyze';
+import { analyzeDesign } from '@/domain/analysis/analyze';
 import { defaultCatalogue } from '@/domain/catalogue';
 import type { DesignDocument } from '@/domain/design/schema';
 import { boxFrame, translateDesign } from './checksDesigns';

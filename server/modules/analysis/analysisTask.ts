@@ -3,7 +3,7 @@
  * it, and hand back JSON text, so the request thread only forwards bytes.
  */
 import type { MessagePort } from 'node:worker_threads';
-import { analyzeDesign } from '../../../src/domain/analyze';
+import { analyzeDesign } from '../../../src/domain/analysis/analyze';
 import { parseDesignDocument } from '../../../src/domain/design/parse';
 
 export type AnalysisTaskResult = { ok: true; json: string } | { ok: false; errors: { path: string; message: string }[] };

@@ -1,5 +1,5 @@
 import Papa from 'papaparse';
-import type { DesignAnalysis } from '../../../src/domain/analyze';
+import type { DesignAnalysis } from '../../../src/domain/analysis/analyze';
 import { sectionRows } from '../../../src/domain/cli';
 
 /** The bill of materials or the cut list as CSV (the same columns as the analysis command line). */

@@ -1,4 +1,4 @@
-import type { DesignAnalysis } from '../../../src/domain/analyze';
+import type { DesignAnalysis } from '../../../src/domain/analysis/analyze';
 
 export interface BomDiffRow {
   code: string;

@@ -1,6 +1,6 @@
 import { useState, type ReactNode } from 'react';
 import { TriangleAlert } from 'lucide-react';
-import type { VariantStockPlan } from '@/domain/analysisTypes';
+import type { VariantStockPlan } from '@/domain/analysis/types';
 import type { DesignSettings } from '@/domain/design/schema';
 import type { LengthUnit } from '@/domain/units';
 import { StockPlanPicture } from './StockPlanPicture';

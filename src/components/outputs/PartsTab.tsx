@@ -1,6 +1,6 @@
 import { useMemo } from 'react';
 import type { ColumnDef } from '@tanstack/react-table';
-import type { BomCategory, BomLine } from '@/domain/analysisTypes';
+import type { BomCategory, BomLine } from '@/domain/analysis/types';
 import type { LengthUnit } from '@/domain/units';
 import { SortableTable } from './SortableTable';
 import { CsvButton } from './CsvButton';

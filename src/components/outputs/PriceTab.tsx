@@ -1,4 +1,4 @@
-import type { CostCategory, CostSummary } from '@/domain/analysisTypes';
+import type { CostCategory, CostSummary } from '@/domain/analysis/types';
 import type { LengthUnit } from '@/domain/units';
 import { BOM_CATEGORY_NAMES } from './PartsTab';
 import { formatMoney, showQuantity, showUnitPrice } from './format';

@@ -1,4 +1,4 @@
-import type { ToolItem, ToolKind } from '@/domain/analysisTypes';
+import type { ToolItem, ToolKind } from '@/domain/analysis/types';
 
 const TOOL_KIND_NAMES: Record<ToolKind, string> = {
   'hex-key': 'Hex keys',

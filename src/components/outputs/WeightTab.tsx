@@ -1,4 +1,4 @@
-import type { MassSummary } from '@/domain/analysisTypes';
+import type { MassSummary } from '@/domain/analysis/types';
 import type { DesignDocument } from '@/domain/design/schema';
 import type { LengthUnit } from '@/domain/units';
 import { FootprintSketch } from './FootprintSketch';

@@ -1,6 +1,6 @@
 import { downloadBlob } from '@/lib/download';
 import { toCsv } from '@/domain/outputs/csv';
-import type { BomLine, CutListGroup, CutMachiningOperation, EndTreatment } from '@/domain/analysisTypes';
+import type { BomLine, CutListGroup, CutMachiningOperation, EndTreatment } from '@/domain/analysis/types';
 import type { LengthUnit } from '@/domain/units';
 import { formatLength, mmToInches } from '@/domain/units';
 

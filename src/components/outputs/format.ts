@@ -1,6 +1,6 @@
 import { defaultCatalogue, getVariant } from '@/domain/catalogue';
 import { formatForce, formatLength, formatMass, type LengthUnit } from '@/domain/units';
-import type { BomUnit } from '@/domain/analysisTypes';
+import type { BomUnit } from '@/domain/analysis/types';
 
 // Display helpers for the outputs dock: lengths stay mm inside and only change form here.
 

@@ -3,7 +3,7 @@ import { Canvas } from '@react-three/fiber';
 import { OrbitControls } from '@react-three/drei';
 import * as THREE from 'three';
 import { defaultCatalogue, type Catalogue } from '@/domain/catalogue';
-import type { DesignAnalysis } from '@/domain/analysisTypes';
+import type { DesignAnalysis } from '@/domain/analysis/types';
 import type { DesignDocument } from '@/domain/design/schema';
 import { CameraDirector } from './CameraDirector';
 import { DesignParts } from './DesignParts';

@@ -1,7 +1,7 @@
 import { useEffect, useLayoutEffect, useMemo } from 'react';
 import { useThree } from '@react-three/fiber';
 import * as THREE from 'three';
-import type { DesignAnalysis } from '@/domain/analysisTypes';
+import type { DesignAnalysis } from '@/domain/analysis/types';
 import type { DesignDocument } from '@/domain/design/schema';
 import { SEVERITY_COLOR, worstSeverityByPart } from './partHighlight';
 import { useScene } from './sceneContext';

@@ -1,6 +1,6 @@
 /** Instance colours (multiplied onto the material): selection, hover and finding tints. */
 import * as THREE from 'three';
-import type { DesignAnalysis, Severity } from '@/domain/analysisTypes';
+import type { DesignAnalysis, Severity } from '@/domain/analysis/types';
 
 export const HIGHLIGHT = {
   plain: new THREE.Color('#ffffff'),

@@ -1,5 +1,5 @@
 /** Props vocabulary shared by the viewer layer's components (no store, no editor types). */
-import type { DesignAnalysis } from '@/domain/analysisTypes';
+import type { DesignAnalysis } from '@/domain/analysis/types';
 import type { LengthUnit } from '@/domain/units';
 
 /**

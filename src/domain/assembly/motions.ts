@@ -10,7 +10,7 @@
  * - feet, casters and end caps go along the profile axis into its end.
  */
 import type { DesignDocument, Joint, Panel, Profile, Vec3 } from '../design/schema';
-import type { CatalogueIndex } from '../checks/catalogueIndex';
+import type { CatalogueIndex } from '../analysis/catalogueIndex';
 import type { PartMotion, TNutMotion } from './types';
 
 /** Explode distances, mm (display choice). */

@@ -5,7 +5,7 @@
  */
 import { defaultCatalogue, fastenerWithHead } from '../catalogue';
 import type { Catalogue, Fastener } from '../catalogue/types';
-import { indexCatalogue, type CatalogueIndex } from '../checks/catalogueIndex';
+import { indexCatalogue, type CatalogueIndex } from '../analysis/catalogueIndex';
 import type { AssemblyStep, BuildOrientation, DesignDocument } from '../design/schema';
 import { generateSteps } from './generateSteps';
 import { computeMotions } from './motions';

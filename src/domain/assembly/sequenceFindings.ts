@@ -17,11 +17,11 @@
  * Parts of a sub-assembly count as in place, for parts outside it, from the step that joins it.
  * Lengths mm.
  */
-import type { Finding, FindingFix } from '../analysisTypes';
+import type { Finding, FindingFix } from '../analysis/types';
 import type { Box } from '../geometry/box';
 import type { Joint, ProfileEnd, Vec3 } from '../design/schema';
-import { accessoriesAt, allDesignIds, CONTACT_TOLERANCE_MM, jointsAt, type AnalysisContext, type ProfileInfo } from '../checks/context';
-import { capitalise, findingId, jointName, panelName, profileName } from '../checks/describe';
+import { accessoriesAt, allDesignIds, CONTACT_TOLERANCE_MM, jointsAt, type AnalysisContext, type ProfileInfo } from '../analysis/context';
+import { capitalise, findingId, jointName, panelName, profileName } from '../analysis/describe';
 import { useDropInTNutsFix } from '../checks/fixes';
 
 /** The name people read for any part of the design (labels, never internal ids). */

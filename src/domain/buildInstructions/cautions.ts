@@ -3,7 +3,7 @@
  * common practice, not rules: every caution ends by deferring to local rules.
  * Units: mm, kg.
  */
-import type { DesignAnalysis } from '../analysisTypes';
+import type { DesignAnalysis } from '../analysis/types';
 
 /** kg above which a frame or piece is lifted by two people (common practice, no source; local manual-handling rules may set lower). */
 export const TWO_PERSON_LIFT_KG = 25;

@@ -4,8 +4,8 @@
  * gets one step per profile, then its panels, then its accessories.
  * Units: mm, kg.
  */
-import type { DesignAnalysis, ToolItem } from '../analysisTypes';
-import { createAnalysisContext } from '../analyze';
+import type { DesignAnalysis, ToolItem } from '../analysis/types';
+import { createAnalysisContext } from '../analysis/analyze';
 import { hardwareSummary } from '../outputs/hardware';
 import type { DesignDocument } from '../design/schema';
 import { liftCaution, wallCaution, type Caution } from './cautions';

@@ -2,7 +2,7 @@
  * Piece labels: one per cut piece, laid out on one label-stock grid.
  * Units: mm (lengths shown in the design's units).
  */
-import type { CutListItem } from '../analysisTypes';
+import type { CutListItem } from '../analysis/types';
 import type { DesignDocument } from '../design/schema';
 import { formatLength } from '../units';
 

@@ -3,8 +3,8 @@
  * produce millions of findings; the list keeps the first `MAX_FINDINGS_PER_CHECK` of each check,
  * most severe first, and one closing finding counts the rest ("…and 1,234 more overlaps").
  */
-import type { Finding, Severity } from '../analysisTypes';
-import { formatNumber } from './describe';
+import type { Finding, Severity } from '../analysis/types';
+import { formatNumber } from '../analysis/describe';
 
 /** Parts (profiles + joints + panels + accessories) the editor and, by default, the server analyse at once. */
 export const DEFAULT_ANALYSIS_MAX_PARTS = 60_000;

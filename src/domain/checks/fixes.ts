@@ -2,9 +2,9 @@
  * Fixes the editor can apply, as serialisable design operations (design/operations.ts).
  * Each builder returns undefined when no operation expresses the fix.
  */
-import type { FindingFix } from '../analysisTypes';
+import type { FindingFix } from '../analysis/types';
 import type { Joint, ProfileEnd } from '../design/schema';
-import type { AnalysisContext, PanelInfo, ProfileInfo } from './context';
+import type { AnalysisContext, PanelInfo, ProfileInfo } from '../analysis/context';
 
 export function addEndCapFix(ctx: AnalysisContext, info: ProfileInfo, end: ProfileEnd): FindingFix | undefined {
   const systemId = info.variant?.systemId ?? ctx.design.systemId;

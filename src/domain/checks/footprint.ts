@@ -5,7 +5,7 @@
  * through every profile resting at the lowest level. Edges are named with front = −Z.
  */
 import type { Vec3 } from '../geometry/vectors';
-import type { AnalysisContext } from './context';
+import type { AnalysisContext } from '../analysis/context';
 
 const FLOOR_TOLERANCE_MM = 1;
 

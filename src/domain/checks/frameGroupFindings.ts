@@ -1,7 +1,7 @@
 /** Frame groups: what a regeneration had to take out, so people know and can undo. */
-import type { Finding } from '../analysisTypes';
-import type { AnalysisContext } from './context';
-import { findingId } from './describe';
+import type { Finding } from '../analysis/types';
+import type { AnalysisContext } from '../analysis/context';
+import { findingId } from '../analysis/describe';
 
 export function frameGroupFindings(ctx: AnalysisContext): Finding[] {
   const out: Finding[] = [];

@@ -2,7 +2,7 @@
 import type { Box } from '../geometry/box';
 import { faceNormal, sectionHalfExtentAlong } from '../geometry/profileGeometry';
 import { addScaled, dot, sub, type ReadonlyVec3, type Vec3 } from '../geometry/vectors';
-import type { AnalysisContext, ProfileInfo } from './context';
+import type { AnalysisContext, ProfileInfo } from '../analysis/context';
 
 /** Distance from a point to a box (0 inside). */
 export function distancePointToBox(p: ReadonlyVec3, b: Box): number {

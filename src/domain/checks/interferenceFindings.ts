@@ -4,11 +4,11 @@
  * Parts of one joint, and a captured panel with its frame, are contacts, not collisions.
  * `interferenceFindingsAllPairs` is the O(n²) reference the grid is measured and tested against.
  */
-import type { Finding } from '../analysisTypes';
+import type { Finding } from '../analysis/types';
 import { boxPenetration, type Box } from '../geometry/box';
 import { UniformGrid } from '../geometry/spatialGrid';
-import { INTERFERENCE_TOLERANCE_MM, areJoined, type AnalysisContext } from './context';
-import { capitalise, findingId, mm, panelName, profileName } from './describe';
+import { INTERFERENCE_TOLERANCE_MM, areJoined, type AnalysisContext } from '../analysis/context';
+import { capitalise, findingId, mm, panelName, profileName } from '../analysis/describe';
 import { MAX_COUNTED_FINDINGS, MAX_FINDINGS_PER_CHECK, moreFindingsFinding } from './findingCap';
 
 const CHECK = 'interference';

@@ -4,13 +4,13 @@
  * the profile; no two connectors claim one slot position; access holes are not covered; fastener
  * and T-nut counts are sane.
  */
-import type { Finding } from '../analysisTypes';
+import type { Finding } from '../analysis/types';
 import type { Joint, Machining, ProfileEnd } from '../design/schema';
 import type { Connector, ConnectorMachining } from '../catalogue/types';
 import { sectionHalfExtentAlong } from '../geometry/profileGeometry';
 import { scale } from '../geometry/vectors';
-import { CONTACT_TOLERANCE_MM, accessoriesAt, areJoined, jointsAt, memberEnd, memberPoint, type AnalysisContext, type ProfileInfo } from './context';
-import { capitalise, countOf, endPhrase, findingId, jointName, mm, profileName } from './describe';
+import { CONTACT_TOLERANCE_MM, accessoriesAt, areJoined, jointsAt, memberEnd, memberPoint, type AnalysisContext, type ProfileInfo } from '../analysis/context';
+import { capitalise, countOf, endPhrase, findingId, jointName, mm, profileName } from '../analysis/describe';
 import { distancePointToBox, faceFacing, firstProfileAtPoint, pointOffFace, projectAlong } from './geometryQueries';
 import { addEndCapFix, addMachiningFix } from './fixes';
 

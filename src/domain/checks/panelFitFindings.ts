@@ -3,13 +3,14 @@
  * thinner: a gasket or retainer strip, with its length), its drawn opening against the frame,
  * its plane against the slots, and the corner notches connectors in the slot call for.
  */
-import type { Finding } from '../analysisTypes';
+import type { Finding } from '../analysis/types';
 import { panelAxes } from '../geometry/panelGeometry';
 import { sectionHalfExtentAlong } from '../geometry/profileGeometry';
 import { dominantAxis } from '../geometry/vectors';
-import type { AnalysisContext, PanelInfo } from './context';
+import type { AnalysisContext, PanelInfo } from '../analysis/context';
+import { panelCornerNotches } from '../analysis/panelNotches';
 import { sheetThicknessTolerance } from '../catalogue/materials';
-import { capitalise, countOf, findingId, formatNumber, mm, panelName } from './describe';
+import { capitalise, countOf, findingId, formatNumber, mm, panelName } from '../analysis/describe';
 import { addGasketFix, setPanelThicknessFix } from './fixes';
 
 const CHECK = 'panel-fit';
@@ -21,8 +22,6 @@ export const PANEL_TEMPERATURE_SWING_K = 30;
 const FRAME_EXPANSION = 23.4e-6;
 /** Drawn opening and frame opening may differ by this much, mm. */
 const OPENING_TOLERANCE_MM = 1;
-/** Connector kinds that sit in a slot at a frame corner, where a captured panel needs a notch. */
-const NOTCHING_KINDS = new Set(['corner-bracket', 'concealed-connector']);
 
 export function panelFitFindings(ctx: AnalysisContext): Finding[] {
   const out: Finding[] = [];
@@ -51,7 +50,7 @@ export function panelFitFindings(ctx: AnalysisContext): Finding[] {
     checkThickness(ctx, info, out);
     checkThermal(ctx, info, out);
     checkOpening(info, out);
-    const notch = cornerNotches(ctx, info);
+    const notch = panelCornerNotches(ctx, info);
     if (notch.corners > 0) {
       out.push({
         id: findingId(CHECK, 'corner-notch', [panel.id]),
@@ -221,41 +220,6 @@ function checkOpening(info: PanelInfo, out: Finding[]): void {
       data: { openingWidthMm: round(opening.width), openingHeightMm: round(opening.height) },
     });
   }
-}
-
-/** Corners of a captured panel where a connector sits in the slot, and the notch that clears it, mm. */
-export function cornerNotches(ctx: AnalysisContext, info: PanelInfo): { size: number; corners: number; jointIds: string[] } {
-  // One memo entry holds every panel's result, by panel id (no key string per panel).
-  let byPanel = ctx.memo.get('cornerNotches') as Map<string, { size: number; corners: number; jointIds: string[] }> | undefined;
-  if (!byPanel) ctx.memo.set('cornerNotches', (byPanel = new Map()));
-  const cached = byPanel.get(info.panel.id);
-  if (cached) return cached;
-  const result = computeCornerNotches(ctx, info);
-  byPanel.set(info.panel.id, result);
-  return result;
-}
-
-function computeCornerNotches(ctx: AnalysisContext, info: PanelInfo): { size: number; corners: number; jointIds: string[] } {
-  if (info.panel.mounting !== 'captured' || info.bounding.length !== 4) return { size: 0, corners: 0, jointIds: [] };
-  const frame = info.bounding.map((b) => b.profile.id);
-  const jointIds: string[] = [];
-  const seenCorners = new Set<string>();
-  let size = 0;
-  for (const b of info.bounding) {
-    for (const joint of b.joints) {
-      if (!NOTCHING_KINDS.has(joint.kind) || joint.members.length < 2) continue;
-      const a = joint.members[0].profileId;
-      const c = joint.members[1].profileId;
-      if (!frame.includes(a) || !frame.includes(c) || seenCorners.has(joint.id)) continue;
-      const connector = ctx.catalogue.connectors.get(joint.connectorId);
-      if (!connector || connector.occupiedSlotLength <= 0) continue;
-      seenCorners.add(joint.id);
-      jointIds.push(joint.id);
-      // The notch clears the connector's length in the slot beyond the engagement depth.
-      size = Math.max(size, Math.round(connector.occupiedSlotLength * 10) / 10);
-    }
-  }
-  return { size, corners: Math.min(jointIds.length, 4), jointIds: jointIds.sort() };
 }
 
 function round(v: number): number {

@@ -4,10 +4,10 @@
  * unbraced frames under side loads, and tip-over (always: the empty frame and every load case).
  * Units in messages: mm, N, MPa.
  */
-import type { Finding, StabilityResult, StructureResult, TipOverResult } from '../analysisTypes';
+import type { Finding, StabilityResult, StructureResult, TipOverResult } from '../analysis/types';
 import { END_CONDITION_LABELS, type EndCondition } from '../structure/columns';
-import type { AnalysisContext } from './context';
-import { findingId, formatNumber, mm, panelName, profileName } from './describe';
+import type { AnalysisContext } from '../analysis/context';
+import { findingId, formatNumber, mm, panelName, profileName } from '../analysis/describe';
 import { structureResults, type FrameMass } from './structureResults';
 
 export { GRAVITY, findLegs, panelSupports, structureCautions, type FrameMass } from './structureResults';

@@ -17,7 +17,7 @@ import type {
   StructureResult,
   TipOverResult,
   Vec3Tuple,
-} from '../analysisTypes';
+} from '../analysis/types';
 import { jointCapacity } from '../catalogue/jointCapacity';
 import type { DesignSettings, Load, LoadCase } from '../design/schema';
 import { panelAxes } from '../geometry/panelGeometry';
@@ -30,7 +30,7 @@ import { shareLegLoads } from '../structure/legLoads';
 import { oneWayStripDeflection, simplySupportedPlateDeflection } from '../structure/plates';
 import { PUSH_TEST_MIN_HEIGHT_MM, STABILITY_PUSH_FORCE_N } from '../structure/stability';
 import { tipOverForce } from '../structure/tipOver';
-import { memberAlong, type AnalysisContext, type PanelInfo, type ProfileInfo } from './context';
+import { memberAlong, type AnalysisContext, type PanelInfo, type ProfileInfo } from '../analysis/context';
 import { footprintLeverArm } from './footprint';
 
 /** Standard gravity, m/s² (exact by definition, CGPM 1901). */

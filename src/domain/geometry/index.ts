@@ -3,3 +3,4 @@ export * from './box';
 export * from './profileGeometry';
 export * from './panelGeometry';
 export * from './spatialGrid';
+export * from './cornerNotches';

@@ -3,8 +3,8 @@
  * connectors, screws and T-nuts from the joints, panels by material, thickness and size,
  * accessories by piece, gasket and slot cover by length.
  */
-import type { BomLine } from '../analysisTypes';
-import type { AnalysisContext } from '../checks/context';
+import type { BomLine } from '../analysis/types';
+import type { AnalysisContext } from '../analysis/context';
 import type { HardwareSummary } from './hardware';
 import type { PanelSheet } from './panelSheets';
 

@@ -2,8 +2,8 @@
  * Cost from the (demo) price list: profile metres, one saw cut per piece, each machining
  * operation, connectors, screws, T-nuts, accessories, and panels by m².
  */
-import type { BomLine, CostCategory, CostLine, CostSummary } from '../analysisTypes';
-import type { AnalysisContext } from '../checks/context';
+import type { BomLine, CostCategory, CostLine, CostSummary } from '../analysis/types';
+import type { AnalysisContext } from '../analysis/context';
 import { sheetCode, sheetName } from './bom';
 import type { PanelSheet } from './panelSheets';
 

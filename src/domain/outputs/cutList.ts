@@ -3,10 +3,10 @@
  * cap, foot, caster, plain) and its machining with positions from a named end; identical pieces
  * grouped with a quantity.
  */
-import type { CutListGroup, CutListItem, CutMachiningOperation, EndTreatment } from '../analysisTypes';
+import type { CutListGroup, CutListItem, CutMachiningOperation, EndTreatment } from '../analysis/types';
 import { threadFor, type ScrewSize } from '../catalogue/fastenerStandards';
-import { accessoriesAt, type AnalysisContext, type ProfileInfo } from '../checks/context';
-import { endWord, formatNumber } from '../checks/describe';
+import { accessoriesAt, type AnalysisContext, type ProfileInfo } from '../analysis/context';
+import { endWord, formatNumber } from '../analysis/describe';
 import type { ProfileEnd } from '../design/schema';
 
 const MACHINING_NAMES: Record<CutMachiningOperation['kind'], string> = {

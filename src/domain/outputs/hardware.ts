@@ -4,9 +4,9 @@
  * and T-nuts that mount them. Also the hardware's mass moments for the centre of mass.
  * Shared by the BOM, tools, mass and cost; one pass, no per-screw objects.
  */
-import type { BomCategory } from '../analysisTypes';
+import type { BomCategory } from '../analysis/types';
 import { jointRecipe, type JointRecipeItem } from '../design/jointHardware';
-import { memberPoint, type AnalysisContext } from '../checks/context';
+import { memberPoint, type AnalysisContext } from '../analysis/context';
 import { pointAlongProfile } from '../geometry/profileGeometry';
 import type { Vec3 } from '../geometry/vectors';
 

@@ -3,9 +3,9 @@
  * panels as area × thickness × density at their centres, hardware at its joint or accessory.
  * Overall size from the boxes of profiles and panels.
  */
-import type { MassSummary } from '../analysisTypes';
+import type { MassSummary } from '../analysis/types';
 import { emptyBox, expandBoxInPlace, isEmptyBox } from '../geometry/box';
-import type { AnalysisContext } from '../checks/context';
+import type { AnalysisContext } from '../analysis/context';
 import type { HardwareSummary } from './hardware';
 import type { PanelSheet } from './panelSheets';
 

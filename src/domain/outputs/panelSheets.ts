@@ -1,8 +1,8 @@
 /** Sheet size, area, mass and price of each panel; captured panels include slot engagement. */
-import type { PanelCutItem } from '../analysisTypes';
+import type { PanelCutItem } from '../analysis/types';
 import { panelPricePerSquareMetre } from '../catalogue';
-import type { AnalysisContext, PanelInfo } from '../checks/context';
-import { cornerNotches } from '../checks/panelFitFindings';
+import type { AnalysisContext, PanelInfo } from '../analysis/context';
+import { panelCornerNotches } from '../analysis/panelNotches';
 
 export interface PanelSheet {
   info: PanelInfo;
@@ -17,7 +17,7 @@ export interface PanelSheet {
 
 export function panelSheets(ctx: AnalysisContext): PanelSheet[] {
   return ctx.panels.map((info) => {
-    const notch = cornerNotches(ctx, info);
+    const notch = panelCornerNotches(ctx, info);
     const cutouts = info.panel.cutouts.reduce((sum, c) => sum + (Math.PI / 4) * c.diameter * c.diameter, 0);
     const mm2 = Math.max(0, info.sheetWidth * info.sheetHeight - cutouts - notch.corners * notch.size * notch.size);
     const area = mm2 / 1e6;

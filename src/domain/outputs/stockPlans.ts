@@ -11,8 +11,8 @@
  *   still holds its cuts, giving the cheapest mix found. The lower bound on cost is the total cut
  *   length (with kerfs) at the cheapest price per usable millimetre.
  */
-import type { VariantStockPlan } from '../analysisTypes';
-import type { AnalysisContext } from '../checks/context';
+import type { VariantStockPlan } from '../analysis/types';
+import type { AnalysisContext } from '../analysis/context';
 import type { ProfileSystem } from '../catalogue/types';
 import type { DesignDocument, SystemStock } from '../design/schema';
 import { planStock, type StockBar, type StockCut } from './stockPlan';

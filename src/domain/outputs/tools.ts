@@ -3,10 +3,10 @@
  * the machining, taps for tapped ends, a rubber mallet for pressed-in door track, and the cutting
  * kit. Wording is Slotwise's own.
  */
-import type { ToolItem } from '../analysisTypes';
+import type { ToolItem } from '../analysis/types';
 import { threadFor, type ScrewSize } from '../catalogue/fastenerStandards';
-import type { AnalysisContext } from '../checks/context';
-import { formatNumber } from '../checks/describe';
+import type { AnalysisContext } from '../analysis/context';
+import { formatNumber } from '../analysis/describe';
 import type { HardwareSummary } from './hardware';
 
 export function toolList(ctx: AnalysisContext, hardware: HardwareSummary): ToolItem[] {

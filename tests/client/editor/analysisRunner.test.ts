@@ -3,7 +3,7 @@ import { startAnalysisRunner } from '@/features/editor/analysis/analysisRunner';
 import type { AnalysisRequest, AnalysisResponse } from '@/features/editor/analysis/messages';
 import { createEditorStore } from '@/features/editor/store/editorStore';
 import { updateProfileCommand } from '@/features/editor/commands/patchCommands';
-import { analyzeDesign } from '@/domain/analyze';
+import { analyzeDesign } from '@/domain/analysis/analyze';
 import { twoRailDesign } from './fixtures';
 
 afterEach(() => vi.useRealTimers());

@@ -1,6 +1,6 @@
 import { render } from '@testing-library/react';
 import type { ReactNode } from 'react';
-import type { DesignAnalysis } from '@/domain/analysisTypes';
+import type { DesignAnalysis } from '@/domain/analysis/types';
 import { designDocumentSchema, type DesignDocument, CURRENT_SCHEMA_VERSION } from '@/domain/design/schema';
 import { createEditorStore, EditorStoreProvider, type EditorStoreApi } from '@/features/editor/store/editorStore';
 

@@ -2,7 +2,7 @@
 import { afterEach, describe, expect, it } from 'vitest';
 import { cleanup, render, screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
-import type { StructureResult } from '@/domain/analysisTypes';
+import type { StructureResult } from '@/domain/analysis/types';
 import type { LengthUnit } from '@/domain/units';
 import { OutputsDock } from '@/features/editor/panels/OutputsDock';
 import { StructureCautions } from '@/features/editor/panels/StructureCautions';

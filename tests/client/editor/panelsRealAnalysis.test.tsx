@@ -2,7 +2,7 @@
 import { afterEach, describe, expect, it } from 'vitest';
 import { cleanup, screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
-import { analyzeDesign } from '@/domain/analyze';
+import { analyzeDesign } from '@/domain/analysis/analyze';
 import { applyOperation } from '@/domain/design/operations';
 import type { DesignDocument } from '@/domain/design/schema';
 import { FindingsPanel } from '@/features/editor/panels/FindingsPanel';

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import * as THREE from 'three';
 import { defaultCatalogue } from '@/domain/catalogue';
 import { designDocumentSchema, type DesignDocumentInput, CURRENT_SCHEMA_VERSION } from '@/domain/design/schema';
-import type { DesignAnalysis } from '@/domain/analysisTypes';
+import type { DesignAnalysis } from '@/domain/analysis/types';
 import { buildSceneLayout, profileMatrix } from '@/components/viewer/sceneLayout';
 import { SceneResources } from '@/components/viewer/sceneResources';
 import { worstSeverityByPart } from '@/components/viewer/partHighlight';

@@ -2,7 +2,7 @@
 import { afterEach, describe, expect, it } from 'vitest';
 import { act, cleanup, screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
-import { analyzeDesign } from '@/domain/analyze';
+import { analyzeDesign } from '@/domain/analysis/analyze';
 import { buildPrinterEnclosure } from '@/domain/fixtures/demoDesigns';
 import { SequencePanel } from '@/features/editor/sequence/SequencePanel';
 import { historyLength, renderWithStore, storeWithAnalysis } from './panelsFixtures';

@@ -1,6 +1,6 @@
 import Papa from 'papaparse';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { analyzeDesign } from '../../../src/domain/analyze';
+import { analyzeDesign } from '../../../src/domain/analysis/analyze';
 import { demoDesigns } from '../../../src/domain/fixtures';
 import { buildTestApp, CLIENT, type Agent, type TestApp } from '../helpers/testApp';
 

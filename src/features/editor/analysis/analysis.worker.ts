@@ -1,6 +1,6 @@
 /// <reference lib="webworker" />
 // Runs the domain checks off the main thread so a drag never waits for them.
-import { analyzeDesign } from '@/domain/analyze';
+import { analyzeDesign } from '@/domain/analysis/analyze';
 import { countDesignParts, DEFAULT_ANALYSIS_MAX_PARTS } from '@/domain/checks/findingCap';
 import type { AnalysisRequest, AnalysisResponse } from './messages';
 

@@ -1,4 +1,4 @@
-import { analyzeDesign } from '@/domain/analyze';
+import { analyzeDesign } from '@/domain/analysis/analyze';
 import { DEFAULT_ANALYSIS_TIME_LIMIT_MS } from '@/domain/checks/findingCap';
 import type { DesignDocument } from '@/domain/design/schema';
 import type { EditorStoreApi } from '../store/types';

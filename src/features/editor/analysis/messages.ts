@@ -1,4 +1,4 @@
-import type { DesignAnalysis } from '@/domain/analysisTypes';
+import type { DesignAnalysis } from '@/domain/analysis/types';
 import type { DesignDocument } from '@/domain/design/schema';
 
 /** Main thread → worker: analyse this design; `requestId` lets the runner drop answers it no longer wants. */

@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { CircleCheck, LoaderCircle, Wrench } from 'lucide-react';
-import type { Finding, Severity } from '@/domain/analysisTypes';
+import type { Finding, Severity } from '@/domain/analysis/types';
 import { operationCommand } from '@/features/editor/commands';
 import { useEditorStore } from '@/features/editor/store/editorStore';
 import { cn } from '@/lib/cn';

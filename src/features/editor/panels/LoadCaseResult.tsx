@@ -1,5 +1,5 @@
 import { Trash2 } from 'lucide-react';
-import type { MemberResult, StructureResult } from '@/domain/analysisTypes';
+import type { MemberResult, StructureResult } from '@/domain/analysis/types';
 import type { LoadCase } from '@/domain/design/schema';
 import type { LengthUnit } from '@/domain/units';
 import { BeamSketch } from './BeamSketch';

@@ -1,4 +1,4 @@
-import type { StructureResult } from '@/domain/analysisTypes';
+import type { StructureResult } from '@/domain/analysis/types';
 import type { DesignDocument, LoadCase } from '@/domain/design/schema';
 import type { LengthUnit } from '@/domain/units';
 import { LoadCaseForm } from './LoadCaseForm';

@@ -1,6 +1,6 @@
 import { useId, useState } from 'react';
 import { ChevronDown, ChevronUp, LoaderCircle, TriangleAlert } from 'lucide-react';
-import type { DesignAnalysis } from '@/domain/analysisTypes';
+import type { DesignAnalysis } from '@/domain/analysis/types';
 import type { DesignDocument, LoadCase } from '@/domain/design/schema';
 import type { LengthUnit } from '@/domain/units';
 import { useEditorStore } from '@/features/editor/store/editorStore';

@@ -1,5 +1,5 @@
 import { CircleCheck, CircleX, Info, OctagonAlert, TriangleAlert, type LucideIcon } from 'lucide-react';
-import type { Severity } from '@/domain/analysisTypes';
+import type { Severity } from '@/domain/analysis/types';
 import { cn } from '@/lib/cn';
 
 /** Severity is shown as colour + icon + word, never colour alone (look.md). */

@@ -3,7 +3,7 @@ import { DndContext, KeyboardSensor, PointerSensor, closestCenter, useSensor, us
 import { SortableContext, sortableKeyboardCoordinates, useSortable, verticalListSortingStrategy } from '@dnd-kit/sortable';
 import { CSS } from '@dnd-kit/utilities';
 import { ChevronDown, ChevronRight, GripVertical, RefreshCw, TriangleAlert } from 'lucide-react';
-import type { Finding } from '@/domain/analysisTypes';
+import type { Finding } from '@/domain/analysis/types';
 import { sequenceOf, type SequenceStep } from '@/domain/assembly';
 import type { DesignOperation } from '@/domain/design/operations';
 import { operationCommand } from '@/features/editor/commands/operationCommand';

@@ -1,6 +1,6 @@
 import type { StoreApi } from 'zustand';
 import type { TemporalState } from 'zundo';
-import type { DesignAnalysis } from '@/domain/analysisTypes';
+import type { DesignAnalysis } from '@/domain/analysis/types';
 import type { DesignDocument } from '@/domain/design/schema';
 import type { LengthUnit } from '@/domain/units';
 import type { EditorCommand } from '../commands/EditorCommand';

@@ -1,7 +1,7 @@
 import { useCallback, useMemo, useState } from 'react';
 import { useParams, useSearchParams } from 'react-router';
 import { Code, Layers, Ruler, Scissors, Table2, Move3d } from 'lucide-react';
-import { analyzeDesign } from '@/domain/analyze';
+import { analyzeDesign } from '@/domain/analysis/analyze';
 import type { LengthUnit } from '@/domain/units';
 import { DesignViewer } from '@/components/viewer';
 import { MeasureTool, OverallDimensions, SectionPlane, type SectionAxis } from '@/components/viewer/tools';

@@ -2,7 +2,7 @@ import { useMemo, useState, type FormEvent } from 'react';
 import { useParams } from 'react-router';
 import { Html } from '@react-three/drei';
 import { Check, MapPin, Undo2 } from 'lucide-react';
-import { analyzeDesign } from '@/domain/analyze';
+import { analyzeDesign } from '@/domain/analysis/analyze';
 import { DesignViewer } from '@/components/viewer';
 import { usePointPick, type PickedPoint } from '@/components/viewer/tools';
 import { Button, ErrorNotice, PageSkeleton } from '@/components/ui';

@@ -1,4 +1,4 @@
-import type { DesignAnalysis } from '@/domain/analysisTypes';
+import type { DesignAnalysis } from '@/domain/analysis/types';
 import type { DesignDocument } from '@/domain/design/schema';
 import { formatLength } from '@/domain/units';
 import type { BuildProgress } from '../hooks/useBuildProgress';

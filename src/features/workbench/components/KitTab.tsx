@@ -1,5 +1,5 @@
 import { KeyRound } from 'lucide-react';
-import type { DesignAnalysis } from '@/domain/analysisTypes';
+import type { DesignAnalysis } from '@/domain/analysis/types';
 import { kitItemKey } from '../hooks/useBuildData';
 import type { BuildProgress } from '../hooks/useBuildProgress';
 import { TickButton } from './TickButton';

@@ -1,5 +1,5 @@
 import { useMemo } from 'react';
-import { analyzeDesign } from '@/domain/analyze';
+import { analyzeDesign } from '@/domain/analysis/analyze';
 import { buildInstructions, designCautions } from '@/domain/buildInstructions';
 import { useBuild } from '../api/getBuild';
 import { useBuildRevision } from '../api/getBuildRevision';

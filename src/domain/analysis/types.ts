@@ -3,9 +3,9 @@
  * and the CLI. Lengths mm, masses kg, forces N, stresses MPa, money in `CostSummary.currency`.
  * Stable contract: fields are only ever added.
  */
-import type { DesignOperation } from './design/operations';
-import type { StockPlan } from './outputs/stockPlan';
-import type { SystemStock } from './design/schema';
+import type { DesignOperation } from '../design/operations';
+import type { StockPlan } from '../outputs/stockPlan';
+import type { SystemStock } from '../design/schema';
 
 export type Severity = 'error' | 'warning' | 'note';
 export type Vec3Tuple = [number, number, number];

@@ -3,29 +3,29 @@
  * Per-profile geometry, catalogue maps and the spatial index are built once and shared.
  * Units: mm, kg, N, MPa; prices in the demo price list's currency.
  */
-import type { DesignAnalysis, Finding, Severity } from './analysisTypes';
-import { defaultCatalogue } from './catalogue';
-import type { Catalogue } from './catalogue/types';
-import { indexCatalogue } from './checks/catalogueIndex';
-import { buildAnalysisContext, type AnalysisContext } from './checks/context';
-import { capFindings } from './checks/findingCap';
-import { frameGroupFindings } from './checks/frameGroupFindings';
-import { interferenceFindings } from './checks/interferenceFindings';
-import { jointFindings } from './checks/jointFindings';
-import { panelFitFindings } from './checks/panelFitFindings';
-import { sequenceFindings } from './assembly/sequenceFindings';
-import { structureAnalysis } from './checks/structureFindings';
-import type { DesignDocument } from './design/schema';
-import { billOfMaterials } from './outputs/bom';
-import { costSummary } from './outputs/cost';
-import { cutList } from './outputs/cutList';
-import { hardwareSummary } from './outputs/hardware';
-import { massSummary } from './outputs/mass';
-import { panelCutItems, panelSheets } from './outputs/panelSheets';
-import { stockPlans } from './outputs/stockPlans';
-import { toolList } from './outputs/tools';
+import type { DesignAnalysis, Finding, Severity } from './types';
+import { defaultCatalogue } from '../catalogue';
+import type { Catalogue } from '../catalogue/types';
+import { indexCatalogue } from './catalogueIndex';
+import { buildAnalysisContext, type AnalysisContext } from './context';
+import { capFindings } from '../checks/findingCap';
+import { frameGroupFindings } from '../checks/frameGroupFindings';
+import { interferenceFindings } from '../checks/interferenceFindings';
+import { jointFindings } from '../checks/jointFindings';
+import { panelFitFindings } from '../checks/panelFitFindings';
+import { sequenceFindings } from '../assembly/sequenceFindings';
+import { structureAnalysis } from '../checks/structureFindings';
+import type { DesignDocument } from '../design/schema';
+import { billOfMaterials } from '../outputs/bom';
+import { costSummary } from '../outputs/cost';
+import { cutList } from '../outputs/cutList';
+import { hardwareSummary } from '../outputs/hardware';
+import { massSummary } from '../outputs/mass';
+import { panelCutItems, panelSheets } from '../outputs/panelSheets';
+import { stockPlans } from '../outputs/stockPlans';
+import { toolList } from '../outputs/tools';
 
-export type { DesignAnalysis, Finding } from './analysisTypes';
+export type { DesignAnalysis, Finding } from './types';
 
 export interface AnalyzeOptions {
   /** Record how long each stage took in `timingsMs` (default true). */
