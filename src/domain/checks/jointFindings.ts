@@ -8,10 +8,10 @@ import type { Finding } from '../analysis/types';
 import type { Joint, Machining, ProfileEnd } from '../design/schema';
 import type { Connector, ConnectorMachining } from '../catalogue/types';
 import { sectionHalfExtentAlong } from '../geometry/profileGeometry';
-import { scale } from '../geometry/vectors';
+import { dot } from '../geometry/vectors';
 import { CONTACT_TOLERANCE_MM, accessoriesAt, areJoined, jointsAt, memberEnd, memberPoint, type AnalysisContext, type ProfileInfo } from '../analysis/context';
 import { capitalise, countOf, endPhrase, findingId, jointName, mm, profileName } from '../analysis/describe';
-import { distancePointToBox, faceFacing, firstProfileAtPoint, pointOffFace, projectAlong } from './geometryQueries';
+import { distancePointToBox, firstProfileAtPoint, pointOffFace, projectAlong } from './geometryQueries';
 import { addEndCapFix, addMachiningFix } from './fixes';
 
 const CHECK = 'joints';
@@ -31,8 +31,8 @@ const SLOT_CONNECTOR_KINDS = new Set(['corner-bracket', 'gusset-plate', 'conceal
 interface JointCheckCache {
   /** Screws a connector lists that the catalogue lacks. */
   unknownScrews: Map<Connector, number>;
-  /** `${systemId}|${tNut}` → whether the catalogue has that T-nut. */
-  hasTNut: Map<string, boolean>;
+  /** System id → T-nut kind → whether the catalogue has that T-nut. */
+  hasTNut: Map<string, Map<string, boolean>>;
 }
 
 export function jointFindings(ctx: AnalysisContext): Finding[] {
@@ -53,7 +53,6 @@ function checkJoint(ctx: AnalysisContext, joint: Joint, out: Finding[], cache: J
     if (info) infos.push(info);
     else (missing ??= []).push(m.profileId);
   }
-  const memberIds = () => joint.members.map((m) => m.profileId);
   if (missing) {
     out.push({
       id: findingId(CHECK, 'missing-member', [joint.id, ...missing]),
@@ -70,7 +69,7 @@ function checkJoint(ctx: AnalysisContext, joint: Joint, out: Finding[], cache: J
       id: findingId(CHECK, 'unknown-connector', [joint.id]),
       check: CHECK,
       severity: 'error',
-      partIds: [joint.id, ...memberIds()],
+      partIds: [joint.id, ...memberIdsOf(joint)],
       message: `${capitalise(jointName(ctx, joint))} uses a connector that is not in the catalogue. Pick another connector.`,
     });
     return;
@@ -80,7 +79,7 @@ function checkJoint(ctx: AnalysisContext, joint: Joint, out: Finding[], cache: J
       id: findingId(CHECK, 'kind-mismatch', [joint.id]),
       check: CHECK,
       severity: 'warning',
-      partIds: [joint.id, ...memberIds()],
+      partIds: [joint.id, ...memberIdsOf(joint)],
       message: `${capitalise(jointName(ctx, joint))} is drawn as a ${joint.kind.replace(/-/g, ' ')} but its connector is a ${connector.name}.`,
     });
   }
@@ -99,6 +98,10 @@ function checkJoint(ctx: AnalysisContext, joint: Joint, out: Finding[], cache: J
   checkMembersMeet(joint, connector, infos, out);
   checkMachining(joint, connector, infos, out);
   checkCounts(ctx, joint, connector, infos, out, cache);
+}
+
+function memberIdsOf(joint: Joint): string[] {
+  return joint.members.map((m) => m.profileId);
 }
 
 function checkMembersMeet(joint: Joint, connector: Connector, infos: ProfileInfo[], out: Finding[]): void {
@@ -212,14 +215,7 @@ function checkCounts(ctx: AnalysisContext, joint: Joint, connector: Connector, i
   }
   if (connector.tNutCount > 0) {
     const systemId = (infos[1] ?? infos[0]).variant?.systemId;
-    let hasTNut = true;
-    if (systemId) {
-      const key = `${systemId}|${joint.tNut}`;
-      const known = cache.hasTNut.get(key);
-      hasTNut = known ?? ctx.catalogue.tNutsBySystemKind.has(key);
-      if (known === undefined) cache.hasTNut.set(key, hasTNut);
-    }
-    if (!hasTNut) {
+    if (systemId && !hasTNut(ctx, cache, systemId, joint.tNut)) {
       out.push({
         id: findingId(CHECK, 'no-tnut', [joint.id]),
         check: CHECK,
@@ -229,6 +225,15 @@ function checkCounts(ctx: AnalysisContext, joint: Joint, connector: Connector, i
       });
     }
   }
+}
+
+/** Whether the catalogue has this T-nut for the system; one answer per system and kind, no key string per joint. */
+function hasTNut(ctx: AnalysisContext, cache: JointCheckCache, systemId: string, kind: string): boolean {
+  let bySystem = cache.hasTNut.get(systemId);
+  if (!bySystem) cache.hasTNut.set(systemId, (bySystem = new Map()));
+  let known = bySystem.get(kind);
+  if (known === undefined) bySystem.set(kind, (known = ctx.catalogue.tNutsBySystemKind.has(`${systemId}|${kind}`)));
+  return known;
 }
 
 function checkProfileEnds(ctx: AnalysisContext, out: Finding[]): void {
@@ -302,10 +307,15 @@ function checkSlotClaims(ctx: AnalysisContext, out: Finding[]): void {
     if (!connector || !joined || !met) continue;
     const end = memberEnd(joint.members[0], joined);
     if (!end) continue;
-    // The joined profile leaves the met profile along its own axis, away from the joined end.
-    const away = end === 'start' ? joined.profile.direction : scale(joined.profile.direction, -1);
-
-    const { face, cosine } = faceFacing(met, away);
+    // The joined profile leaves the met profile along its own axis, away from the joined end. The
+    // face it meets is the one facing that way (as `faceFacing`, without a vector per joint:
+    // negating the direction negates each dot product exactly).
+    const d = joined.profile.direction;
+    const sign = end === 'start' ? 1 : -1;
+    const cu = sign * dot(met.axes.u, d);
+    const cv = sign * dot(met.axes.v, d);
+    const face = Math.abs(cu) >= Math.abs(cv) ? (cu >= 0 ? 0 : 2) : cv >= 0 ? 1 : 3;
+    const cosine = face === 0 ? cu : face === 2 ? -cu : face === 1 ? cv : -cv;
     if (cosine < 0.7) continue;
     const centre = projectAlong(met, memberPoint(joined, joint.members[0]));
     const exact = joint.kind === 'concealed-connector';
@@ -319,7 +329,7 @@ function checkSlotClaims(ctx: AnalysisContext, out: Finding[]): void {
   }
   for (const [key, list] of claims) {
     if (list.length < 2) continue;
-    list.sort((a, b) => a.lo - b.lo);
+    sortByLo(list);
     const metId = ctx.profiles[key >> 2].profile.id;
     const faceText = String(key & 3);
     let reach = list[0];
@@ -338,6 +348,22 @@ function checkSlotClaims(ctx: AnalysisContext, out: Finding[]): void {
       }
       if (c.hi > reach.hi) reach = c;
     }
+  }
+}
+
+/**
+ * Sorts claims by `lo`, keeping the order of equal ones (as the stable `Array.prototype.sort`
+ * would). Lists are a handful of claims per slot face; insertion sort makes no work copy per list.
+ */
+function sortByLo(list: SlotClaim[]): void {
+  for (let i = 1; i < list.length; i++) {
+    const claim = list[i];
+    let j = i - 1;
+    while (j >= 0 && list[j].lo - claim.lo > 0) {
+      list[j + 1] = list[j];
+      j--;
+    }
+    list[j + 1] = claim;
   }
 }
 
