@@ -22,18 +22,17 @@ export function cutList(ctx: AnalysisContext): { items: CutListItem[]; groups: C
   const groups = new Map<string, CutListGroup>();
   // Frames repeat a few kinds of piece: end treatments (read-only, shared by the items and groups
   // that have them) and the group key's head are made once per kind, not once per profile.
-  const treatments = new Map<string, EndTreatment>();
-  const keyHeads = new Map<string, string>();
+  // Caches are nested maps keyed by the parts themselves, so no key string is built per profile.
+  const treatments: Nested<EndTreatment> = new Map();
+  const keyHeads: Nested<string> = new Map();
+  const threads = new Map<ProfileInfo['system'], string | undefined>();
   for (const info of ctx.profiles) {
-    const ends = { start: endTreatment(info, 'start', treatments), end: endTreatment(info, 'end', treatments) };
-    const machining = info.profile.machining.length === 0 ? [] : machiningOperations(info);
+    let thread = threads.get(info.system);
+    if (thread === undefined && !threads.has(info.system)) threads.set(info.system, (thread = tapThread(info)));
+    const ends = { start: endTreatment(info, 'start', thread, treatments), end: endTreatment(info, 'end', thread, treatments) };
+    const machining = info.profile.machining.length === 0 ? [] : machiningOperations(info, thread);
     const { variantId, length } = info.profile;
-    const headKey = `${variantId}|${length}|${ends.start.kind}|${ends.end.kind}`;
-    let head = keyHeads.get(headKey);
-    if (head === undefined) {
-      head = [variantId, length.toFixed(1), ends.start.kind, ends.end.kind].join('|');
-      keyHeads.set(headKey, head);
-    }
+    const head = cached(keyHeads, [variantId, length, ends.start.kind, ends.end.kind], () => [variantId, length.toFixed(1), ends.start.kind, ends.end.kind].join('|'));
     let groupKey = head;
     for (const m of machining) groupKey += `|${m.kind}/${m.fromEnd}/${m.offset.toFixed(1)}/${m.face}/${m.diameter ?? ''}`;
     items.push({
@@ -67,7 +66,7 @@ export function cutList(ctx: AnalysisContext): { items: CutListItem[]; groups: C
   return { items, groups: sortedGroups };
 }
 
-function machiningOperations(info: ProfileInfo): CutMachiningOperation[] {
+function machiningOperations(info: ProfileInfo, thread: string | undefined): CutMachiningOperation[] {
   return info.profile.machining
     .map((m): CutMachiningOperation => ({
       id: m.id,
@@ -78,7 +77,7 @@ function machiningOperations(info: ProfileInfo): CutMachiningOperation[] {
       diameter: m.diameter ?? null,
       description:
         m.kind === 'end-tap'
-          ? `${MACHINING_NAMES[m.kind]}${tapThread(info) ? ` ${tapThread(info)}` : ''} in the ${endWord(info, m.fromEnd)} end`
+          ? `${MACHINING_NAMES[m.kind]}${thread ? ` ${thread}` : ''} in the ${endWord(info, m.fromEnd)} end`
           : `${MACHINING_NAMES[m.kind]}${m.diameter ? ` Ø ${formatNumber(m.diameter)} mm` : ''} on face ${m.face}, ${formatNumber(m.offset)} mm from the ${endWord(info, m.fromEnd)} end`,
     }))
     .sort((a, b) => (a.fromEnd === b.fromEnd ? a.offset - b.offset : a.fromEnd === 'start' ? -1 : 1));
@@ -89,22 +88,32 @@ function tapThread(info: ProfileInfo): string | undefined {
   return size ? threadFor(size as ScrewSize).designation : undefined;
 }
 
-function endTreatment(info: ProfileInfo, end: ProfileEnd, cache: Map<string, EndTreatment>): EndTreatment {
+/** Values under a path of keys (strings and numbers), for caches without key strings. */
+type Nested<T> = Map<string | number, Nested<T> | T>;
+
+function cached<T>(root: Nested<T>, path: readonly (string | number)[], make: () => T): T {
+  let map = root;
+  for (let i = 0; i < path.length - 1; i++) {
+    let next = map.get(path[i]) as Nested<T> | undefined;
+    if (!next) map.set(path[i], (next = new Map()));
+    map = next;
+  }
+  const last = path[path.length - 1];
+  if (map.has(last)) return map.get(last) as T;
+  const value = make();
+  map.set(last, value);
+  return value;
+}
+
+function endTreatment(info: ProfileInfo, end: ProfileEnd, thread: string | undefined, cache: Nested<EndTreatment>): EndTreatment {
   const accessories = accessoriesAt(info, end);
-  const thread = tapThread(info);
   const word = endWord(info, end);
   let kind: EndTreatment['kind'] = 'plain';
   const foot = accessories.find((a) => a.kind === 'leveling-foot' || a.kind === 'caster');
   if (foot) kind = foot.kind === 'caster' ? 'caster' : 'foot';
   else if (info.profile.machining.some((m) => m.kind === 'end-tap' && m.fromEnd === end)) kind = 'tap';
   else if (accessories.some((a) => a.kind === 'end-cap')) kind = 'cap';
-  const key = `${kind}|${word}|${thread ?? ''}`;
-  let treatment = cache.get(key);
-  if (!treatment) {
-    treatment = describeEnd(kind, word, thread);
-    cache.set(key, treatment);
-  }
-  return treatment;
+  return cached(cache, [kind, word, thread ?? ''], () => describeEnd(kind, word, thread));
 }
 
 function describeEnd(kind: EndTreatment['kind'], word: string, thread: string | undefined): EndTreatment {
