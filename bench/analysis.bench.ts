@@ -1,15 +1,19 @@
 /**
  * Analysis speed on generated frames (quality.md): median analysis time at 500, 2,000 and 8,000
- * profiles, the per-profile scaling ratio 500 → 8,000, and the interference grid against the
- * all-pairs check at 2,000 profiles (same findings, speed-up). Wall time is the bar; CPU time of
- * this process is shown beside it because the shared machine is often busy.
+ * profiles (bars: < 50 ms at 2,000, < 60 ms at 8,000), the per-profile scaling ratio 500 → 8,000,
+ * and the interference grid against the all-pairs check at 2,000 profiles (same findings,
+ * speed-up). Wall time is the bar; CPU time of this process is shown beside it because a shared
+ * machine is often busy (CPU time counts the garbage collector's helper threads too).
  */
 import { analyzeDesign, createAnalysisContext } from '../src/domain/analysis/analyze';
 import { interferenceFindings, interferenceFindingsAllPairs } from '../src/domain/checks/interferenceFindings';
 import { largeFrame } from './largeFrame';
+import { pick } from './mode';
 import type { BenchRow } from './types';
 
 const BENCH = 'analysis';
+/** Median analysis time bars by profile count (quality bars: 2,000 profiles < 50 ms; 8,000 profiles < 60 ms). */
+const BARS_MS: Record<number, number> = { 2000: 50, 8000: 60 };
 
 function median(values: number[]): number {
   const s = [...values].sort((a, b) => a - b);
@@ -37,8 +41,8 @@ export async function run(): Promise<BenchRow[]> {
   const perProfile: Record<number, { wall: number; cpu: number }> = {};
   for (const size of [500, 2000, 8000]) {
     const design = largeFrame({ profiles: size, overlapEvery: 25 });
-    const runs = size >= 8000 ? 9 : 21;
-    const t = measure(() => analyzeDesign(design, undefined, { timings: false }), runs, size >= 8000 ? 2 : 5);
+    const runs = size >= 8000 ? pick(15, 5) : pick(21, 5);
+    const t = measure(() => analyzeDesign(design, undefined, { timings: false }), runs, size >= 8000 ? 3 : 5);
     const n = design.profiles.length;
     perProfile[size] = { wall: t.wall / n, cpu: t.cpu / n };
     if (size === 2000) {
@@ -51,9 +55,9 @@ export async function run(): Promise<BenchRow[]> {
       metric: `median analyzeDesign, ${n} profiles (wall)`,
       value: t.wall,
       unit: 'ms',
-      ...(size === 2000 ? { bar: '< 50 ms', pass: t.wall < 50 } : {}),
+      ...(BARS_MS[size] ? { bar: `< ${BARS_MS[size]} ms`, pass: t.wall < BARS_MS[size] } : {}),
     });
-    rows.push({ benchmark: BENCH, metric: `median analyzeDesign, ${n} profiles (process CPU)`, value: t.cpu, unit: 'ms', ...(size === 2000 ? { bar: '< 50 ms', pass: t.cpu < 50 } : {}) });
+    rows.push({ benchmark: BENCH, metric: `median analyzeDesign, ${n} profiles (process CPU)`, value: t.cpu, unit: 'ms', ...(BARS_MS[size] ? { bar: `< ${BARS_MS[size]} ms`, pass: t.cpu < BARS_MS[size] } : {}) });
     if (size === 2000) {
       // Stage breakdown from the analysis' own timings, median over runs.
       const stages: Record<string, number[]> = {};

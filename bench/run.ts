@@ -1,11 +1,20 @@
 /**
- * Runs every bench/*.bench.ts module (`export async function run(): Promise<BenchRow[]>`),
- * prints one table and writes bench/results/latest.json. `npm run bench [-- name-filter]`.
+ * Runs every bench/*.bench.ts module (`export async function run(): Promise<BenchRow[]>`) and
+ * prints one table with each figure beside its bar and pass/FAIL.
+ *
+ *   npm run bench                    every benchmark, full length; writes bench/results/latest.json
+ *   npm run bench -- server save     only the benchmarks whose file name contains a word given
+ *   npm run bench -- --quick         short runs for a smoke test (also BENCH_QUICK=1)
+ *
+ * Only a full, unfiltered run writes latest.json (the figures to quote); a quick or partial run
+ * writes bench/results/partial.json, which git ignores. Both record the date, Node, the CPU and
+ * the load average before and after, because a busy machine makes every figure worse.
  */
 import { mkdirSync, readdirSync, writeFileSync } from 'node:fs';
 import { dirname, join } from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import os from 'node:os';
+import { QUICK } from './mode';
 import type { BenchRow } from './types';
 
 const here = dirname(fileURLToPath(import.meta.url));
@@ -26,12 +35,24 @@ function printTable(rows: BenchRow[]): void {
   for (const c of cells) console.log(line(c));
 }
 
+function loadAverage(): number[] {
+  return os.loadavg().map((v) => Math.round(v * 100) / 100);
+}
+
 async function main(): Promise<void> {
-  const filter = process.argv[2];
+  const filters = process.argv.slice(2).filter((a) => !a.startsWith('--'));
+  const startedAt = new Date().toISOString();
+  const loadBefore = loadAverage();
+  const cores = os.cpus().length;
+  if (loadBefore[0] > cores) {
+    console.error(`note: load average ${loadBefore[0]} on ${cores} cores: the machine is busy, so these figures are worse than a quiet machine's.`);
+  }
+  if (QUICK) console.error('quick run: shortened benchmarks, for a smoke test only.');
   const files = readdirSync(here)
     .filter((f) => f.endsWith('.bench.ts'))
-    .filter((f) => !filter || f.includes(filter))
+    .filter((f) => filters.length === 0 || filters.some((word) => f.includes(word)))
     .sort();
+  if (files.length === 0) throw new Error(`no benchmark matches ${filters.join(', ')}`);
   const rows: BenchRow[] = [];
   const failures: string[] = [];
   for (const file of files) {
@@ -48,12 +69,35 @@ async function main(): Promise<void> {
     }
   }
   printTable(rows);
+  const held = rows.filter((r) => r.pass !== undefined);
+  const missed = held.filter((r) => !r.pass);
+  console.log(`\n${held.length - missed.length} of ${held.length} bars met${missed.length ? `; missed: ${missed.map((r) => `${r.benchmark} ${r.metric.trim()}`).join('; ')}` : ''}.`);
   for (const f of failures) console.error(`bench error: ${f}`);
+  const loadAfter = loadAverage();
+  const official = !QUICK && filters.length === 0;
+  const out = join(here, 'results', official ? 'latest.json' : 'partial.json');
   mkdirSync(join(here, 'results'), { recursive: true });
   writeFileSync(
-    join(here, 'results', 'latest.json'),
-    `${JSON.stringify({ date: new Date().toISOString(), node: process.version, cpus: os.cpus().length, loadAverage: os.loadavg(), rows }, null, 2)}\n`,
+    out,
+    `${JSON.stringify(
+      {
+        date: startedAt,
+        finished: new Date().toISOString(),
+        node: process.version,
+        cpus: cores,
+        cpuModel: os.cpus()[0]?.model ?? 'unknown',
+        // 1, 5 and 15-minute load averages when the run started and ended.
+        loadAverage: loadBefore,
+        loadAverageAtEnd: loadAfter,
+        quick: QUICK,
+        benchmarks: files,
+        rows,
+      },
+      null,
+      2,
+    )}\n`,
   );
+  console.error(`results: ${out.slice(here.length - 'bench'.length)} (load average ${loadBefore.join(' / ')} at the start, ${loadAfter.join(' / ')} at the end)`);
   if (failures.length > 0) process.exitCode = 1;
 }
 

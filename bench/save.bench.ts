@@ -15,10 +15,11 @@ import { runMigrations } from '../server/db/migrate';
 import { DEMO_ACCOUNTS, DEMO_PASSWORD, seedDemo } from '../server/seed';
 import { parseDesignDocument } from '../src/domain/design/parse';
 import { largeFrame } from './largeFrame';
+import { pick } from './mode';
 import type { BenchRow } from './types';
 
 const BENCH = 'save';
-const SAVES = 20;
+const SAVES = pick(20, 5);
 
 function percentile(values: number[], p: number): number {
   const s = [...values].sort((a, b) => a - b);

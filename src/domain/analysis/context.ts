@@ -97,7 +97,8 @@ export interface AnalysisContext {
   profileById: Map<string, ProfileInfo>;
   panels: PanelInfo[];
   panelById: Map<string, PanelInfo>;
-  jointById: Map<string, Joint>;
+  /** Joints by id, built on first use (few analyses need it). */
+  readonly jointById: Map<string, Joint>;
   /** Spatial index over `profiles[i].box`. */
   profileGrid: UniformGrid;
   /** Memo for results several checks and outputs share, keyed by name and part id. */
@@ -108,17 +109,14 @@ export function buildAnalysisContext(design: DesignDocument, catalogue: Catalogu
   const profiles: ProfileInfo[] = [];
   const profileById = new Map<string, ProfileInfo>();
   // Frames repeat a few directions and rolls, so profiles share one (read-only) SectionAxes per pair.
-  const axesByOrientation = new Map<string, SectionAxes>();
+  const orientations = new OrientationCache();
   for (let i = 0; i < design.profiles.length; i++) {
     const profile = design.profiles[i];
     const variant = catalogue.variants.get(profile.variantId);
     const system = variant ? catalogue.systems.get(variant.systemId) : undefined;
     const width = variant?.width ?? UNKNOWN_SECTION_MM;
     const height = variant?.height ?? UNKNOWN_SECTION_MM;
-    const d = profile.direction;
-    const orientation = `${exactText(d[0])},${exactText(d[1])},${exactText(d[2])},${exactText(profile.rollDeg)}`;
-    let axes = axesByOrientation.get(orientation);
-    if (!axes) axesByOrientation.set(orientation, (axes = sectionAxes(profile.direction, profile.rollDeg)));
+    const axes = orientations.axes(profile.direction, profile.rollDeg);
     const info: ProfileInfo = {
       index: i,
       profile,
@@ -140,9 +138,7 @@ export function buildAnalysisContext(design: DesignDocument, catalogue: Catalogu
     profileById.set(profile.id, info);
   }
 
-  const jointById = new Map<string, Joint>();
   for (const joint of design.joints) {
-    jointById.set(joint.id, joint);
     for (let k = 0; k < joint.members.length; k++) {
       const m = joint.members[k];
       const info = profileById.get(m.profileId);
@@ -172,6 +168,7 @@ export function buildAnalysisContext(design: DesignDocument, catalogue: Catalogu
   const boxes = new Array<Box>(profiles.length);
   for (let i = 0; i < profiles.length; i++) boxes[i] = profiles[i].box;
 
+  let jointById: Map<string, Joint> | undefined;
   return {
     design,
     catalogue,
@@ -180,10 +177,47 @@ export function buildAnalysisContext(design: DesignDocument, catalogue: Catalogu
     profileById,
     panels,
     panelById,
-    jointById,
+    get jointById(): Map<string, Joint> {
+      if (!jointById) {
+        jointById = new Map();
+        for (const joint of design.joints) jointById.set(joint.id, joint);
+      }
+      return jointById;
+    },
     profileGrid: new UniformGrid(boxes, { margin: CONTACT_TOLERANCE_MM }),
     memo: new Map(),
   };
+}
+
+/** Distinct orientations kept in a short list (compared by number) before falling back to a keyed map. */
+const ORIENTATION_LIST_MAX = 16;
+
+/**
+ * SectionAxes per (direction, roll), shared by every profile with exactly that orientation (−0 and
+ * 0 count as different, as a text key would). Frames have a handful of orientations, so a short
+ * list compared by number avoids building a key string per profile.
+ */
+class OrientationCache {
+  private readonly list: { d0: number; d1: number; d2: number; roll: number; axes: SectionAxes }[] = [];
+  private readonly byKey = new Map<string, SectionAxes>();
+
+  axes(direction: Profile['direction'], rollDeg: number): SectionAxes {
+    const d0 = direction[0];
+    const d1 = direction[1];
+    const d2 = direction[2];
+    for (const o of this.list) {
+      if (Object.is(o.d0, d0) && Object.is(o.d1, d1) && Object.is(o.d2, d2) && Object.is(o.roll, rollDeg)) return o.axes;
+    }
+    if (this.list.length < ORIENTATION_LIST_MAX) {
+      const axes = sectionAxes(direction, rollDeg);
+      this.list.push({ d0, d1, d2, roll: rollDeg, axes });
+      return axes;
+    }
+    const key = `${exactText(d0)},${exactText(d1)},${exactText(d2)},${exactText(rollDeg)}`;
+    let axes = this.byKey.get(key);
+    if (!axes) this.byKey.set(key, (axes = sectionAxes(direction, rollDeg)));
+    return axes;
+  }
 }
 
 /** A number as text that tells −0 from 0 (String(-0) is "0"), so cache keys stay exact. */

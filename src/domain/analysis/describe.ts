@@ -13,6 +13,8 @@ export function formatNumber(value: number, decimals = 1): string {
   const f = 10 ** decimals;
   const rounded = Math.round(value * f) / f;
   if (rounded === 0) return '0';
+  // Whole numbers below a thousand (most lengths and counts in messages) need no grouping or trimming.
+  if (rounded < 1000 && rounded > -1000 && Number.isInteger(rounded)) return String(rounded);
   const negative = rounded < 0;
   const [whole, fraction] = Math.abs(rounded).toFixed(decimals).split('.');
   const grouped = whole.replace(/\B(?=(\d{3})+(?!\d))/g, ',');

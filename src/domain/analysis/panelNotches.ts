@@ -1,14 +1,16 @@
 /** The corner notches of each panel in an analysis, worked out once per analysis (mm). */
-import { cornerNotches, type CornerJoint, type CornerNotches } from '../geometry/cornerNotches';
+import { NOTCHING_CONNECTOR_KINDS, cornerNotches, type CornerJoint, type CornerNotches } from '../geometry/cornerNotches';
 import type { AnalysisContext, PanelInfo } from './context';
 
 /** Corners of a captured panel where a connector sits in the slot, and the notch that clears it, mm. */
 export function panelCornerNotches(ctx: AnalysisContext, info: PanelInfo): CornerNotches {
-  const key = `cornerNotches|${info.panel.id}`;
-  const cached = ctx.memo.get(key) as CornerNotches | undefined;
+  // One memo entry holds every panel's result, by panel id (no key string per panel).
+  let byPanel = ctx.memo.get('cornerNotches') as Map<string, CornerNotches> | undefined;
+  if (!byPanel) ctx.memo.set('cornerNotches', (byPanel = new Map()));
+  const cached = byPanel.get(info.panel.id);
   if (cached) return cached;
   const result = computePanelCornerNotches(ctx, info);
-  ctx.memo.set(key, result);
+  byPanel.set(info.panel.id, result);
   return result;
 }
 
@@ -19,6 +21,9 @@ function computePanelCornerNotches(ctx: AnalysisContext, info: PanelInfo): Corne
   const joints: CornerJoint[] = [];
   for (const b of info.bounding) {
     for (const joint of b.joints) {
+      // Joints the rule would pass over anyway (not in a slot, or not between two frame profiles) are left out here.
+      if (!NOTCHING_CONNECTOR_KINDS.has(joint.kind) || joint.members.length < 2) continue;
+      if (!frame.has(joint.members[0].profileId) || !frame.has(joint.members[1].profileId)) continue;
       joints.push({
         id: joint.id,
         kind: joint.kind,

@@ -18,10 +18,9 @@ export function floorContact(ctx: AnalysisContext): { points: P2[]; kind: 'feet'
   const feet: P2[] = [];
   for (const p of ctx.profiles) {
     if (p.box.minY > floor + FLOOR_TOLERANCE_MM + Math.max(p.width, p.height)) continue;
-    for (const [point, accessories] of [
-      [p.startPoint, p.startAccessories],
-      [p.endPoint, p.endAccessories],
-    ] as const) {
+    for (let e = 0; e < 2; e++) {
+      const point = e === 0 ? p.startPoint : p.endPoint;
+      const accessories = e === 0 ? p.startAccessories : p.endAccessories;
       if (point[1] > floor + FLOOR_TOLERANCE_MM + Math.max(p.width, p.height) / 2) continue;
       if (accessories.some((a) => a.kind === 'leveling-foot' || a.kind === 'caster')) feet.push([point[0], point[2]]);
     }
@@ -69,8 +68,14 @@ export function convexHull(points: P2[]): P2[] {
  * edge: positive inside, negative outside. Null when nothing stands on the floor.
  */
 export function footprintLeverArm(ctx: AnalysisContext, centre: Vec3): { distance: number; edge: string; footprint: 'feet' | 'profiles' } | null {
-  const contact = floorContact(ctx);
-  const hull = convexHull(contact.points);
+  // The footprint is the same for the empty frame and every load case: found once per analysis.
+  let footprint = ctx.memo.get('footprint') as { contact: ReturnType<typeof floorContact>; hull: P2[] } | undefined;
+  if (!footprint) {
+    const contact = floorContact(ctx);
+    footprint = { contact, hull: convexHull(contact.points) };
+    ctx.memo.set('footprint', footprint);
+  }
+  const { contact, hull } = footprint;
   if (hull.length < 3) return null;
   const c: P2 = [centre[0], centre[2]];
   let best = Infinity;

@@ -1,7 +1,7 @@
 /** Small geometric questions the checks ask about profiles, mm. */
 import type { Box } from '../geometry/box';
 import { faceNormal, sectionHalfExtentAlong } from '../geometry/profileGeometry';
-import { addScaled, dot, sub, type ReadonlyVec3, type Vec3 } from '../geometry/vectors';
+import { addScaled, dot, type ReadonlyVec3, type Vec3 } from '../geometry/vectors';
 import type { AnalysisContext, ProfileInfo } from '../analysis/context';
 
 /** Distance from a point to a box (0 inside). */
@@ -14,7 +14,10 @@ export function distancePointToBox(p: ReadonlyVec3, b: Box): number {
 
 /** Where a point projects onto the profile's axis, mm from its start (clamped to the profile). */
 export function projectAlong(info: ProfileInfo, p: ReadonlyVec3): number {
-  const t = dot(sub(p, info.startPoint), info.profile.direction);
+  // dot(p − start, direction), written out so no vector is made per call.
+  const s = info.startPoint;
+  const d = info.profile.direction;
+  const t = (p[0] - s[0]) * d[0] + (p[1] - s[1]) * d[1] + (p[2] - s[2]) * d[2];
   return Math.min(Math.max(t, 0), info.profile.length);
 }
 

@@ -8,10 +8,10 @@ import type { Finding } from '../analysis/types';
 import type { Joint, Machining, ProfileEnd } from '../design/schema';
 import type { Connector, ConnectorMachining } from '../catalogue/types';
 import { sectionHalfExtentAlong } from '../geometry/profileGeometry';
-import { scale } from '../geometry/vectors';
+import { dot } from '../geometry/vectors';
 import { CONTACT_TOLERANCE_MM, accessoriesAt, areJoined, jointsAt, memberEnd, memberPoint, type AnalysisContext, type ProfileInfo } from '../analysis/context';
 import { capitalise, countOf, endPhrase, findingId, jointName, mm, profileName } from '../analysis/describe';
-import { distancePointToBox, faceFacing, firstProfileAtPoint, pointOffFace, projectAlong } from './geometryQueries';
+import { distancePointToBox, firstProfileAtPoint, pointOffFace, projectAlong } from './geometryQueries';
 import { addEndCapFix, addMachiningFix } from './fixes';
 
 const CHECK = 'joints';
@@ -27,20 +27,33 @@ const COVER_PROBE_MM = 1;
 const END_CLOSERS = new Set(['end-cap', 'leveling-foot', 'caster']);
 const SLOT_CONNECTOR_KINDS = new Set(['corner-bracket', 'gusset-plate', 'concealed-connector']);
 
+/** Per-analysis answers that depend only on the catalogue part, so each is worked out once. */
+interface JointCheckCache {
+  /** Screws a connector lists that the catalogue lacks. */
+  unknownScrews: Map<Connector, number>;
+  /** System id → T-nut kind → whether the catalogue has that T-nut. */
+  hasTNut: Map<string, Map<string, boolean>>;
+}
+
 export function jointFindings(ctx: AnalysisContext): Finding[] {
   const findings: Finding[] = [];
-  for (const joint of ctx.design.joints) checkJoint(ctx, joint, findings);
+  const cache: JointCheckCache = { unknownScrews: new Map(), hasTNut: new Map() };
+  for (const joint of ctx.design.joints) checkJoint(ctx, joint, findings, cache);
   checkProfileEnds(ctx, findings);
   checkSlotClaims(ctx, findings);
   checkAccessHolesUncovered(ctx, findings);
   return findings;
 }
 
-function checkJoint(ctx: AnalysisContext, joint: Joint, out: Finding[]): void {
-  const members = joint.members.map((m) => ctx.profileById.get(m.profileId));
-  const memberIds = joint.members.map((m) => m.profileId);
-  const missing = joint.members.filter((_, i) => !members[i]).map((m) => m.profileId);
-  if (missing.length > 0) {
+function checkJoint(ctx: AnalysisContext, joint: Joint, out: Finding[], cache: JointCheckCache): void {
+  const infos: ProfileInfo[] = [];
+  let missing: string[] | null = null;
+  for (const m of joint.members) {
+    const info = ctx.profileById.get(m.profileId);
+    if (info) infos.push(info);
+    else (missing ??= []).push(m.profileId);
+  }
+  if (missing) {
     out.push({
       id: findingId(CHECK, 'missing-member', [joint.id, ...missing]),
       check: CHECK,
@@ -50,14 +63,13 @@ function checkJoint(ctx: AnalysisContext, joint: Joint, out: Finding[]): void {
     });
     return;
   }
-  const infos = members as ProfileInfo[];
   const connector = ctx.catalogue.connectors.get(joint.connectorId);
   if (!connector) {
     out.push({
       id: findingId(CHECK, 'unknown-connector', [joint.id]),
       check: CHECK,
       severity: 'error',
-      partIds: [joint.id, ...memberIds],
+      partIds: [joint.id, ...memberIdsOf(joint)],
       message: `${capitalise(jointName(ctx, joint))} uses a connector that is not in the catalogue. Pick another connector.`,
     });
     return;
@@ -67,7 +79,7 @@ function checkJoint(ctx: AnalysisContext, joint: Joint, out: Finding[]): void {
       id: findingId(CHECK, 'kind-mismatch', [joint.id]),
       check: CHECK,
       severity: 'warning',
-      partIds: [joint.id, ...memberIds],
+      partIds: [joint.id, ...memberIdsOf(joint)],
       message: `${capitalise(jointName(ctx, joint))} is drawn as a ${joint.kind.replace(/-/g, ' ')} but its connector is a ${connector.name}.`,
     });
   }
@@ -85,7 +97,11 @@ function checkJoint(ctx: AnalysisContext, joint: Joint, out: Finding[]): void {
   }
   checkMembersMeet(joint, connector, infos, out);
   checkMachining(joint, connector, infos, out);
-  checkCounts(ctx, joint, connector, infos, out);
+  checkCounts(ctx, joint, connector, infos, out, cache);
+}
+
+function memberIdsOf(joint: Joint): string[] {
+  return joint.members.map((m) => m.profileId);
 }
 
 function checkMembersMeet(joint: Joint, connector: Connector, infos: ProfileInfo[], out: Finding[]): void {
@@ -173,7 +189,7 @@ const MACHINING_WORDS: Record<string, string> = {
   drill: 'drilled hole',
 };
 
-function checkCounts(ctx: AnalysisContext, joint: Joint, connector: Connector, infos: ProfileInfo[], out: Finding[]): void {
+function checkCounts(ctx: AnalysisContext, joint: Joint, connector: Connector, infos: ProfileInfo[], out: Finding[], cache: JointCheckCache): void {
   if (joint.quantity > MAX_CONNECTORS_PER_JOINT) {
     out.push({
       id: findingId(CHECK, 'too-many-connectors', [joint.id]),
@@ -183,19 +199,23 @@ function checkCounts(ctx: AnalysisContext, joint: Joint, connector: Connector, i
       message: `${capitalise(jointName(ctx, joint))} lists ${joint.quantity} ${connector.name}s; a profile has only four faces. Check the quantity.`,
     });
   }
-  const unknownScrews = connector.fasteners.filter((f) => !ctx.catalogue.fasteners.has(f.fastenerId));
-  if (unknownScrews.length > 0) {
+  let unknownScrews = cache.unknownScrews.get(connector);
+  if (unknownScrews === undefined) {
+    unknownScrews = connector.fasteners.filter((f) => !ctx.catalogue.fasteners.has(f.fastenerId)).length;
+    cache.unknownScrews.set(connector, unknownScrews);
+  }
+  if (unknownScrews > 0) {
     out.push({
       id: findingId(CHECK, 'unknown-fastener', [joint.id]),
       check: CHECK,
       severity: 'warning',
       partIds: [joint.id],
-      message: `The ${connector.name} in ${jointName(ctx, joint)} lists ${countOf(unknownScrews.length, 'screw')} the catalogue does not have; the bill of materials leaves them out.`,
+      message: `The ${connector.name} in ${jointName(ctx, joint)} lists ${countOf(unknownScrews, 'screw')} the catalogue does not have; the bill of materials leaves them out.`,
     });
   }
   if (connector.tNutCount > 0) {
     const systemId = (infos[1] ?? infos[0]).variant?.systemId;
-    if (systemId && !ctx.catalogue.tNutsBySystemKind.has(`${systemId}|${joint.tNut}`)) {
+    if (systemId && !hasTNut(ctx, cache, systemId, joint.tNut)) {
       out.push({
         id: findingId(CHECK, 'no-tnut', [joint.id]),
         check: CHECK,
@@ -207,14 +227,23 @@ function checkCounts(ctx: AnalysisContext, joint: Joint, connector: Connector, i
   }
 }
 
+/** Whether the catalogue has this T-nut for the system; one answer per system and kind, no key string per joint. */
+function hasTNut(ctx: AnalysisContext, cache: JointCheckCache, systemId: string, kind: string): boolean {
+  let bySystem = cache.hasTNut.get(systemId);
+  if (!bySystem) cache.hasTNut.set(systemId, (bySystem = new Map()));
+  let known = bySystem.get(kind);
+  if (known === undefined) bySystem.set(kind, (known = ctx.catalogue.tNutsBySystemKind.has(`${systemId}|${kind}`)));
+  return known;
+}
+
 function checkProfileEnds(ctx: AnalysisContext, out: Finding[]): void {
   for (const info of ctx.profiles) {
     for (const end of ['start', 'end'] as const) {
       if (jointsAt(info, end).length > 0) continue;
-      const closers = accessoriesAt(info, end).filter((a) => END_CLOSERS.has(a.kind));
-      if (closers.length > 0) {
+      const accessories = accessoriesAt(info, end);
+      if (accessories.some((a) => END_CLOSERS.has(a.kind))) {
         // A cap, foot or caster says the designer meant the end to be free.
-        checkThreadedEnd(info, end, closers, out);
+        checkThreadedEnd(info, end, accessories, out);
         continue;
       }
       const point = end === 'start' ? info.startPoint : info.endPoint;
@@ -243,9 +272,9 @@ function checkProfileEnds(ctx: AnalysisContext, out: Finding[]): void {
   }
 }
 
-/** Feet and casters thread into the centre bore: the end must be tapped. */
-function checkThreadedEnd(info: ProfileInfo, end: ProfileEnd, closers: { id: string; kind: string }[], out: Finding[]): void {
-  const threaded = closers.find((a) => a.kind === 'leveling-foot' || a.kind === 'caster');
+/** Feet and casters thread into the centre bore: the end must be tapped. `accessories`: those at the end. */
+function checkThreadedEnd(info: ProfileInfo, end: ProfileEnd, accessories: readonly { id: string; kind: string }[], out: Finding[]): void {
+  const threaded = accessories.find((a) => a.kind === 'leveling-foot' || a.kind === 'caster');
   if (!threaded) return;
   if (info.profile.machining.some((m) => m.kind === 'end-tap' && m.fromEnd === end)) return;
   const word = threaded.kind === 'caster' ? 'caster' : 'leveling foot';
@@ -268,7 +297,8 @@ interface SlotClaim {
 }
 
 function checkSlotClaims(ctx: AnalysisContext, out: Finding[]): void {
-  const claims = new Map<string, SlotClaim[]>();
+  // Keyed by met profile index × 4 + face: a number, not a string per joint.
+  const claims = new Map<number, SlotClaim[]>();
   for (const joint of ctx.design.joints) {
     if (!SLOT_CONNECTOR_KINDS.has(joint.kind) || joint.members.length !== 2) continue;
     const connector = ctx.catalogue.connectors.get(joint.connectorId);
@@ -277,23 +307,31 @@ function checkSlotClaims(ctx: AnalysisContext, out: Finding[]): void {
     if (!connector || !joined || !met) continue;
     const end = memberEnd(joint.members[0], joined);
     if (!end) continue;
-    // The joined profile leaves the met profile along its own axis, away from the joined end.
-    const away = end === 'start' ? joined.profile.direction : scale(joined.profile.direction, -1);
-    const { face, cosine } = faceFacing(met, away);
+    // The joined profile leaves the met profile along its own axis, away from the joined end. The
+    // face it meets is the one facing that way (as `faceFacing`, without a vector per joint:
+    // negating the direction negates each dot product exactly).
+    const d = joined.profile.direction;
+    const sign = end === 'start' ? 1 : -1;
+    const cu = sign * dot(met.axes.u, d);
+    const cv = sign * dot(met.axes.v, d);
+    const face = Math.abs(cu) >= Math.abs(cv) ? (cu >= 0 ? 0 : 2) : cv >= 0 ? 1 : 3;
+    const cosine = face === 0 ? cu : face === 2 ? -cu : face === 1 ? cv : -cv;
     if (cosine < 0.7) continue;
     const centre = projectAlong(met, memberPoint(joined, joint.members[0]));
     const exact = joint.kind === 'concealed-connector';
     const footprint = sectionHalfExtentAlong(joined.axes, joined.width, joined.height, met.profile.direction);
     const half = exact ? connector.occupiedSlotLength / 2 : footprint + connector.occupiedSlotLength;
-    const key = `${met.profile.id}|${face}`;
-    const list = claims.get(key) ?? [];
-    list.push({ joint, connector, lo: Math.max(0, centre - half), hi: Math.min(met.profile.length, centre + half), exact });
-    claims.set(key, list);
+    const key = met.index * 4 + face;
+    const claim = { joint, connector, lo: Math.max(0, centre - half), hi: Math.min(met.profile.length, centre + half), exact };
+    const list = claims.get(key);
+    if (list) list.push(claim);
+    else claims.set(key, [claim]);
   }
   for (const [key, list] of claims) {
     if (list.length < 2) continue;
-    list.sort((a, b) => a.lo - b.lo);
-    const [metId, faceText] = key.split('|');
+    sortByLo(list);
+    const metId = ctx.profiles[key >> 2].profile.id;
+    const faceText = String(key & 3);
     let reach = list[0];
     for (let i = 1; i < list.length; i++) {
       const c = list[i];
@@ -310,6 +348,22 @@ function checkSlotClaims(ctx: AnalysisContext, out: Finding[]): void {
       }
       if (c.hi > reach.hi) reach = c;
     }
+  }
+}
+
+/**
+ * Sorts claims by `lo`, keeping the order of equal ones (as the stable `Array.prototype.sort`
+ * would). Lists are a handful of claims per slot face; insertion sort makes no work copy per list.
+ */
+function sortByLo(list: SlotClaim[]): void {
+  for (let i = 1; i < list.length; i++) {
+    const claim = list[i];
+    let j = i - 1;
+    while (j >= 0 && list[j].lo - claim.lo > 0) {
+      list[j + 1] = list[j];
+      j--;
+    }
+    list[j + 1] = claim;
   }
 }
 

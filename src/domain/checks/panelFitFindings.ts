@@ -75,18 +75,24 @@ export function thickestFittingSheet(info: PanelInfo, slotOpening: number): numb
 function checkThickness(ctx: AnalysisContext, info: PanelInfo, out: Finding[]): void {
   const { panel, slotOpening } = info;
   if (slotOpening === null) return;
-  const materialName = info.material?.name.toLowerCase() ?? panel.materialId;
-  const systemName = info.bounding[0].system?.name ?? ctx.design.systemId;
-  const fits = thickestFittingSheet(info, slotOpening);
-  const fix = fits !== undefined ? setPanelThicknessFix(panel.id, fits) : undefined;
-  const instead = fits !== undefined ? ` Use ${formatNumber(fits)} mm sheet, which fits even at the top of its tolerance, or mount the panel on a face.` : ' Mount it on a face instead.';
+  // Names, the fitting sheet and its fix are only worked out for a panel that gets a finding.
+  const materialName = () => info.material?.name.toLowerCase() ?? panel.materialId;
+  const systemName = () => info.bounding[0].system?.name ?? ctx.design.systemId;
+  const remedy = () => {
+    const fits = thickestFittingSheet(info, slotOpening);
+    return {
+      fix: fits !== undefined ? setPanelThicknessFix(panel.id, fits) : undefined,
+      instead: fits !== undefined ? ` Use ${formatNumber(fits)} mm sheet, which fits even at the top of its tolerance, or mount the panel on a face.` : ' Mount it on a face instead.',
+    };
+  };
   if (panel.thickness > slotOpening) {
+    const { fix, instead } = remedy();
     out.push({
       id: findingId(CHECK, 'too-thick', [panel.id]),
       check: CHECK,
       severity: 'error',
       partIds: [panel.id, ...info.bounding.map((b) => b.profile.id)],
-      message: `${formatNumber(panel.thickness)} mm ${materialName} is thicker than the ${formatNumber(slotOpening)} mm slot opening of the ${systemName} profiles around ${panelName(panel)}; it will not go into the slot.${instead}`,
+      message: `${formatNumber(panel.thickness)} mm ${materialName()} is thicker than the ${formatNumber(slotOpening)} mm slot opening of the ${systemName()} profiles around ${panelName(panel)}; it will not go into the slot.${instead}`,
       ...(fix ? { fix } : {}),
       data: { thicknessMm: panel.thickness, slotOpeningMm: slotOpening },
     });
@@ -94,12 +100,13 @@ function checkThickness(ctx: AnalysisContext, info: PanelInfo, out: Finding[]): 
   }
   const tolerance = info.material ? sheetThicknessTolerance(info.material, panel.thickness) : 0;
   if (panel.thickness + tolerance > slotOpening) {
+    const { fix, instead } = remedy();
     out.push({
       id: findingId(CHECK, 'no-clearance', [panel.id]),
       check: CHECK,
       severity: 'warning',
       partIds: [panel.id, ...info.bounding.map((b) => b.profile.id)],
-      message: `${formatNumber(panel.thickness)} mm ${materialName} may be up to ${formatNumber(panel.thickness + tolerance, 2)} mm thick (tolerance ±${formatNumber(tolerance, 2)} mm; ${info.material?.thicknessTolerance.source ?? 'no source'}), more than the ${formatNumber(slotOpening)} mm slot opening of the ${systemName} profiles around ${panelName(panel)}: it may not go into the slot.${instead}`,
+      message: `${formatNumber(panel.thickness)} mm ${materialName()} may be up to ${formatNumber(panel.thickness + tolerance, 2)} mm thick (tolerance ±${formatNumber(tolerance, 2)} mm; ${info.material?.thicknessTolerance.source ?? 'no source'}), more than the ${formatNumber(slotOpening)} mm slot opening of the ${systemName()} profiles around ${panelName(panel)}: it may not go into the slot.${instead}`,
       ...(fix ? { fix } : {}),
       data: { thicknessMm: panel.thickness, toleranceMm: round(tolerance), slotOpeningMm: slotOpening },
     });
@@ -115,7 +122,7 @@ function checkThickness(ctx: AnalysisContext, info: PanelInfo, out: Finding[]): 
       check: CHECK,
       severity: 'warning',
       partIds: [panel.id],
-      message: `${formatNumber(panel.thickness)} mm ${materialName} is much thinner than the ${formatNumber(slotOpening)} mm slot and will rattle: ${panelName(panel)} needs a gasket or retainer strip, ${formatNumber(gasketLength / 1000, 2)} m for its four edges.`,
+      message: `${formatNumber(panel.thickness)} mm ${materialName()} is much thinner than the ${formatNumber(slotOpening)} mm slot and will rattle: ${panelName(panel)} needs a gasket or retainer strip, ${formatNumber(gasketLength / 1000, 2)} m for its four edges.`,
       ...(fix ? { fix } : {}),
       data: { thicknessMm: panel.thickness, slotOpeningMm: slotOpening, gasketLengthMm: gasketLength },
     });
@@ -130,9 +137,14 @@ function checkThickness(ctx: AnalysisContext, info: PanelInfo, out: Finding[]): 
 function checkThermal(ctx: AnalysisContext, info: PanelInfo, out: Finding[]): void {
   const material = info.material;
   if (!material) return;
-  const systems = info.bounding.map((b) => b.system).filter((x): x is NonNullable<typeof x> => !!x);
-  if (systems.length === 0) return;
-  const room = Math.min(...systems.map((x) => x.slotDepth - x.slotEngagement));
+  let room = Infinity;
+  let systems = 0;
+  for (const b of info.bounding) {
+    if (!b.system) continue;
+    systems += 1;
+    room = Math.min(room, b.system.slotDepth - b.system.slotEngagement);
+  }
+  if (systems === 0) return;
   const play = ctx.design.settings.panelClearance + 2 * Math.max(0, room);
   const length = Math.max(info.sheetWidth, info.sheetHeight);
   const growth = Math.abs(material.thermalExpansion - FRAME_EXPANSION) * length * PANEL_TEMPERATURE_SWING_K;
@@ -175,13 +187,13 @@ export function frameOpening(info: PanelInfo): { width: number; height: number; 
 function checkOpening(info: PanelInfo, out: Finding[]): void {
   const opening = frameOpening(info);
   const { panel } = info;
-  const ids = [panel.id, ...info.bounding.map((b) => b.profile.id)];
+  const ids = () => [panel.id, ...info.bounding.map((b) => b.profile.id)];
   if (!opening) {
     out.push({
       id: findingId(CHECK, 'frame-not-rectangle', [panel.id]),
       check: CHECK,
       severity: 'error',
-      partIds: ids,
+      partIds: ids(),
       message: `The four profiles named around ${panelName(panel)} do not form a rectangle in the panel's plane.`,
     });
     return;
@@ -191,7 +203,7 @@ function checkOpening(info: PanelInfo, out: Finding[]): void {
       id: findingId(CHECK, 'off-slot-plane', [panel.id]),
       check: CHECK,
       severity: 'error',
-      partIds: ids,
+      partIds: ids(),
       message: `${capitalise(panelName(panel))} is ${mm(opening.offPlane)} out of line with the slots of its frame; a captured panel sits in the slot centre.`,
       data: { offsetMm: round(opening.offPlane) },
     });
@@ -203,7 +215,7 @@ function checkOpening(info: PanelInfo, out: Finding[]): void {
       id: findingId(CHECK, 'opening-mismatch', [panel.id]),
       check: CHECK,
       severity: 'warning',
-      partIds: ids,
+      partIds: ids(),
       message: `${capitalise(panelName(panel))} is drawn ${formatNumber(panel.rect.width)} × ${formatNumber(panel.rect.height)} mm, but its frame's clear opening is ${formatNumber(opening.width)} × ${formatNumber(opening.height)} mm. Resize the panel to the opening.`,
       data: { openingWidthMm: round(opening.width), openingHeightMm: round(opening.height) },
     });

@@ -14,9 +14,10 @@ export function billOfMaterials(ctx: AnalysisContext, hardware: HardwareSummary,
   const lines = new Map<string, BomLine>();
   const prices = ctx.catalogue.catalogue.prices;
 
+  const profileLines = new Map<string, BomLine>();
   for (const info of ctx.profiles) {
     const id = info.profile.variantId;
-    let line = lines.get(`profile|${id}`);
+    let line = profileLines.get(id);
     if (!line) {
       const v = info.variant;
       line = {
@@ -33,6 +34,7 @@ export function billOfMaterials(ctx: AnalysisContext, hardware: HardwareSummary,
         partIds: [],
       };
       lines.set(`profile|${id}`, line);
+      profileLines.set(id, line);
     }
     line.quantity += info.profile.length / 1000;
     line.pieces = (line.pieces ?? 0) + 1;

@@ -20,34 +20,26 @@ export function cutList(ctx: AnalysisContext): { items: CutListItem[]; groups: C
   const tolerance = ctx.design.settings.cutTolerance;
   const items: CutListItem[] = [];
   const groups = new Map<string, CutListGroup>();
+  // Frames repeat a few kinds of piece: end treatments (read-only, shared by the items and groups
+  // that have them) and the group key's head are made once per kind, not once per profile.
+  // Caches are nested maps keyed by the parts themselves, so no key string is built per profile.
+  const treatments: Nested<EndTreatment> = new Map();
+  const keyHeads: Nested<string> = new Map();
+  const threads = new Map<ProfileInfo['system'], string | undefined>();
   for (const info of ctx.profiles) {
-    const ends = { start: endTreatment(ctx, info, 'start'), end: endTreatment(ctx, info, 'end') };
-    const machining = info.profile.machining
-      .map((m): CutMachiningOperation => ({
-        id: m.id,
-        kind: m.kind,
-        fromEnd: m.fromEnd,
-        offset: m.offset,
-        face: m.face,
-        diameter: m.diameter ?? null,
-        description:
-          m.kind === 'end-tap'
-            ? `${MACHINING_NAMES[m.kind]}${tapThread(info) ? ` ${tapThread(info)}` : ''} in the ${endWord(info, m.fromEnd)} end`
-            : `${MACHINING_NAMES[m.kind]}${m.diameter ? ` Ø ${formatNumber(m.diameter)} mm` : ''} on face ${m.face}, ${formatNumber(m.offset)} mm from the ${endWord(info, m.fromEnd)} end`,
-      }))
-      .sort((a, b) => (a.fromEnd === b.fromEnd ? a.offset - b.offset : a.fromEnd === 'start' ? -1 : 1));
-    const groupKey = [
-      info.profile.variantId,
-      info.profile.length.toFixed(1),
-      ends.start.kind,
-      ends.end.kind,
-      ...machining.map((m) => `${m.kind}/${m.fromEnd}/${m.offset.toFixed(1)}/${m.face}/${m.diameter ?? ''}`),
-    ].join('|');
+    let thread = threads.get(info.system);
+    if (thread === undefined && !threads.has(info.system)) threads.set(info.system, (thread = tapThread(info)));
+    const ends = { start: endTreatment(info, 'start', thread, treatments), end: endTreatment(info, 'end', thread, treatments) };
+    const machining = info.profile.machining.length === 0 ? [] : machiningOperations(info, thread);
+    const { variantId, length } = info.profile;
+    const head = cached(keyHeads, [variantId, length, ends.start.kind, ends.end.kind], () => [variantId, length.toFixed(1), ends.start.kind, ends.end.kind].join('|'));
+    let groupKey = head;
+    for (const m of machining) groupKey += `|${m.kind}/${m.fromEnd}/${m.offset.toFixed(1)}/${m.face}/${m.diameter ?? ''}`;
     items.push({
       id: info.profile.id,
       label: info.profile.label ?? info.profile.id,
-      variantId: info.profile.variantId,
-      length: info.profile.length,
+      variantId,
+      length,
       tolerance,
       ends,
       machining,
@@ -60,8 +52,8 @@ export function cutList(ctx: AnalysisContext): { items: CutListItem[]; groups: C
     } else {
       groups.set(groupKey, {
         groupKey,
-        variantId: info.profile.variantId,
-        length: info.profile.length,
+        variantId,
+        length,
         tolerance,
         quantity: 1,
         profileIds: [info.profile.id],
@@ -74,26 +66,65 @@ export function cutList(ctx: AnalysisContext): { items: CutListItem[]; groups: C
   return { items, groups: sortedGroups };
 }
 
+function machiningOperations(info: ProfileInfo, thread: string | undefined): CutMachiningOperation[] {
+  return info.profile.machining
+    .map((m): CutMachiningOperation => ({
+      id: m.id,
+      kind: m.kind,
+      fromEnd: m.fromEnd,
+      offset: m.offset,
+      face: m.face,
+      diameter: m.diameter ?? null,
+      description:
+        m.kind === 'end-tap'
+          ? `${MACHINING_NAMES[m.kind]}${thread ? ` ${thread}` : ''} in the ${endWord(info, m.fromEnd)} end`
+          : `${MACHINING_NAMES[m.kind]}${m.diameter ? ` Ø ${formatNumber(m.diameter)} mm` : ''} on face ${m.face}, ${formatNumber(m.offset)} mm from the ${endWord(info, m.fromEnd)} end`,
+    }))
+    .sort((a, b) => (a.fromEnd === b.fromEnd ? a.offset - b.offset : a.fromEnd === 'start' ? -1 : 1));
+}
+
 function tapThread(info: ProfileInfo): string | undefined {
   const size = info.system?.endTapSize;
   return size ? threadFor(size as ScrewSize).designation : undefined;
 }
 
-function endTreatment(ctx: AnalysisContext, info: ProfileInfo, end: ProfileEnd): EndTreatment {
+/** Values under a path of keys (strings and numbers), for caches without key strings. */
+type Nested<T> = Map<string | number, Nested<T> | T>;
+
+function cached<T>(root: Nested<T>, path: readonly (string | number)[], make: () => T): T {
+  let map = root;
+  for (let i = 0; i < path.length - 1; i++) {
+    let next = map.get(path[i]) as Nested<T> | undefined;
+    if (!next) map.set(path[i], (next = new Map()));
+    map = next;
+  }
+  const last = path[path.length - 1];
+  if (map.has(last)) return map.get(last) as T;
+  const value = make();
+  map.set(last, value);
+  return value;
+}
+
+function endTreatment(info: ProfileInfo, end: ProfileEnd, thread: string | undefined, cache: Nested<EndTreatment>): EndTreatment {
   const accessories = accessoriesAt(info, end);
-  const thread = tapThread(info);
   const word = endWord(info, end);
+  let kind: EndTreatment['kind'] = 'plain';
   const foot = accessories.find((a) => a.kind === 'leveling-foot' || a.kind === 'caster');
-  if (foot) {
-    const kind = foot.kind === 'caster' ? 'caster' : 'foot';
+  if (foot) kind = foot.kind === 'caster' ? 'caster' : 'foot';
+  else if (info.profile.machining.some((m) => m.kind === 'end-tap' && m.fromEnd === end)) kind = 'tap';
+  else if (accessories.some((a) => a.kind === 'end-cap')) kind = 'cap';
+  return cached(cache, [kind, word, thread ?? ''], () => describeEnd(kind, word, thread));
+}
+
+function describeEnd(kind: EndTreatment['kind'], word: string, thread: string | undefined): EndTreatment {
+  if (kind === 'foot' || kind === 'caster') {
     return {
       kind,
       ...(thread ? { thread } : {}),
       description: `Tap ${thread ?? 'the centre bore'} in the ${word} end for a ${kind === 'caster' ? 'caster' : 'leveling foot'}`,
     };
   }
-  const tapped = info.profile.machining.some((m) => m.kind === 'end-tap' && m.fromEnd === end);
-  if (tapped) return { kind: 'tap', ...(thread ? { thread } : {}), description: `Tap ${thread ?? 'the centre bore'} in the ${word} end` };
-  if (accessories.some((a) => a.kind === 'end-cap')) return { kind: 'cap', description: `End cap on the ${word} end` };
+  if (kind === 'tap') return { kind: 'tap', ...(thread ? { thread } : {}), description: `Tap ${thread ?? 'the centre bore'} in the ${word} end` };
+  if (kind === 'cap') return { kind: 'cap', description: `End cap on the ${word} end` };
   return { kind: 'plain', description: `Square cut, deburred` };
 }

@@ -80,6 +80,14 @@ interface PackingProblem {
   kerf: number;
   placeable: StockCut[];
   unplaceable: StockCut[];
+  /** `placeable`, longest first (ties by id), made on first use: FFD, BFD, the exact search and the grouping share it. */
+  sorted?: StockCut[];
+}
+
+/** The placeable cuts longest first; sorted once per problem. Callers must not change the list. */
+function sortedCuts(problem: PackingProblem): StockCut[] {
+  if (!problem.sorted) problem.sorted = [...problem.placeable].sort(byLengthDescending);
+  return problem.sorted;
 }
 
 function preparePacking(input: StockPlanInput): PackingProblem {
@@ -117,7 +125,7 @@ function toStockBars(groups: StockCut[][], problem: PackingProblem, minReusableO
 function fitDecreasing(problem: PackingProblem, rule: 'first' | 'best'): StockCut[][] {
   const groups: StockCut[][] = [];
   const loads: number[] = [];
-  const sorted = [...problem.placeable].sort(byLengthDescending);
+  const sorted = sortedCuts(problem);
   const limit = problem.capacity + LENGTH_TOLERANCE;
   // Sizes only shrink, so a bar that cannot take the smallest cut never takes another: drop it from
   // `open` (bar indices, ascending). Same bars, same order, same choices as scanning every bar.
@@ -178,7 +186,7 @@ function lowerBoundOf(problem: PackingProblem): number {
 
 
 function exactSearch(problem: PackingProblem, lowerBound: number, upperBound: number): StockCut[][] | null {
-  const sorted = [...problem.placeable].sort(byLengthDescending);
+  const sorted = sortedCuts(problem);
   const sizes = sorted.map((cut) => cut.length + problem.kerf);
   for (let barCount = lowerBound; barCount < upperBound; barCount++) {
     const { bins, complete } = packIntoBars(sizes, problem.capacity, barCount, EXACT_SEARCH_NODE_LIMIT);
@@ -212,7 +220,7 @@ interface CuttingTypes {
 }
 
 function groupByLength(problem: PackingProblem): CuttingTypes {
-  const sorted = [...problem.placeable].sort(byLengthDescending);
+  const sorted = sortedCuts(problem);
   const lengths: number[] = [];
   const cutsByType: StockCut[][] = [];
   for (const cut of sorted) {
@@ -242,7 +250,7 @@ function patternsToGroups(patterns: number[][], types: CuttingTypes, problem: Pa
     return group;
   });
   const leftover = queues.flat();
-  if (leftover.length > 0) groups.push(...packSmallSet({ ...problem, placeable: leftover }, enoughBars - groups.length));
+  if (leftover.length > 0) groups.push(...packSmallSet({ ...problem, placeable: leftover, sorted: undefined }, enoughBars - groups.length));
   return groups;
 }
 

@@ -37,6 +37,21 @@ export function shareLegLoads(legs: LegPosition[], loads: PlanLoad[]): number[] 
   const out = legs.map(() => 0);
   if (legs.length === 0) return out;
   const rect = rectangleCorners(legs);
+  const n = legs.length;
+  // The legs' centroid and spread do not depend on the load: worked out once, in the same order.
+  let cx = 0;
+  let cz = 0;
+  let sxx = 0;
+  let szz = 0;
+  if (!rect) {
+    for (const l of legs) cx += l.x;
+    cx /= n;
+    for (const l of legs) cz += l.z;
+    cz /= n;
+    for (const l of legs) sxx += (l.x - cx) ** 2;
+    for (const l of legs) szz += (l.z - cz) ** 2;
+  }
+  const shares = new Array<number>(n);
   for (const load of loads) {
     if (!(load.force > 0)) continue;
     if (rect) {
@@ -51,19 +66,16 @@ export function shareLegLoads(legs: LegPosition[], loads: PlanLoad[]): number[] 
       });
       continue;
     }
-    const n = legs.length;
-    const cx = legs.reduce((s, l) => s + l.x, 0) / n;
-    const cz = legs.reduce((s, l) => s + l.z, 0) / n;
-    const sxx = legs.reduce((s, l) => s + (l.x - cx) ** 2, 0);
-    const szz = legs.reduce((s, l) => s + (l.z - cz) ** 2, 0);
-    const shares = legs.map((l) => {
+    let total = 0;
+    for (let i = 0; i < n; i++) {
+      const l = legs[i];
       let r = 1 / n;
       if (sxx > 0) r += ((load.x - cx) * (l.x - cx)) / sxx;
       if (szz > 0) r += ((load.z - cz) * (l.z - cz)) / szz;
-      return Math.max(0, r);
-    });
-    const total = shares.reduce((s, r) => s + r, 0);
-    shares.forEach((r, i) => (out[i] += total > 0 ? (load.force * r) / total : load.force / n));
+      shares[i] = Math.max(0, r);
+      total += shares[i];
+    }
+    for (let i = 0; i < n; i++) out[i] += total > 0 ? (load.force * shares[i]) / total : load.force / n;
   }
   return out;
 }
