@@ -13,6 +13,7 @@ import { designFootprint } from './footprint';
 import { renderModeFromUrl } from './renderMode';
 import { HighlightContext, PartClickContext, SceneContext, type SceneShared } from './sceneContext';
 import { SceneLights } from './SceneLights';
+import { isSoftwareRenderer } from './softwareRenderer';
 import { SceneResources } from './sceneResources';
 import { SceneTestHook } from './SceneTestHook';
 import { UnitGrid } from './UnitGrid';
@@ -102,7 +103,8 @@ export function DesignViewer({
   }));
   useEffect(() => () => shared.resources.dispose(), [shared]);
 
-  const gl = useMemo(() => ({ antialias: true, preserveDrawingBuffer: false, powerPreference: 'high-performance' as const }), []);
+  // Software WebGL (no GPU) draws without multisampling: it costs seconds on the first frame there.
+  const gl = useMemo(() => ({ antialias: !isSoftwareRenderer(), preserveDrawingBuffer: false, powerPreference: 'high-performance' as const }), []);
   const emptySelection = useRef<readonly string[]>([]).current;
   const highlight = useMemo<PartHighlight>(() => ({ selection: selection ?? emptySelection, hoveredId, analysis }), [selection, emptySelection, hoveredId, analysis]);
   const footprint = useMemo(() => designFootprint(design), [design]);

@@ -1,5 +1,6 @@
 import { useEffect, useMemo, useState } from 'react';
 import { ContactShadows } from '@react-three/drei';
+import { isSoftwareRenderer } from './softwareRenderer';
 import { useThree } from '@react-three/fiber';
 import type { DesignDocument } from '@/domain/design/schema';
 import { designFootprint } from './footprint';
@@ -38,7 +39,7 @@ export function SceneLights({ design, contactShadow = true }: SceneLightsProps) 
           frames={1}
           position={[(fp.minX + fp.maxX) / 2, 0.5, (fp.minZ + fp.maxZ) / 2]}
           scale={span}
-          resolution={512}
+          resolution={isSoftwareRenderer() ? 256 : 512}
           far={Math.min(height, 1200)}
           blur={2.2}
           opacity={0.55}
