@@ -5,7 +5,6 @@
  * time ratio. Needs a built client (CLIENT_DIST, default dist/); starts its own server on a
  * throw-away database in the system temp folder.
  */
-import { spawn, type ChildProcess } from 'node:child_process';
 import { rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -13,50 +12,13 @@ import { chromium, type Page } from '@playwright/test';
 import playwrightConfig from '../e2e/playwright.config';
 import { largeFrame } from './largeFrame';
 import type { BenchRow } from './types';
+import { startDemoServer, stopServer } from './demoServer';
 
 const BENCH = 'render';
 const PORT = Number(process.env.RENDER_BENCH_PORT ?? 4331);
 const BASE = `http://127.0.0.1:${PORT}`;
 const DESIGNER = { email: 'designer@harborlane.example', password: 'slotwise-demo-2026' };
 const FRAMES = 15;
-
-async function startServer(dbFile: string): Promise<ChildProcess> {
-  const server = spawn('npx', ['tsx', 'server/index.ts'], {
-    cwd: join(import.meta.dirname, '..'),
-    env: {
-      ...process.env,
-      NODE_ENV: 'production',
-      PORT: String(PORT),
-      DATABASE_PATH: dbFile,
-      SESSION_SECRET: 'render-bench-session-secret-not-for-production-0123',
-      CLIENT_DIST: process.env.CLIENT_DIST ?? 'dist',
-    },
-    stdio: 'ignore',
-    detached: true,
-  });
-  const deadline = Date.now() + 120_000;
-  while (Date.now() < deadline) {
-    try {
-      if ((await fetch(`${BASE}/api/health`)).ok) return server;
-    } catch {
-      // not listening yet
-    }
-    await new Promise((r) => setTimeout(r, 500));
-  }
-  stopServer(server);
-  throw new Error('The render benchmark server did not start within 120 s.');
-}
-
-function stopServer(server: ChildProcess): void {
-  // The server runs under npx in its own process group; end that group only.
-  if (server.pid) {
-    try {
-      process.kill(-server.pid, 'SIGTERM');
-    } catch {
-      // already gone
-    }
-  }
-}
 
 async function measure(page: Page, path: string, profiles: number): Promise<{ calls: number; frameMs: number; triangles: number }> {
   await page.goto(`${BASE}${path}`);
@@ -70,7 +32,7 @@ async function measure(page: Page, path: string, profiles: number): Promise<{ ca
 
 export async function run(): Promise<BenchRow[]> {
   const dbFile = join(tmpdir(), `slotwise-render-bench-${process.pid}-${Date.now()}.sqlite`);
-  const server = await startServer(dbFile);
+  const server = await startDemoServer({ port: PORT, dbFile, name: 'render' });
   const launchArgs = (playwrightConfig.use?.launchOptions?.args ?? []) as string[];
   const browser = await chromium.launch({ executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium', args: launchArgs });
   try {
