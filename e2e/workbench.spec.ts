@@ -76,7 +76,15 @@ test.describe.serial('the builder’s workbench', () => {
     expect(thirdTitle).not.toBe('');
     await expect(builder.getByTestId('step-title')).toHaveText(thirdTitle);
 
-    // Swipe back on the picture.
+    // Dragging the picture turns the view and keeps the step.
+    const picture = await builder.getByTestId('step-picture').boundingBox();
+    await builder.mouse.move(picture!.x + picture!.width * 0.3, picture!.y + picture!.height / 2);
+    await builder.mouse.down();
+    await builder.mouse.move(picture!.x + picture!.width * 0.8, picture!.y + picture!.height / 2, { steps: 5 });
+    await builder.mouse.up();
+    await expect(builder.getByTestId('step-position')).toContainText('Step 3 of 15');
+
+    // Swipe back across the step's details.
     const area = await builder.getByTestId('step-swipe-area').boundingBox();
     await builder.mouse.move(area!.x + area!.width * 0.3, area!.y + area!.height / 2);
     await builder.mouse.down();

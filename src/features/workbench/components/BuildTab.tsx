@@ -20,7 +20,7 @@ export interface BuildTabProps {
   canTick: boolean;
 }
 
-/** Step-through: the step in the shared exploded-view player, what the step needs, tick it off; swipe or the big buttons move between steps. */
+/** Step-through: the step in the shared exploded-view player, what the step needs, tick it off; swipe across the step's details or the big buttons move between steps; dragging the picture turns it. */
 export function BuildTab({ design, steps, sequenceSteps, index, onIndex, progress, canTick }: BuildTabProps) {
   const step = steps[index];
   const swipeStart = useRef<{ x: number; y: number } | null>(null);
@@ -38,8 +38,12 @@ export function BuildTab({ design, steps, sequenceSteps, index, onIndex, progres
         if (event.key === 'ArrowLeft') go(index - 1);
       }}
     >
+      <div className="h-[45vh] min-h-64 select-none landscape:md:h-[60vh]" data-testid="step-picture">
+        <StepView design={design} steps={sequenceSteps} index={index} />
+      </div>
+      {/* Swipes belong to the step's details: on the picture a drag turns the view. */}
       <div
-        className="h-[45vh] min-h-64 select-none landscape:md:h-[60vh]"
+        className="flex touch-pan-y flex-col gap-4"
         data-testid="step-swipe-area"
         onPointerDown={(event) => (swipeStart.current = { x: event.clientX, y: event.clientY })}
         onPointerUp={(event) => {
@@ -50,9 +54,6 @@ export function BuildTab({ design, steps, sequenceSteps, index, onIndex, progres
           if (Math.abs(dx) > 60 && Math.abs(dx) > Math.abs(event.clientY - start.y)) go(dx < 0 ? index + 1 : index - 1);
         }}
       >
-        <StepView design={design} steps={sequenceSteps} index={index} />
-      </div>
-      <div className="flex flex-col gap-4">
         <div className="flex items-start gap-3">
           <TickButton done={done} label={`Step ${step.number} done`} disabled={!canTick} onToggle={() => progress.tick('step', step.id, !done)} />
           <div className="min-w-0 flex-1">
