@@ -138,18 +138,7 @@ export function buildAnalysisContext(design: DesignDocument, catalogue: Catalogu
     profileById.set(profile.id, info);
   }
 
-  for (const joint of design.joints) {
-    for (let k = 0; k < joint.members.length; k++) {
-      const m = joint.members[k];
-      const info = profileById.get(m.profileId);
-      if (!info) continue;
-      const end = memberEnd(m, info);
-      if (end === 'start') info.startJoints = append(info.startJoints, joint);
-      else if (end === 'end') info.endJoints = append(info.endJoints, joint);
-      if (info.joints[info.joints.length - 1] !== joint) info.joints = append(info.joints, joint);
-    }
-  }
-
+  attachJoints(design.joints, profiles, profileById);
   for (const acc of design.accessories) {
     if (!acc.profileId || !acc.end) continue;
     const info = profileById.get(acc.profileId);
@@ -223,6 +212,76 @@ class OrientationCache {
 /** A number as text that tells −0 from 0 (String(-0) is "0"), so cache keys stay exact. */
 function exactText(x: number): string {
   return Object.is(x, -0) ? '-0' : String(x);
+}
+
+/**
+ * Fills each profile's joint lists (any member, start, end) in joint order. Two passes: the first
+ * resolves each member's profile once and counts, the second fills lists of exactly that length,
+ * so no list grows by copying and no list is allocated for a profile without joints.
+ */
+function attachJoints(joints: readonly Joint[], profiles: ProfileInfo[], profileById: Map<string, ProfileInfo>): void {
+  const n = profiles.length;
+  const anyCount = new Int32Array(n);
+  const startCount = new Int32Array(n);
+  const endCount = new Int32Array(n);
+  const lastJoint = new Int32Array(n).fill(-1);
+  // Per member in order: its profile's index, or -1; its end: 0 none, 1 start, 2 end.
+  let members = 0;
+  for (const joint of joints) members += joint.members.length;
+  const memberProfile = new Int32Array(members);
+  const memberEndCode = new Uint8Array(members);
+  let m = 0;
+  for (let j = 0; j < joints.length; j++) {
+    const list = joints[j].members;
+    for (let k = 0; k < list.length; k++, m++) {
+      const info = profileById.get(list[k].profileId);
+      if (!info) {
+        memberProfile[m] = -1;
+        continue;
+      }
+      const i = info.index;
+      memberProfile[m] = i;
+      const end = memberEnd(list[k], info);
+      if (end === 'start') {
+        memberEndCode[m] = 1;
+        startCount[i]++;
+      } else if (end === 'end') {
+        memberEndCode[m] = 2;
+        endCount[i]++;
+      }
+      if (lastJoint[i] !== j) {
+        lastJoint[i] = j;
+        anyCount[i]++;
+      }
+    }
+  }
+  for (let i = 0; i < n; i++) {
+    const info = profiles[i];
+    if (anyCount[i] > 0) info.joints = new Array<Joint>(anyCount[i]);
+    if (startCount[i] > 0) info.startJoints = new Array<Joint>(startCount[i]);
+    if (endCount[i] > 0) info.endJoints = new Array<Joint>(endCount[i]);
+  }
+  // Reuse the counters as fill positions.
+  anyCount.fill(0);
+  startCount.fill(0);
+  endCount.fill(0);
+  lastJoint.fill(-1);
+  m = 0;
+  for (let j = 0; j < joints.length; j++) {
+    const joint = joints[j];
+    const count = joint.members.length;
+    for (let k = 0; k < count; k++, m++) {
+      const i = memberProfile[m];
+      if (i < 0) continue;
+      const info = profiles[i];
+      if (memberEndCode[m] === 1) info.startJoints[startCount[i]++] = joint;
+      else if (memberEndCode[m] === 2) info.endJoints[endCount[i]++] = joint;
+      if (lastJoint[i] !== j) {
+        lastJoint[i] = j;
+        info.joints[anyCount[i]++] = joint;
+      }
+    }
+  }
 }
 
 /** Appends without mutating the shared empty list. */
