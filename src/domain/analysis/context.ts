@@ -8,7 +8,7 @@ import type { Connector, PanelMaterial, ProfileSystem, ProfileVariant } from '..
 import type { Alloy } from '../catalogue/materials';
 import type { Box } from '../geometry/box';
 import { panelBox, panelAxes } from '../geometry/panelGeometry';
-import { pointAlongProfile, profileBoundingBox, sectionAxes, type SectionAxes } from '../geometry/profileGeometry';
+import { pointAlongProfile, profileBoundingBoxBetween, sectionAxes, type SectionAxes } from '../geometry/profileGeometry';
 import { UniformGrid } from '../geometry/spatialGrid';
 import type { Vec3 } from '../geometry/vectors';
 import type { CatalogueIndex } from './catalogueIndex';
@@ -117,6 +117,7 @@ export function buildAnalysisContext(design: DesignDocument, catalogue: Catalogu
     const width = variant?.width ?? UNKNOWN_SECTION_MM;
     const height = variant?.height ?? UNKNOWN_SECTION_MM;
     const axes = orientations.axes(profile.direction, profile.rollDeg);
+    const endPoint = pointAlongProfile(profile, profile.length);
     const info: ProfileInfo = {
       index: i,
       profile,
@@ -125,9 +126,9 @@ export function buildAnalysisContext(design: DesignDocument, catalogue: Catalogu
       width,
       height,
       axes,
-      box: profileBoundingBox(profile, width, height, axes),
+      box: profileBoundingBoxBetween(profile.start, endPoint, width, height, axes),
       startPoint: [profile.start[0], profile.start[1], profile.start[2]],
-      endPoint: pointAlongProfile(profile, profile.length),
+      endPoint,
       joints: NONE,
       startJoints: NONE,
       endJoints: NONE,
