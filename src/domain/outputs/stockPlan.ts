@@ -286,10 +286,17 @@ function groupByLength(problem: PackingProblem): CuttingTypes {
   }
   return {
     lengths,
-    sizes: lengths.map((_, type) => Math.max(...cutsByType[type].map((cut) => cut.length)) + problem.kerf),
+    sizes: cutsByType.map((cuts) => longestOf(cuts) + problem.kerf),
     demand: cutsByType.map((cuts) => cuts.length),
     cutsByType,
   };
+}
+
+/** The longest cut of a list, mm, by a loop: spreading thousands of lengths into Math.max copies them all (and overflows the call stack on huge lists). */
+function longestOf(cuts: readonly StockCut[]): number {
+  let longest = -Infinity;
+  for (const cut of cuts) if (cut.length > longest) longest = cut.length;
+  return longest;
 }
 
 /** Turns patterns into bars of real cuts; cuts the patterns leave over are packed by first fit decreasing. */
