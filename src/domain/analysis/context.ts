@@ -140,13 +140,7 @@ export function buildAnalysisContext(design: DesignDocument, catalogue: Catalogu
   }
 
   attachJoints(design.joints, profiles, profileById);
-  for (const acc of design.accessories) {
-    if (!acc.profileId || !acc.end) continue;
-    const info = profileById.get(acc.profileId);
-    if (!info) continue;
-    if (acc.end === 'start') info.startAccessories = append(info.startAccessories, acc);
-    else info.endAccessories = append(info.endAccessories, acc);
-  }
+  attachAccessories(design.accessories, profiles, profileById);
 
   const panels: PanelInfo[] = [];
   const panelById = new Map<string, PanelInfo>();
@@ -285,11 +279,36 @@ function attachJoints(joints: readonly Joint[], profiles: ProfileInfo[], profile
   }
 }
 
-/** Appends without mutating the shared empty list. */
-function append<T>(list: T[], item: T): T[] {
-  if (list === NONE) return [item];
-  list.push(item);
-  return list;
+/** Fills each profile's end accessory lists in document order, at their exact length (as `attachJoints`). */
+function attachAccessories(accessories: readonly Accessory[], profiles: ProfileInfo[], profileById: Map<string, ProfileInfo>): void {
+  const n = profiles.length;
+  const startCount = new Int32Array(n);
+  const endCount = new Int32Array(n);
+  // Per accessory: its profile's index and end (0 start, 1 end), or -1.
+  const target = new Int32Array(accessories.length).fill(-1);
+  for (let a = 0; a < accessories.length; a++) {
+    const acc = accessories[a];
+    if (!acc.profileId || !acc.end) continue;
+    const info = profileById.get(acc.profileId);
+    if (!info) continue;
+    const atStart = acc.end === 'start';
+    target[a] = info.index * 2 + (atStart ? 0 : 1);
+    if (atStart) startCount[info.index]++;
+    else endCount[info.index]++;
+  }
+  for (let i = 0; i < n; i++) {
+    if (startCount[i] > 0) profiles[i].startAccessories = new Array<Accessory>(startCount[i]);
+    if (endCount[i] > 0) profiles[i].endAccessories = new Array<Accessory>(endCount[i]);
+  }
+  startCount.fill(0);
+  endCount.fill(0);
+  for (let a = 0; a < accessories.length; a++) {
+    const t = target[a];
+    if (t < 0) continue;
+    const i = t >> 1;
+    if ((t & 1) === 0) profiles[i].startAccessories[startCount[i]++] = accessories[a];
+    else profiles[i].endAccessories[endCount[i]++] = accessories[a];
+  }
 }
 
 function panelInfo(index: number, design: DesignDocument, catalogue: CatalogueIndex, profileById: Map<string, ProfileInfo>): PanelInfo {
