@@ -8,7 +8,7 @@ import type { Connector, PanelMaterial, ProfileSystem, ProfileVariant } from '..
 import type { Alloy } from '../catalogue/materials';
 import type { Box } from '../geometry/box';
 import { panelBox, panelAxes } from '../geometry/panelGeometry';
-import { pointAlongProfile, profileBoundingBox, sectionAxes, type SectionAxes } from '../geometry/profileGeometry';
+import { pointAlongProfile, profileBoundingBoxBetween, sectionAxes, type SectionAxes } from '../geometry/profileGeometry';
 import { UniformGrid } from '../geometry/spatialGrid';
 import type { Vec3 } from '../geometry/vectors';
 import type { CatalogueIndex } from './catalogueIndex';
@@ -117,6 +117,7 @@ export function buildAnalysisContext(design: DesignDocument, catalogue: Catalogu
     const width = variant?.width ?? UNKNOWN_SECTION_MM;
     const height = variant?.height ?? UNKNOWN_SECTION_MM;
     const axes = orientations.axes(profile.direction, profile.rollDeg);
+    const endPoint = pointAlongProfile(profile, profile.length);
     const info: ProfileInfo = {
       index: i,
       profile,
@@ -125,9 +126,9 @@ export function buildAnalysisContext(design: DesignDocument, catalogue: Catalogu
       width,
       height,
       axes,
-      box: profileBoundingBox(profile, width, height, axes),
+      box: profileBoundingBoxBetween(profile.start, endPoint, width, height, axes),
       startPoint: [profile.start[0], profile.start[1], profile.start[2]],
-      endPoint: pointAlongProfile(profile, profile.length),
+      endPoint,
       joints: NONE,
       startJoints: NONE,
       endJoints: NONE,
@@ -138,25 +139,8 @@ export function buildAnalysisContext(design: DesignDocument, catalogue: Catalogu
     profileById.set(profile.id, info);
   }
 
-  for (const joint of design.joints) {
-    for (let k = 0; k < joint.members.length; k++) {
-      const m = joint.members[k];
-      const info = profileById.get(m.profileId);
-      if (!info) continue;
-      const end = memberEnd(m, info);
-      if (end === 'start') info.startJoints = append(info.startJoints, joint);
-      else if (end === 'end') info.endJoints = append(info.endJoints, joint);
-      if (info.joints[info.joints.length - 1] !== joint) info.joints = append(info.joints, joint);
-    }
-  }
-
-  for (const acc of design.accessories) {
-    if (!acc.profileId || !acc.end) continue;
-    const info = profileById.get(acc.profileId);
-    if (!info) continue;
-    if (acc.end === 'start') info.startAccessories = append(info.startAccessories, acc);
-    else info.endAccessories = append(info.endAccessories, acc);
-  }
+  attachJoints(design.joints, profiles, profileById);
+  attachAccessories(design.accessories, profiles, profileById);
 
   const panels: PanelInfo[] = [];
   const panelById = new Map<string, PanelInfo>();
@@ -225,11 +209,106 @@ function exactText(x: number): string {
   return Object.is(x, -0) ? '-0' : String(x);
 }
 
-/** Appends without mutating the shared empty list. */
-function append<T>(list: T[], item: T): T[] {
-  if (list === NONE) return [item];
-  list.push(item);
-  return list;
+/**
+ * Fills each profile's joint lists (any member, start, end) in joint order. Two passes: the first
+ * resolves each member's profile once and counts, the second fills lists of exactly that length,
+ * so no list grows by copying and no list is allocated for a profile without joints.
+ */
+function attachJoints(joints: readonly Joint[], profiles: ProfileInfo[], profileById: Map<string, ProfileInfo>): void {
+  const n = profiles.length;
+  const anyCount = new Int32Array(n);
+  const startCount = new Int32Array(n);
+  const endCount = new Int32Array(n);
+  const lastJoint = new Int32Array(n).fill(-1);
+  // Per member in order: its profile's index, or -1; its end: 0 none, 1 start, 2 end.
+  let members = 0;
+  for (const joint of joints) members += joint.members.length;
+  const memberProfile = new Int32Array(members);
+  const memberEndCode = new Uint8Array(members);
+  let m = 0;
+  for (let j = 0; j < joints.length; j++) {
+    const list = joints[j].members;
+    for (let k = 0; k < list.length; k++, m++) {
+      const info = profileById.get(list[k].profileId);
+      if (!info) {
+        memberProfile[m] = -1;
+        continue;
+      }
+      const i = info.index;
+      memberProfile[m] = i;
+      const end = memberEnd(list[k], info);
+      if (end === 'start') {
+        memberEndCode[m] = 1;
+        startCount[i]++;
+      } else if (end === 'end') {
+        memberEndCode[m] = 2;
+        endCount[i]++;
+      }
+      if (lastJoint[i] !== j) {
+        lastJoint[i] = j;
+        anyCount[i]++;
+      }
+    }
+  }
+  for (let i = 0; i < n; i++) {
+    const info = profiles[i];
+    if (anyCount[i] > 0) info.joints = new Array<Joint>(anyCount[i]);
+    if (startCount[i] > 0) info.startJoints = new Array<Joint>(startCount[i]);
+    if (endCount[i] > 0) info.endJoints = new Array<Joint>(endCount[i]);
+  }
+  // Reuse the counters as fill positions.
+  anyCount.fill(0);
+  startCount.fill(0);
+  endCount.fill(0);
+  lastJoint.fill(-1);
+  m = 0;
+  for (let j = 0; j < joints.length; j++) {
+    const joint = joints[j];
+    const count = joint.members.length;
+    for (let k = 0; k < count; k++, m++) {
+      const i = memberProfile[m];
+      if (i < 0) continue;
+      const info = profiles[i];
+      if (memberEndCode[m] === 1) info.startJoints[startCount[i]++] = joint;
+      else if (memberEndCode[m] === 2) info.endJoints[endCount[i]++] = joint;
+      if (lastJoint[i] !== j) {
+        lastJoint[i] = j;
+        info.joints[anyCount[i]++] = joint;
+      }
+    }
+  }
+}
+
+/** Fills each profile's end accessory lists in document order, at their exact length (as `attachJoints`). */
+function attachAccessories(accessories: readonly Accessory[], profiles: ProfileInfo[], profileById: Map<string, ProfileInfo>): void {
+  const n = profiles.length;
+  const startCount = new Int32Array(n);
+  const endCount = new Int32Array(n);
+  // Per accessory: its profile's index and end (0 start, 1 end), or -1.
+  const target = new Int32Array(accessories.length).fill(-1);
+  for (let a = 0; a < accessories.length; a++) {
+    const acc = accessories[a];
+    if (!acc.profileId || !acc.end) continue;
+    const info = profileById.get(acc.profileId);
+    if (!info) continue;
+    const atStart = acc.end === 'start';
+    target[a] = info.index * 2 + (atStart ? 0 : 1);
+    if (atStart) startCount[info.index]++;
+    else endCount[info.index]++;
+  }
+  for (let i = 0; i < n; i++) {
+    if (startCount[i] > 0) profiles[i].startAccessories = new Array<Accessory>(startCount[i]);
+    if (endCount[i] > 0) profiles[i].endAccessories = new Array<Accessory>(endCount[i]);
+  }
+  startCount.fill(0);
+  endCount.fill(0);
+  for (let a = 0; a < accessories.length; a++) {
+    const t = target[a];
+    if (t < 0) continue;
+    const i = t >> 1;
+    if ((t & 1) === 0) profiles[i].startAccessories[startCount[i]++] = accessories[a];
+    else profiles[i].endAccessories[endCount[i]++] = accessories[a];
+  }
 }
 
 function panelInfo(index: number, design: DesignDocument, catalogue: CatalogueIndex, profileById: Map<string, ProfileInfo>): PanelInfo {

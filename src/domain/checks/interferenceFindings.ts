@@ -74,16 +74,65 @@ function sortFindings(out: Finding[], overflow: Overflow): Finding[] {
 
 /** Grid broad phase: O(n) for frames whose parts are spread out, as T-slot frames are. */
 export function interferenceFindings(ctx: AnalysisContext): Finding[] {
+  // The shared profile grid covers profile-profile pairs; without panels nothing else is needed.
+  if (ctx.panels.length === 0) {
+    const solids = solidsOf(ctx);
+    const out: Finding[] = [];
+    const overflow: Overflow = { omitted: 0 };
+    ctx.profileGrid.forEachNearPair((i, j) => narrowPhase(ctx, solids[i], solids[j], out, overflow));
+    return sortFindings(out, overflow);
+  }
+  const fast = withPanelsOnSharedGrid(ctx);
+  return fast ?? withPanelsOnOneGrid(ctx);
+}
+
+/**
+ * Profiles against profiles on the shared profile grid, panels against profiles by a query of
+ * that grid, panels against panels on a small grid of their own: no solid per profile and no
+ * second grid over every profile. Null when the list is capped: which overlaps are listed then
+ * depends on the visiting order, so the caller repeats the check in the one-grid order.
+ */
+function withPanelsOnSharedGrid(ctx: AnalysisContext): Finding[] | null {
+  const out: Finding[] = [];
+  const overflow: Overflow = { omitted: 0 };
+  const profiles = ctx.profiles;
+  const panels = ctx.panels;
+  const profileSolid = (i: number): Solid => ({ id: profiles[i].profile.id, kind: 'profile', box: profiles[i].box });
+  // Captured panels sit in their frame's slots, so most panels meet a few profiles: one solid each.
+  const panelSolids = new Array<Solid | undefined>(panels.length);
+  const panelSolid = (k: number): Solid =>
+    (panelSolids[k] ??= { id: panels[k].panel.id, kind: 'panel', box: panels[k].box, frame: new Set(panels[k].panel.boundedBy ?? []) });
+  // Solids are built only for boxes that interpenetrate beyond the tolerance (the narrow phase's first test).
+  ctx.profileGrid.forEachNearPair((i, j) => {
+    if (boxPenetration(profiles[i].box, profiles[j].box) <= INTERFERENCE_TOLERANCE_MM) return false;
+    return narrowPhase(ctx, profileSolid(i), profileSolid(j), out, overflow);
+  });
+  if (overflow.omitted > 0 || out.length >= MAX_FINDINGS_PER_CHECK) return null;
+  for (let k = 0; k < panels.length; k++) {
+    const box = panels[k].box;
+    ctx.profileGrid.forEachNear(box, (i) => {
+      if (boxPenetration(profiles[i].box, box) <= INTERFERENCE_TOLERANCE_MM) return false;
+      return narrowPhase(ctx, profileSolid(i), panelSolid(k), out, overflow);
+    });
+    if (overflow.omitted > 0) return null;
+  }
+  const panelBoxes = new Array<Box>(panels.length);
+  for (let k = 0; k < panels.length; k++) panelBoxes[k] = panels[k].box;
+  new UniformGrid(panelBoxes).forEachNearPair((a, b) => {
+    if (boxPenetration(panelBoxes[a], panelBoxes[b]) <= INTERFERENCE_TOLERANCE_MM) return false;
+    return narrowPhase(ctx, panelSolid(a), panelSolid(b), out, overflow);
+  });
+  if (overflow.omitted > 0) return null;
+  return sortFindings(out, overflow);
+}
+
+/** Every solid on one new grid: the order that decides which overlaps a capped list shows. */
+function withPanelsOnOneGrid(ctx: AnalysisContext): Finding[] {
   const solids = solidsOf(ctx);
   const out: Finding[] = [];
   const overflow: Overflow = { omitted: 0 };
-  // The shared profile grid covers profile-profile pairs; a second grid adds the panels.
-  if (ctx.panels.length === 0) {
-    ctx.profileGrid.forEachNearPair((i, j) => narrowPhase(ctx, solids[i], solids[j], out, overflow));
-  } else {
-    const grid = new UniformGrid(solids.map((s) => s.box));
-    grid.forEachNearPair((i, j) => narrowPhase(ctx, solids[i], solids[j], out, overflow));
-  }
+  const grid = new UniformGrid(solids.map((s) => s.box));
+  grid.forEachNearPair((i, j) => narrowPhase(ctx, solids[i], solids[j], out, overflow));
   return sortFindings(out, overflow);
 }
 

@@ -12,6 +12,8 @@ import { panelCornerNotches } from '../analysis/panelNotches';
 import { sheetThicknessTolerance } from '../catalogue/materials';
 import { capitalise, countOf, findingId, formatNumber, mm, panelName } from '../analysis/describe';
 import { addGasketFix, setPanelThicknessFix } from './fixes';
+import { MAX_FINDINGS_PER_CHECK, moreFindingsFinding } from './findingCap';
+import type { CornerNotches } from '../geometry/cornerNotches';
 
 const CHECK = 'panel-fit';
 /** Thinner than this share of the slot opening rattles: needs a gasket or retainer strip. Common practice, no source. */
@@ -23,8 +25,21 @@ const FRAME_EXPANSION = 23.4e-6;
 /** Drawn opening and frame opening may differ by this much, mm. */
 const OPENING_TOLERANCE_MM = 1;
 
+function notchNote(info: PanelInfo, notch: CornerNotches): Finding {
+  const { panel } = info;
+  return {
+    id: findingId(CHECK, 'corner-notch', [panel.id]),
+    check: CHECK,
+    severity: 'note',
+    partIds: [panel.id, ...notch.jointIds],
+    message: `${capitalise(panelName(panel))} needs a ${mm(notch.size)} square notch at ${countOf(notch.corners, 'corner')}, where connectors sit in the slot (${countOf(notch.jointIds.length, 'joint')}). Cut size ${formatNumber(info.sheetWidth)} × ${formatNumber(info.sheetHeight)} mm.`,
+    data: { notchMm: notch.size, corners: notch.corners, sheetWidthMm: round(info.sheetWidth), sheetHeightMm: round(info.sheetHeight) },
+  };
+}
+
 export function panelFitFindings(ctx: AnalysisContext): Finding[] {
   const out: Finding[] = [];
+  const notches: { info: PanelInfo; notch: CornerNotches }[] = [];
   for (const info of ctx.panels) {
     const { panel } = info;
     if (!info.material) {
@@ -51,16 +66,20 @@ export function panelFitFindings(ctx: AnalysisContext): Finding[] {
     checkThermal(ctx, info, out);
     checkOpening(info, out);
     const notch = panelCornerNotches(ctx, info);
-    if (notch.corners > 0) {
-      out.push({
-        id: findingId(CHECK, 'corner-notch', [panel.id]),
-        check: CHECK,
-        severity: 'note',
-        partIds: [panel.id, ...notch.jointIds],
-        message: `${capitalise(panelName(panel))} needs a ${mm(notch.size)} square notch at ${countOf(notch.corners, 'corner')}, where connectors sit in the slot (${countOf(notch.jointIds.length, 'joint')}). Cut size ${formatNumber(info.sheetWidth)} × ${formatNumber(info.sheetHeight)} mm.`,
-        data: { notchMm: notch.size, corners: notch.corners, sheetWidthMm: round(info.sheetWidth), sheetHeightMm: round(info.sheetHeight) },
-      });
-    }
+    if (notch.corners > 0) notches.push({ info, notch });
+  }
+  // The findings list shows the first MAX_FINDINGS_PER_CHECK of this check, errors and warnings
+  // first, then notes by id: notes beyond that are only counted (one closing finding), so no
+  // message is written for them (about 1,000 notch notes at 8,000 profiles).
+  const room = Math.max(0, MAX_FINDINGS_PER_CHECK - out.length);
+  if (notches.length > room) {
+    const ids = notches.map(({ info }) => findingId(CHECK, 'corner-notch', [info.panel.id]));
+    const order = notches.map((_, k) => k).sort((a, b) => (ids[a] < ids[b] ? -1 : ids[a] > ids[b] ? 1 : a - b));
+    const shown = order.slice(0, room).sort((a, b) => a - b);
+    for (const k of shown) out.push(notchNote(notches[k].info, notches[k].notch));
+    out.push(moreFindingsFinding(CHECK, 'note', notches.length - room));
+  } else {
+    for (const { info, notch } of notches) out.push(notchNote(info, notch));
   }
   return out;
 }

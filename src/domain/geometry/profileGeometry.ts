@@ -78,19 +78,23 @@ export function faceNormal(axes: SectionAxes, face: number): Vec3 {
  * Exact for axis-aligned profiles; a tight enclosure for angled ones.
  */
 export function profileBoundingBox(p: ProfilePlacement, width: number, height: number, axes: SectionAxes = sectionAxes(p.direction, p.rollDeg ?? 0)): Box {
+  return profileBoundingBoxBetween(p.start, pointAlongProfile(p, p.length), width, height, axes);
+}
+
+/** `profileBoundingBox` from the profile's start and end points (mm), for callers that have the end already. */
+export function profileBoundingBoxBetween(start: ReadonlyVec3, end: ReadonlyVec3, width: number, height: number, axes: SectionAxes): Box {
   const hw = width / 2;
   const hh = height / 2;
   const ex = Math.abs(axes.u[0]) * hw + Math.abs(axes.v[0]) * hh;
   const ey = Math.abs(axes.u[1]) * hw + Math.abs(axes.v[1]) * hh;
   const ez = Math.abs(axes.u[2]) * hw + Math.abs(axes.v[2]) * hh;
-  const end = pointAlongProfile(p, p.length);
   return {
-    minX: Math.min(p.start[0], end[0]) - ex,
-    minY: Math.min(p.start[1], end[1]) - ey,
-    minZ: Math.min(p.start[2], end[2]) - ez,
-    maxX: Math.max(p.start[0], end[0]) + ex,
-    maxY: Math.max(p.start[1], end[1]) + ey,
-    maxZ: Math.max(p.start[2], end[2]) + ez,
+    minX: Math.min(start[0], end[0]) - ex,
+    minY: Math.min(start[1], end[1]) - ey,
+    minZ: Math.min(start[2], end[2]) - ez,
+    maxX: Math.max(start[0], end[0]) + ex,
+    maxY: Math.max(start[1], end[1]) + ey,
+    maxZ: Math.max(start[2], end[2]) + ez,
   };
 }
 

@@ -32,7 +32,7 @@ export function cutList(ctx: AnalysisContext): { items: CutListItem[]; groups: C
     const ends = { start: endTreatment(info, 'start', thread, treatments), end: endTreatment(info, 'end', thread, treatments) };
     const machining = info.profile.machining.length === 0 ? [] : machiningOperations(info, thread);
     const { variantId, length } = info.profile;
-    const head = cached(keyHeads, [variantId, length, ends.start.kind, ends.end.kind], () => [variantId, length.toFixed(1), ends.start.kind, ends.end.kind].join('|'));
+    const head = cachedHead(keyHeads, variantId, length, ends.start.kind, ends.end.kind);
     let groupKey = head;
     for (const m of machining) groupKey += `|${m.kind}/${m.fromEnd}/${m.offset.toFixed(1)}/${m.face}/${m.diameter ?? ''}`;
     items.push({
@@ -91,18 +91,17 @@ function tapThread(info: ProfileInfo): string | undefined {
 /** Values under a path of keys (strings and numbers), for caches without key strings. */
 type Nested<T> = Map<string | number, Nested<T> | T>;
 
-function cached<T>(root: Nested<T>, path: readonly (string | number)[], make: () => T): T {
-  let map = root;
-  for (let i = 0; i < path.length - 1; i++) {
-    let next = map.get(path[i]) as Nested<T> | undefined;
-    if (!next) map.set(path[i], (next = new Map()));
-    map = next;
-  }
-  const last = path[path.length - 1];
-  if (map.has(last)) return map.get(last) as T;
-  const value = make();
-  map.set(last, value);
-  return value;
+/** The group key's head for a kind of piece, made once per kind (no key path array or closure per profile). */
+function cachedHead(root: Nested<string>, variantId: string, length: number, startKind: string, endKind: string): string {
+  let byLength = root.get(variantId) as Nested<string> | undefined;
+  if (!byLength) root.set(variantId, (byLength = new Map()));
+  let byStart = byLength.get(length) as Nested<string> | undefined;
+  if (!byStart) byLength.set(length, (byStart = new Map()));
+  let byEnd = byStart.get(startKind) as Nested<string> | undefined;
+  if (!byEnd) byStart.set(startKind, (byEnd = new Map()));
+  let head = byEnd.get(endKind) as string | undefined;
+  if (head === undefined) byEnd.set(endKind, (head = [variantId, length.toFixed(1), startKind, endKind].join('|')));
+  return head;
 }
 
 function endTreatment(info: ProfileInfo, end: ProfileEnd, thread: string | undefined, cache: Nested<EndTreatment>): EndTreatment {
@@ -113,7 +112,16 @@ function endTreatment(info: ProfileInfo, end: ProfileEnd, thread: string | undef
   if (foot) kind = foot.kind === 'caster' ? 'caster' : 'foot';
   else if (info.profile.machining.some((m) => m.kind === 'end-tap' && m.fromEnd === end)) kind = 'tap';
   else if (accessories.some((a) => a.kind === 'end-cap')) kind = 'cap';
-  return cached(cache, [kind, word, thread ?? ''], () => describeEnd(kind, word, thread));
+  // Looked up level by level, without a key path array or a closure per profile end.
+  const threadKey = thread ?? '';
+  let byWord = cache.get(kind) as Nested<EndTreatment> | undefined;
+  if (!byWord) cache.set(kind, (byWord = new Map()));
+  let byThread = byWord.get(word) as Nested<EndTreatment> | undefined;
+  if (!byThread) byWord.set(word, (byThread = new Map()));
+  if (byThread.has(threadKey)) return byThread.get(threadKey) as EndTreatment;
+  const made = describeEnd(kind, word, thread);
+  byThread.set(threadKey, made);
+  return made;
 }
 
 function describeEnd(kind: EndTreatment['kind'], word: string, thread: string | undefined): EndTreatment {

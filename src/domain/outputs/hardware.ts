@@ -83,16 +83,22 @@ export function hardwareSummary(ctx: AnalysisContext): HardwareSummary {
   };
 
   // Joints with the same connector, screw head, T-nut and host system use the same parts: resolve once.
-  const recipes = new Map<string, JointRecipeItem[]>();
+  // Keyed connector → screw head → T-nut → host system in nested maps: no key string per joint.
+  const recipes = new Map<unknown, Map<unknown, Map<unknown, Map<string, JointRecipeItem[]>>>>();
   for (const joint of ctx.design.joints) {
     const first = ctx.profileById.get(joint.members[0]?.profileId);
     const host = ctx.profileById.get(joint.members[1]?.profileId) ?? first;
     const hostSystem = host?.variant?.systemId ?? ctx.design.systemId;
-    const key = `${joint.connectorId}|${joint.fastenerHead}|${joint.tNut}|${hostSystem}`;
-    let recipe = recipes.get(key);
+    let byHead = recipes.get(joint.connectorId);
+    if (!byHead) recipes.set(joint.connectorId, (byHead = new Map()));
+    let byNut = byHead.get(joint.fastenerHead);
+    if (!byNut) byHead.set(joint.fastenerHead, (byNut = new Map()));
+    let bySystem = byNut.get(joint.tNut);
+    if (!bySystem) byNut.set(joint.tNut, (bySystem = new Map()));
+    let recipe = bySystem.get(hostSystem);
     if (!recipe) {
       recipe = jointRecipe(cat.catalogue, joint, hostSystem);
-      recipes.set(key, recipe);
+      bySystem.set(hostSystem, recipe);
     }
     if (recipe.length === 0) continue;
     const at = first ? memberPoint(first, joint.members[0]) : null;

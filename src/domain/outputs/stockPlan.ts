@@ -123,6 +123,7 @@ function toStockBars(groups: StockCut[][], problem: PackingProblem, minReusableO
 }
 
 function fitDecreasing(problem: PackingProblem, rule: 'first' | 'best'): StockCut[][] {
+  if (rule === 'best') return bestFitDecreasing(problem);
   const groups: StockCut[][] = [];
   const loads: number[] = [];
   const sorted = sortedCuts(problem);
@@ -159,6 +160,58 @@ function fitDecreasing(problem: PackingProblem, rule: 'first' | 'best'): StockCu
     if (loads[chosen] + smallest > limit) open.splice(chosenPosition, 1);
     previousSize = size;
     previousPosition = chosenPosition;
+  }
+  return groups;
+}
+
+/**
+ * Best fit decreasing: each cut goes to the open bar with the highest load that still takes it
+ * (the lowest bar index among equal loads), else to a new bar. The open bars are kept ordered by
+ * load (highest first, then bar index), so the bar is found by binary search instead of a scan of
+ * every open bar (n cuts × hundreds of bars at 8,000 profiles). `load + size <= limit` only turns
+ * false as the load grows, so the search finds the same bar the scan did.
+ */
+function bestFitDecreasing(problem: PackingProblem): StockCut[][] {
+  const groups: StockCut[][] = [];
+  const loads: number[] = [];
+  const sorted = sortedCuts(problem);
+  const limit = problem.capacity + LENGTH_TOLERANCE;
+  const smallest = sorted.length > 0 ? sorted[sorted.length - 1].length + problem.kerf : 0;
+  // Open bar indices, highest load first, then lowest index.
+  const open: number[] = [];
+  const before = (a: number, b: number) => loads[a] > loads[b] || (loads[a] === loads[b] && a < b);
+  const insert = (bar: number) => {
+    let lo = 0;
+    let hi = open.length;
+    while (lo < hi) {
+      const mid = (lo + hi) >> 1;
+      if (before(open[mid], bar)) lo = mid + 1;
+      else hi = mid;
+    }
+    open.splice(lo, 0, bar);
+  };
+  for (const cut of sorted) {
+    const size = cut.length + problem.kerf;
+    // First position whose bar takes the cut: bars before it are too full.
+    let lo = 0;
+    let hi = open.length;
+    while (lo < hi) {
+      const mid = (lo + hi) >> 1;
+      if (loads[open[mid]] + size > limit) lo = mid + 1;
+      else hi = mid;
+    }
+    let chosen: number;
+    if (lo < open.length) {
+      chosen = open[lo];
+      open.splice(lo, 1);
+    } else {
+      groups.push([]);
+      loads.push(0);
+      chosen = loads.length - 1;
+    }
+    groups[chosen].push(cut);
+    loads[chosen] += size;
+    if (!(loads[chosen] + smallest > limit)) insert(chosen);
   }
   return groups;
 }
@@ -233,10 +286,17 @@ function groupByLength(problem: PackingProblem): CuttingTypes {
   }
   return {
     lengths,
-    sizes: lengths.map((_, type) => Math.max(...cutsByType[type].map((cut) => cut.length)) + problem.kerf),
+    sizes: cutsByType.map((cuts) => longestOf(cuts) + problem.kerf),
     demand: cutsByType.map((cuts) => cuts.length),
     cutsByType,
   };
+}
+
+/** The longest cut of a list, mm, by a loop: spreading thousands of lengths into Math.max copies them all (and overflows the call stack on huge lists). */
+function longestOf(cuts: readonly StockCut[]): number {
+  let longest = -Infinity;
+  for (const cut of cuts) if (cut.length > longest) longest = cut.length;
+  return longest;
 }
 
 /** Turns patterns into bars of real cuts; cuts the patterns leave over are packed by first fit decreasing. */

@@ -87,7 +87,9 @@ export function stockPlans(ctx: AnalysisContext): VariantStockPlan[] {
   const byVariant = new Map<string, StockCut[]>();
   for (const info of ctx.profiles) {
     const list = byVariant.get(info.profile.variantId) ?? [];
-    list.push({ id: info.profile.id, length: info.profile.length, ...(info.profile.label ? { label: info.profile.label } : {}) });
+    // Written out rather than spread: a spread object is built by a slow generic copy, 8,000 times.
+    const { id, length, label } = info.profile;
+    list.push(label ? { id, length, label } : { id, length });
     byVariant.set(info.profile.variantId, list);
   }
   const prices = ctx.catalogue.catalogue.prices.profilePerMetre;
