@@ -41,13 +41,19 @@ export function createAnalysisPool(limits: AnalysisLimits): AnalysisPool {
       // The clock starts when a thread picks the task up: waiting in the queue or for a new thread
       // to load is not the design's fault.
       const abort = new AbortController();
-      // A request whose client went away stops its task (queued or running) rather than spend a thread on it.
-      const onCancel = () => abort.abort();
+      // A request whose client went away leaves the queue rather than spend a thread on it. A task
+      // already running is left to finish: aborting it would end its thread, and starting a new one
+      // (loading the domain code) costs more than the rest of a typical analysis.
+      let running = false;
+      const onCancel = () => {
+        if (!running) abort.abort();
+      };
       cancel?.addEventListener('abort', onCancel, { once: true });
       let timedOut = false;
       const { port1, port2 } = new MessageChannel();
       let timer: NodeJS.Timeout | undefined;
       port1.once('message', () => {
+        running = true;
         timer = setTimeout(() => {
           timedOut = true;
           abort.abort();
