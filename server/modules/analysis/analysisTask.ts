@@ -16,20 +16,26 @@ export type AnalysisTaskResult =
   /** The body is not JSON, or not `{ document }`: a 400 with this code, message and fields. */
   | { ok: false; refused: { code: string; message: string; fields?: Record<string, string> } }
   /** More parts than `maxParts`: a 413. */
-  | { ok: false; tooLarge: { parts: number } };
+  | { ok: false; tooLarge: { parts: number } }
+  /** The client went away before the work began. */
+  | { ok: false; cancelled: true };
 
 export interface AnalysisTask {
   /** The request body as JSON text. */
   body: string;
   /** Parts (profiles + joints + panels + accessories) analysed at most. */
   maxParts: number;
+  /** Shared with the request thread: 1 once the client has gone away, so queued work is skipped. */
+  cancelled?: Int32Array;
   /** Told "started" when this thread begins the task, so the time limit counts work, not queueing. */
   started?: MessagePort;
 }
 
-export default function analyseDocument({ body, maxParts, started }: AnalysisTask): AnalysisTaskResult {
+export default function analyseDocument({ body, maxParts, cancelled, started }: AnalysisTask): AnalysisTaskResult {
   started?.postMessage('started');
   started?.close();
+  const gone = () => cancelled !== undefined && Atomics.load(cancelled, 0) === 1;
+  if (gone()) return { ok: false, cancelled: true };
   let value: unknown;
   try {
     value = JSON.parse(body);
@@ -44,6 +50,7 @@ export default function analyseDocument({ body, maxParts, started }: AnalysisTas
   const { document } = shape.data;
   const parts = countDesignParts(document);
   if (parts > maxParts) return { ok: false, tooLarge: { parts } };
+  if (gone()) return { ok: false, cancelled: true };
   const parsed = parseDesignDocument(document);
   if (!parsed.ok) return { ok: false, errors: parsed.errors };
   return { ok: true, json: JSON.stringify({ analysis: analyzeDesign(parsed.design) }) };

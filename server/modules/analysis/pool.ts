@@ -41,19 +41,16 @@ export function createAnalysisPool(limits: AnalysisLimits): AnalysisPool {
       // The clock starts when a thread picks the task up: waiting in the queue or for a new thread
       // to load is not the design's fault.
       const abort = new AbortController();
-      // A request whose client went away leaves the queue rather than spend a thread on it. A task
-      // already running is left to finish: aborting it would end its thread, and starting a new one
-      // (loading the domain code) costs more than the rest of a typical analysis.
-      let running = false;
-      const onCancel = () => {
-        if (!running) abort.abort();
-      };
+      // A request whose client went away marks its task: the worker skips it when its turn comes,
+      // or between the parse and the analysis. Aborting through piscina would end the thread if the
+      // task had just been handed to it, and a new thread costs seconds to load.
+      const cancelled = new Int32Array(new SharedArrayBuffer(4));
+      const onCancel = () => Atomics.store(cancelled, 0, 1);
       cancel?.addEventListener('abort', onCancel, { once: true });
       let timedOut = false;
       const { port1, port2 } = new MessageChannel();
       let timer: NodeJS.Timeout | undefined;
       port1.once('message', () => {
-        running = true;
         timer = setTimeout(() => {
           timedOut = true;
           abort.abort();
@@ -61,7 +58,7 @@ export function createAnalysisPool(limits: AnalysisLimits): AnalysisPool {
         port1.close();
       });
       try {
-        return (await start().run({ body, maxParts, started: port2 }, { signal: abort.signal, transferList: [port2] })) as AnalysisTaskResult;
+        return (await start().run({ body, maxParts, cancelled, started: port2 }, { signal: abort.signal, transferList: [port2] })) as AnalysisTaskResult;
       } catch (error) {
         if (timedOut) throw new AnalysisTimeout(limits.timeLimitMs);
         if (/queue is at limit/i.test(String((error as Error)?.message))) throw new AnalysisBusy();

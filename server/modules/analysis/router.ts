@@ -43,6 +43,7 @@ export function analysisRouter(pool: AnalysisPool, limits: AnalysisLimits): Rout
       }
       throw error;
     }
+    if (gone.signal.aborted) return; // nobody is waiting for an answer
     if (result.ok) {
       res.type('application/json').send(result.json);
       return;
@@ -60,6 +61,7 @@ export function analysisRouter(pool: AnalysisPool, limits: AnalysisLimits): Rout
         { details: { parts, maxParts: limits.maxParts } },
       );
     }
+    if ('cancelled' in result) return;
     throw documentErrorsToAppError(result.errors);
   });
   return router;
