@@ -20,6 +20,7 @@ import { chromium } from '@playwright/test';
 import autocannon from 'autocannon';
 import playwrightConfig from '../e2e/playwright.config';
 import type { BenchRow } from './types';
+import { serverNodeArgs } from './mode';
 
 const BENCH = 'link';
 const root = fileURLToPath(new URL('..', import.meta.url));
@@ -90,7 +91,7 @@ export async function run(): Promise<BenchRow[]> {
   const dir = mkdtempSync(join(tmpdir(), 'slotwise-link-bench-'));
   const port = 42000 + Math.floor(Math.random() * 8000);
   const base = `http://127.0.0.1:${port}`;
-  const child: ChildProcess = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
+  const child: ChildProcess = spawn(process.execPath, [...serverNodeArgs(), '--import', 'tsx', 'server/index.ts'], {
     cwd: root,
     env: {
       ...process.env,

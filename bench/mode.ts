@@ -8,3 +8,6 @@ export const QUICK = process.env.BENCH_QUICK === '1' || process.argv.includes('-
 export function pick<T>(full: T, quick: T): T {
   return QUICK ? quick : full;
 }
+
+/** Extra node flags for a bench's server child, e.g. BENCH_SERVER_NODE_ARGS="--cpu-prof --cpu-prof-dir=prof" to profile it. */
+export const serverNodeArgs = (): string[] => (process.env.BENCH_SERVER_NODE_ARGS ?? '').split(' ').filter(Boolean);

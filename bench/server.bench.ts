@@ -13,7 +13,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import autocannon from 'autocannon';
-import { pick } from './mode';
+import { pick, serverNodeArgs } from './mode';
 import type { BenchRow } from './types';
 
 const BENCH = 'server';
@@ -68,7 +68,7 @@ export async function run(): Promise<BenchRow[]> {
   const dir = mkdtempSync(join(tmpdir(), 'slotwise-server-bench-'));
   const port = 42000 + Math.floor(Math.random() * 8000);
   const base = `http://127.0.0.1:${port}`;
-  const child: ChildProcess = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
+  const child: ChildProcess = spawn(process.execPath, [...serverNodeArgs(), '--import', 'tsx', 'server/index.ts'], {
     cwd: root,
     env: { ...process.env, NODE_ENV: 'production', SEED_DEMO: '1', PORT: String(port), HOST: '127.0.0.1', DATABASE_PATH: join(dir, 'bench.sqlite'), SESSION_SECRET: 'bench-secret-0123456789-abcdefghijklmnop', LOG_REQUESTS: 'false', CLIENT_DIST: join(dir, 'none') },
     stdio: ['ignore', 'ignore', 'inherit'],

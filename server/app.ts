@@ -115,7 +115,9 @@ export function createApp(deps: AppDependencies): Express {
     });
   }
 
-  app.use('/api', express.json({ limit: '6mb' }));
+  // POST /api/analysis reads its body as text and parses it in a worker thread (see its router).
+  const jsonBody = express.json({ limit: '6mb' });
+  app.use('/api', (req, res, next) => (req.method === 'POST' && /^\/analysis\/?$/i.test(req.path) ? next() : jsonBody(req, res, next)));
   app.use('/api', (_req, res, next) => {
     res.setHeader('Cache-Control', 'no-store');
     next();

@@ -30,6 +30,21 @@ describe('POST /api/analysis', () => {
     expect(response.body.error.fields['document.profiles.0.direction']).toMatch(/unit vector/);
   });
 
+  it('hands the body to the worker as text: broken JSON, a wrong shape and a missing body each get a 400 with a message', async () => {
+    const broken = await customer.post('/api/analysis').set(CLIENT).set('Content-Type', 'application/json').send('{"document": [');
+    expect(broken.status).toBe(400);
+    expect(broken.body.error.code).toBe('malformed_json');
+    const extra = await customer.post('/api/analysis').set(CLIENT).send({ document: sampleDocument(), colour: 'red' });
+    expect(extra.status).toBe(400);
+    expect(extra.body.error.message).toMatch(/Unknown field: colour/);
+    const missing = await customer.post('/api/analysis').set(CLIENT).send({});
+    expect(missing.status).toBe(400);
+    expect(missing.body.error.message).toMatch(/Send the design document/);
+    const notJson = await customer.post('/api/analysis').set(CLIENT).set('Content-Type', 'text/plain').send('hello');
+    expect(notJson.status).toBe(400);
+    expect(notJson.body.error.message).toMatch(/Content-Type: application\/json/);
+  });
+
   it('refuses anonymous visitors with 401', async () => {
     const response = await request(t.app).post('/api/analysis').set(CLIENT).send({ document: sampleDocument() });
     expect(response.status).toBe(401);

@@ -6,7 +6,21 @@ import type { Database } from '../../db/database';
 export const SESSION_COOKIE_NAME = 'slotwise.sid';
 const SESSION_LIFETIME_MS = 7 * 24 * 60 * 60 * 1000;
 
-const SequelizeStore = connectSessionSequelize(session.Store);
+const BaseSequelizeStore = connectSessionSequelize(session.Store);
+
+/**
+ * The package's store, with a lean read: every signed-in request reads its session, and the
+ * package builds a full Sequelize model instance for it; a raw row of the one column does the same.
+ */
+class SequelizeStore extends BaseSequelizeStore {
+  override get(sid: string, callback: (error: unknown, session?: session.SessionData | null) => void): void {
+    const model = (this as unknown as { sessionModel: { findOne(options: object): Promise<{ data: string } | null> } }).sessionModel;
+    model
+      .findOne({ where: { sid }, attributes: ['data'], raw: true })
+      .then((row) => callback(null, row ? (JSON.parse(row.data) as session.SessionData) : null))
+      .catch((error: unknown) => callback(error));
+  }
+}
 export type SessionStore = InstanceType<typeof SequelizeStore>;
 
 /**

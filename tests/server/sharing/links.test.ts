@@ -43,6 +43,32 @@ describe('read-only links', () => {
     expect(listed.body.links.find((link: { id: number }) => link.id === made.body.link.id).openCount).toBe(2);
   });
 
+  it('sends a link read gzipped when asked, the same text again on a repeat, and plain text to a client that does not accept gzip', async () => {
+    const made = await designer.post('/api/links').set(CLIENT).send({ designId });
+    const url = `/api/shared/${made.body.token}`;
+    const raw = (agent: ReturnType<TestApp['anonymous']>, encoding: string) =>
+      agent
+        .get(url)
+        .set('Accept-Encoding', encoding)
+        .buffer(true)
+        .parse((response, done) => {
+          const chunks: Buffer[] = [];
+          response.on('data', (chunk: Buffer) => chunks.push(chunk));
+          response.on('end', () => done(null, Buffer.concat(chunks)));
+        });
+    const first = await raw(t.anonymous(), 'gzip');
+    const again = await raw(t.anonymous(), 'gzip');
+    expect(first.headers['content-encoding']).toBe('gzip');
+    expect(first.headers.vary).toMatch(/Accept-Encoding/i);
+    expect(Buffer.compare(first.body as Buffer, again.body as Buffer)).toBe(0);
+    // superagent has already inflated the gzip stream (a broken one would have failed the read).
+    const text = (first.body as Buffer).toString('utf8');
+    expect(JSON.parse(text).revision.document.profiles.length).toBeGreaterThan(0);
+    const plain = await raw(t.anonymous(), 'identity');
+    expect(plain.headers['content-encoding']).toBeUndefined();
+    expect((plain.body as Buffer).toString('utf8')).toBe(text);
+  });
+
   it('a pinned link keeps showing its revision after a new save', async () => {
     const latest = (await designer.get(`/api/designs/${designId}`)).body;
     const made = await designer.post('/api/links').set(CLIENT).send({ designId, revision: latest.revision.number });
