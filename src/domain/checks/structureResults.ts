@@ -360,41 +360,23 @@ function legChecks(ctx: AnalysisContext, legs: ProfileInfo[], loads: { force: nu
     const profileId = leg.profile.id;
     const length = leg.profile.length;
     const ok = combined <= 1 && (rating === null || load <= rating);
-    // Two literals rather than a spread: the same keys in the same order, without a copy per leg.
-    results.push(
-      foot
-        ? {
-            profileId,
-            length,
-            endCondition,
-            effectiveLengthFactor: K,
-            load: round(load),
-            criticalLoad: round(cap.criticalLoad),
-            squashLoad: round(cap.squashLoad),
-            chi: Math.round(cap.chi * 10000) / 10000,
-            bucklingLoad: round(cap.bucklingLoad),
-            utilisation: Math.round(utilisation * 10000) / 10000,
-            bendingMoment: Math.round(moment),
-            combinedUtilisation: Math.round(combined * 10000) / 10000,
-            support: { accessoryId: foot.id, rating },
-            ok,
-          }
-        : {
-            profileId,
-            length,
-            endCondition,
-            effectiveLengthFactor: K,
-            load: round(load),
-            criticalLoad: round(cap.criticalLoad),
-            squashLoad: round(cap.squashLoad),
-            chi: Math.round(cap.chi * 10000) / 10000,
-            bucklingLoad: round(cap.bucklingLoad),
-            utilisation: Math.round(utilisation * 10000) / 10000,
-            bendingMoment: Math.round(moment),
-            combinedUtilisation: Math.round(combined * 10000) / 10000,
-            ok,
-          },
-    );
+    // The support sits before `ok` when there is one (the order the results have always had).
+    results.push({
+      profileId,
+      length,
+      endCondition,
+      effectiveLengthFactor: K,
+      load: round(load),
+      criticalLoad: round(cap.criticalLoad),
+      squashLoad: round(cap.squashLoad),
+      chi: Math.round(cap.chi * 10000) / 10000,
+      bucklingLoad: round(cap.bucklingLoad),
+      utilisation: Math.round(utilisation * 10000) / 10000,
+      bendingMoment: Math.round(moment),
+      combinedUtilisation: Math.round(combined * 10000) / 10000,
+      ...(foot ? { support: { accessoryId: foot.id, rating } } : {}),
+      ok,
+    });
   });
   return results;
 }
