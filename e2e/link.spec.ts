@@ -16,6 +16,8 @@ test('an instructor shares a class link; an anonymous visitor views it read-only
   await page.getByRole('button', { name: 'Create class' }).click();
   await expect(page.getByRole('heading', { name: 'Frames 101' })).toBeVisible();
   await page.getByRole('button', { name: 'Add link' }).click();
+  // Other specs add designs to the same shop; link the demo enclosure by name.
+  await page.getByLabel('Design').selectOption({ label: 'Two-level printer enclosure' });
   await page.getByRole('button', { name: 'Make link' }).click();
   const url = await page.getByTestId('new-link-url').inputValue();
   expect(url).toMatch(/\/view\/[A-Za-z0-9_-]{43}$/);
