@@ -20,6 +20,8 @@ test('a step ticked offline waits on the device and reaches the server when the 
   await signIn(builder, 'builder');
   await builder.goto(`/workbench/builds/${buildId}?tab=build`);
   await expect(builder.getByTestId('step-position')).toContainText('Step 1 of 15');
+  // Let the service worker finish installing first: going offline during its precache fails the install.
+  await builder.evaluate(() => navigator.serviceWorker.ready.then(() => undefined));
 
   await builderContext.setOffline(true);
   await builder.getByRole('checkbox', { name: 'Step 1 done' }).click();
