@@ -4,6 +4,7 @@
  */
 import { spawn, type ChildProcess } from 'node:child_process';
 import { join } from 'node:path';
+import autocannon from 'autocannon';
 
 export async function startDemoServer(options: { port: number; dbFile: string; name: string }): Promise<ChildProcess> {
   const base = `http://127.0.0.1:${options.port}`;
@@ -22,17 +23,13 @@ export async function startDemoServer(options: { port: number; dbFile: string; n
     stdio: 'ignore',
     detached: true,
   });
-  const deadline = Date.now() + 120_000;
-  while (Date.now() < deadline) {
-    try {
-      if ((await fetch(`${base}/api/health`)).ok) return server;
-    } catch {
-      // not listening yet
-    }
-    await new Promise((r) => setTimeout(r, 500));
+  try {
+    await waitForHealth(base);
+    return server;
+  } catch (error) {
+    stopServer(server);
+    throw error;
   }
-  stopServer(server);
-  throw new Error(`The ${options.name} benchmark server did not start within 120 s.`);
 }
 
 export function stopServer(server: ChildProcess): void {
@@ -44,4 +41,25 @@ export function stopServer(server: ChildProcess): void {
       // already gone
     }
   }
+}
+
+/** Resolves once the server at `base` answers its health route (within 120 s). */
+export async function waitForHealth(base: string): Promise<void> {
+  const deadline = Date.now() + 120_000;
+  while (Date.now() < deadline) {
+    try {
+      if ((await fetch(`${base}/api/health`)).ok) return;
+    } catch {
+      // not listening yet
+    }
+    await new Promise((r) => setTimeout(r, 250));
+  }
+  throw new Error(`The bench server at ${base} did not start within 120 s.`);
+}
+
+/** autocannon as a promise. */
+export function cannon(options: autocannon.Options): Promise<autocannon.Result> {
+  return new Promise((resolvePromise, reject) => {
+    autocannon(options, (error, result) => (error ? reject(error) : resolvePromise(result)));
+  });
 }

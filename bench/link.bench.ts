@@ -17,9 +17,9 @@ import { loadavg, tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { chromium } from '@playwright/test';
-import autocannon from 'autocannon';
 import playwrightConfig from '../e2e/playwright.config';
 import type { BenchRow } from './types';
+import { cannon, waitForHealth } from './demoServer';
 import { serverNodeArgs } from './mode';
 
 const BENCH = 'link';
@@ -30,25 +30,6 @@ const CONNECTIONS = 50;
 /** Requests per minute per address for the bench server: far above what 50 connections reach. */
 const BENCH_LINK_LIMIT = 10_000_000;
 const DESIGNER = { email: 'designer@harborlane.example', password: 'slotwise-demo-2026' };
-
-async function waitForHealth(base: string): Promise<void> {
-  const deadline = Date.now() + 120_000;
-  while (Date.now() < deadline) {
-    try {
-      if ((await fetch(`${base}/api/health`)).ok) return;
-    } catch {
-      // not listening yet
-    }
-    await new Promise((r) => setTimeout(r, 250));
-  }
-  throw new Error('The link bench server did not start within 120 s.');
-}
-
-function cannon(options: autocannon.Options): Promise<autocannon.Result> {
-  return new Promise((resolvePromise, reject) => {
-    autocannon(options, (error, result) => (error ? reject(error) : resolvePromise(result)));
-  });
-}
 
 /**
  * CPU time a process has used, s, from /proc (Linux; NaN elsewhere). User + system ticks at

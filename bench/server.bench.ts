@@ -12,9 +12,10 @@ import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import autocannon from 'autocannon';
+import type autocannon from 'autocannon';
 import { pick, serverNodeArgs } from './mode';
 import type { BenchRow } from './types';
+import { cannon, waitForHealth } from './demoServer';
 
 const BENCH = 'server';
 const root = fileURLToPath(new URL('..', import.meta.url));
@@ -44,25 +45,6 @@ const coincident = (n: number) => ({
   systemId: 'metric-40',
   profiles: Array.from({ length: n }, (_, i) => ({ id: `p${i}`, variantId: 'm40-40x40', length: 500, start: [0, 0, 0], direction: [1, 0, 0] })),
 });
-
-async function waitForHealth(base: string): Promise<void> {
-  const deadline = Date.now() + 120_000;
-  while (Date.now() < deadline) {
-    try {
-      if ((await fetch(`${base}/api/health`)).ok) return;
-    } catch {
-      // not listening yet
-    }
-    await new Promise((resolve) => setTimeout(resolve, 200));
-  }
-  throw new Error('the bench server did not start');
-}
-
-function cannon(options: autocannon.Options): Promise<autocannon.Result> {
-  return new Promise((resolve, reject) => {
-    autocannon(options, (error, result) => (error ? reject(error) : resolve(result)));
-  });
-}
 
 export async function run(): Promise<BenchRow[]> {
   const dir = mkdtempSync(join(tmpdir(), 'slotwise-server-bench-'));
