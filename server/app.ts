@@ -7,7 +7,8 @@ import { serveClient } from './middleware/clientStatic';
 import { csrfGuard } from './middleware/csrfGuard';
 import { embeddable } from './middleware/embeddable';
 import { apiNotFound, errorHandler } from './middleware/errorHandler';
-import { securityHeaders } from './middleware/securityHeaders';
+import { recordSecurityHeaders, setFixedHeaders, helmetFor } from './middleware/securityHeaders';
+import { createHotReads, type HotReads } from './hotReads';
 import { createAnalysisPool, type AnalysisPool } from './modules/analysis/pool';
 import { analysisRouter } from './modules/analysis/router';
 import { createPassport } from './modules/auth/passport';
@@ -18,7 +19,7 @@ import { createSessionMiddleware, type SessionStore } from './modules/auth/sessi
 import { DEFAULT_SIGN_IN_RATE_LIMIT, signInRateLimiter, type SignInRateLimit } from './modules/auth/signInRateLimit';
 import { buildsRouter } from './modules/builds/router';
 import { createBuildsService } from './modules/builds/service';
-import { designsRouter } from './modules/designs/router';
+import { DESIGN_LIST_ROLES, designsRouter } from './modules/designs/router';
 import { createDesignsService } from './modules/designs/service';
 import { healthRouter } from './modules/health/router';
 import { usersRouter } from './modules/users/router';
@@ -28,7 +29,7 @@ import { createPasswordResets } from './modules/auth/passwordReset';
 import { passwordResetRouter } from './modules/auth/passwordResetRouter';
 import { classesRouter } from './modules/classes/router';
 import { createClassesService } from './modules/classes/service';
-import { linksRouter, sharedRouter, type LinkRateLimit } from './modules/links/router';
+import { linkLimitOf, linksRouter, sharedRouter, type LinkRateLimit } from './modules/links/router';
 import { createLinksService } from './modules/links/service';
 import { createMailService, type MailService } from './modules/mail/mailService';
 import { outboxRouter } from './modules/mail/router';
@@ -64,6 +65,12 @@ export function mailServiceOf(app: Express): MailService | undefined {
   return mailServices.get(app);
 }
 const analysisPools = new WeakMap<Express, AnalysisPool>();
+const hotReadsOfApp = new WeakMap<Express, HotReads>();
+
+/** The app's hot reads (tests count the answers served from memory). */
+export function hotReadsOf(app: Express): HotReads | undefined {
+  return hotReadsOfApp.get(app);
+}
 
 /** Builds the whole HTTP application without listening, so tests can drive it on a temporary database. */
 export function createApp(deps: AppDependencies): Express {
@@ -97,7 +104,26 @@ export function createApp(deps: AppDependencies): Express {
   app.set('trust proxy', config.trustProxy);
   app.set('query parser', 'simple');
 
-  app.use(securityHeaders({ production, behindTls: config.trustProxy !== false }));
+  const headerOptions = { production, behindTls: config.trustProxy !== false };
+  const fixedHeaders = recordSecurityHeaders(headerOptions);
+  app.use(fixedHeaders ? setFixedHeaders(fixedHeaders) : helmetFor(headerOptions));
+  // API answers carry no-store, so an ETag would only cost a hash of every body.
+  app.set('etag', false);
+
+  // The designs list and link reads, repeated from memory ahead of the router (see hotReads.ts).
+  const linkLimit = linkLimitOf(deps.linkRateLimit ?? { max: config.linkRequestsPerMinute, windowMs: 60_000 });
+  const hotReads = createHotReads({
+    db,
+    securityHeaders: fixedHeaders,
+    listRoles: DESIGN_LIST_ROLES,
+    linkLimit,
+    countLinkOpen: links.countOpen,
+    trustProxy: app.get('trust proxy fn'),
+    requestLog: config.logRequests ? logger : undefined,
+  });
+  hotReadsOfApp.set(app, hotReads);
+  const handle = app.handle.bind(app);
+  app.handle = (req, res, callback) => hotReads.serve(req, res, () => handle(req, res, callback));
   // API answers are JSON built per request (a save echoes a ~1 MB document): gzip's fastest level
   // takes about a third less time for ~20 % more bytes there; static files keep the default level.
   const compressApi = compression({ level: 1 });
@@ -124,8 +150,8 @@ export function createApp(deps: AppDependencies): Express {
   });
   app.use('/api/health', healthRouter(db, APP_VERSION, logger));
   // Read-only links need no session and never write: mounted before sessions and the CSRF guard.
-  app.use('/api/shared', sharedRouter({ links, rateLimit: deps.linkRateLimit ?? { max: config.linkRequestsPerMinute, windowMs: 60_000 } }));
-  app.use('/api', csrfGuard, sessions, passport.initialize(), passport.session());
+  app.use('/api/shared', sharedRouter({ links, limit: linkLimit, hotReads }));
+  app.use('/api', csrfGuard, sessions, passport.initialize(), passport.session(), hotReads.rememberSignedIn);
 
   app.use('/api/auth/password-reset', passwordResetRouter({ resets, config, limiter: signInLimiter }));
   app.use('/api/auth', authRouter({ auth, passport, signInLimiter }));
@@ -140,7 +166,7 @@ export function createApp(deps: AppDependencies): Express {
   app.use('/api/designs/:designId/uploads', designUploadsRouter(uploads));
   app.use('/api/designs/:designId', revisionsRouter({ db, designs }));
   const builds = createBuildsService(db);
-  app.use('/api/designs', designsRouter(designs, { builderMayRead: builds.builderMayRead }));
+  app.use('/api/designs', designsRouter(designs, { builderMayRead: builds.builderMayRead, hotReads }));
   app.use('/api/builds', buildsRouter(builds));
   app.use('/api/analysis', analysisRouter(analysisPool, config.analysis));
   app.use('/api', apiNotFound);

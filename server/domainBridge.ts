@@ -1,6 +1,6 @@
 import { analyzeDesign, type DesignAnalysis } from '../src/domain/analysis/analyze';
 import { createEmptyDesign } from '../src/domain/design/create';
-import { parseDesignDocument } from '../src/domain/design/parse';
+import { parseDesignDocument, parseEditedDocument } from '../src/domain/design/parse';
 import type { DesignDocument } from '../src/domain/design/schema';
 import type { LengthUnit } from '../src/domain/units';
 
@@ -10,9 +10,13 @@ export type DocumentCheck =
   | { ok: true; design: DesignDocument }
   | { ok: false; errors: { path: string; message: string }[] };
 
-/** Checks untrusted JSON as a design document: migrates older versions, validates shape, ids and references. */
-export function checkDesignDocument(json: unknown): DocumentCheck {
-  return parseDesignDocument(json);
+/**
+ * Checks untrusted JSON as a design document: migrates older versions, validates shape, ids and
+ * references. With `previous` (the parsed revision it was edited from), parts equal to the
+ * previous ones are not checked again; the answer is the same.
+ */
+export function checkDesignDocument(json: unknown, previous?: DesignDocument): DocumentCheck {
+  return previous ? parseEditedDocument(json, previous) : parseDesignDocument(json);
 }
 
 /** A new, empty design document. */

@@ -1,6 +1,6 @@
 import { chmodSync, closeSync, existsSync, mkdirSync, openSync } from 'node:fs';
 import { dirname } from 'node:path';
-import { Sequelize, Transaction, type Options } from 'sequelize';
+import { QueryTypes, Sequelize, Transaction, type Options, type QueryOptions } from 'sequelize';
 import { defineModels, type Models } from './models';
 import { createWriteQueue } from './writeQueue';
 
@@ -15,8 +15,23 @@ export interface Database {
    * Runs `work` in one IMMEDIATE transaction, after any write already running in this process:
    * writes queue here instead of racing for SQLite's single write lock.
    */
-  write<T>(work: (transaction: Transaction) => Promise<T>): Promise<T>;
+  write<T>(work: (transaction: Transaction) => Promise<T>, options?: WriteOptions): Promise<T>;
+  /**
+   * A number that moves on whenever a statement other than a read has finished (inserts, updates,
+   * deletes, commits, schema changes), whether or not it went through `write`. Answers kept in
+   * memory are tagged with the count taken before they were read, and used only while it stands.
+   * Writes made with `{ changesAnswers: false }` do not move it.
+   */
+  changeCount(): number;
   close(): Promise<void>;
+}
+
+export interface WriteOptions {
+  /**
+   * False for writes that change nothing any answer kept in memory shows (a link's open counter):
+   * they leave `changeCount` alone, so the kept answers survive them.
+   */
+  changesAnswers?: boolean;
 }
 
 interface SqliteConnection {
@@ -46,6 +61,24 @@ function setBusyTimeoutOnEveryConnection(sequelize: Sequelize): void {
   };
 }
 
+type Sql = string | { query: string; values: unknown[] };
+const READ_STATEMENT = /^\s*SELECT\b/i;
+
+/**
+ * Counts finished statements that are not plain reads. Every Sequelize call (models, raw queries,
+ * transactions' COMMIT) goes through `sequelize.query`, so wrapping it sees them all. A statement
+ * that fails is counted too: counting too often only costs a cache miss.
+ */
+function countChanges(sequelize: Sequelize, uncounted: WeakSet<Transaction>): () => number {
+  let changes = 0;
+  const query: (sql: Sql, options?: QueryOptions) => Promise<unknown> = sequelize.query.bind(sequelize);
+  const isRead = (sql: Sql, options?: QueryOptions) => options?.type === QueryTypes.SELECT || READ_STATEMENT.test(typeof sql === 'string' ? sql : sql.query);
+  const counts = (sql: Sql, options?: QueryOptions) => !isRead(sql, options) && !(options?.transaction && uncounted.has(options.transaction));
+  const counted = (sql: Sql, options?: QueryOptions) => (counts(sql, options) ? query(sql, options).finally(() => void changes++) : query(sql, options));
+  Object.assign(sequelize, { query: counted });
+  return () => changes;
+}
+
 /** The database holds password hashes and sessions: only the server's own user may read it. */
 export const DATABASE_FILE_MODE = 0o600;
 
@@ -72,6 +105,8 @@ export async function openDatabase(path: string): Promise<Database> {
   };
   const sequelize = new Sequelize(options);
   setBusyTimeoutOnEveryConnection(sequelize);
+  const uncounted = new WeakSet<Transaction>();
+  const changeCount = countChanges(sequelize, uncounted);
   await sequelize.query('PRAGMA journal_mode = WAL');
   await sequelize.query(`PRAGMA busy_timeout = ${BUSY_TIMEOUT_MS}`);
   await sequelize.query('PRAGMA foreign_keys = ON');
@@ -83,7 +118,14 @@ export async function openDatabase(path: string): Promise<Database> {
     sequelize,
     models,
     path,
-    write: (work) => queue(() => sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, work)),
+    write: (work, writeOptions) =>
+      queue(() =>
+        sequelize.transaction({ type: Transaction.TYPES.IMMEDIATE }, (transaction) => {
+          if (writeOptions?.changesAnswers === false) uncounted.add(transaction);
+          return work(transaction);
+        }),
+      ),
+    changeCount,
     close: () => sequelize.close(),
   };
 }

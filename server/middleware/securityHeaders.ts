@@ -1,4 +1,5 @@
 import helmet from 'helmet';
+import type { ServerResponse } from 'node:http';
 import type { RequestHandler } from 'express';
 
 /**
@@ -7,15 +8,23 @@ import type { RequestHandler } from 'express';
  * and images from blob:, data: URLs for textures and exports, inline styles set by R3F.
  */
 export function securityHeaders(options: { production: boolean; behindTls: boolean }): RequestHandler {
-  return fixedHeaders(helmetFor(options));
+  const fixed = recordSecurityHeaders(options);
+  return fixed ? setFixedHeaders(fixed) : helmetFor(options);
+}
+
+/** Headers to set and to remove on every answer. */
+export interface FixedHeaders {
+  entries: [string, string | number | readonly string[]][];
+  removals: string[];
 }
 
 /**
  * helmet's headers are the same for every request with these options, but its chain of a dozen
  * middlewares ran per request (~3 % of the server's CPU under load): run it once against a
- * recording response and set the recorded headers on each request instead.
+ * recording response and set the recorded headers on each request instead. Null if helmet did
+ * not finish synchronously (a later version might not), and then it runs per request.
  */
-function fixedHeaders(middleware: RequestHandler): RequestHandler {
+export function recordSecurityHeaders(options: { production: boolean; behindTls: boolean }): FixedHeaders | null {
   const headers = new Map<string, string | number | readonly string[]>();
   const removed = new Set<string>();
   const recorder = {
@@ -31,17 +40,22 @@ function fixedHeaders(middleware: RequestHandler): RequestHandler {
     getHeader: (name: string) => headers.get(name),
   };
   let finished = false;
-  middleware({ headers: {}, method: 'GET', url: '/' } as never, recorder as never, (error?: unknown) => {
+  helmetFor(options)({ headers: {}, method: 'GET', url: '/' } as never, recorder as never, (error?: unknown) => {
     if (error) throw error;
     finished = true;
   });
-  // helmet is synchronous; if a later version is not, fall back to running it per request.
-  if (!finished) return middleware;
-  const entries = [...headers];
-  const removals = [...removed];
+  return finished ? { entries: [...headers], removals: [...removed] } : null;
+}
+
+/** Sets recorded headers on a response (an Express one or a plain Node one). */
+export function applyFixedHeaders(res: Pick<ServerResponse, 'setHeader' | 'removeHeader'>, fixed: FixedHeaders): void {
+  for (const [name, value] of fixed.entries) res.setHeader(name, value);
+  for (const name of fixed.removals) res.removeHeader(name);
+}
+
+export function setFixedHeaders(fixed: FixedHeaders): RequestHandler {
   return (_req, res, next) => {
-    for (const [name, value] of entries) res.setHeader(name, value);
-    for (const name of removals) res.removeHeader(name);
+    applyFixedHeaders(res, fixed);
     next();
   };
 }

@@ -13,9 +13,12 @@ export function documentErrorsToAppError(errors: { path: string; message: string
   return new AppError(400, 'invalid_document', `The design document has ${errors.length} problem${errors.length === 1 ? '' : 's'}, starting with ${firstKey}: ${firstMessage}.`, { fields });
 }
 
-/** The parsed document, or a 400 whose fields point into it ("document.profiles.0.length"). */
-export async function requireValidDocument(json: unknown, fieldPrefix = 'document'): Promise<DesignDocument> {
-  const result = checkDesignDocument(json);
+/**
+ * The parsed document, or a 400 whose fields point into it ("document.profiles.0.length").
+ * `previous`: the parsed revision the document was edited from, if at hand (see checkDesignDocument).
+ */
+export async function requireValidDocument(json: unknown, fieldPrefix = 'document', previous?: DesignDocument): Promise<DesignDocument> {
+  const result = checkDesignDocument(json, previous);
   if (result.ok) return result.design;
   throw documentErrorsToAppError(result.errors, fieldPrefix);
 }

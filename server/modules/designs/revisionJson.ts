@@ -30,9 +30,10 @@ function remember(key: string, value: Buffer): void {
  *
  * A revision never changes, and a link or design read sends the same text again and again, so the
  * gzipped answer is kept (least recently used first out) by the hash of its text: a repeat costs a
- * hash instead of a compression. A client that does not accept gzip gets the text.
+ * hash instead of a compression. A client that does not accept gzip gets the text. Returns the
+ * answer's JSON text.
  */
-export function sendRevisionJson(res: Response, outer: Record<string, unknown>, meta: RevisionMeta, documentJson: string): void {
+export function sendRevisionJson(res: Response, outer: Record<string, unknown>, meta: RevisionMeta, documentJson: string): string {
   const text = JSON.stringify({ ...outer, revision: { ...meta, document: PLACEHOLDER } });
   // `revision` is the last key and `document` its last key, so the last placeholder is ours.
   const at = text.lastIndexOf(`"${PLACEHOLDER}"`);
@@ -41,7 +42,7 @@ export function sendRevisionJson(res: Response, outer: Record<string, unknown>, 
   res.vary('Accept-Encoding');
   if (body.length < GZIP_MIN_BYTES || res.req.acceptsEncodings('gzip', 'identity') !== 'gzip') {
     res.send(body);
-    return;
+    return body;
   }
   const key = createHash('sha256').update(body).digest('base64');
   const sendGzipped = (gzipped: Buffer) => {
@@ -54,7 +55,7 @@ export function sendRevisionJson(res: Response, outer: Record<string, unknown>, 
     gzipCache.delete(key);
     gzipCache.set(key, cached);
     sendGzipped(cached);
-    return;
+    return body;
   }
   // Compressed off the request thread (libuv's pool), at the level the API's middleware uses.
   gzip(body, { level: 1 }, (error, gzipped) => {
@@ -65,4 +66,5 @@ export function sendRevisionJson(res: Response, outer: Record<string, unknown>, 
     remember(key, gzipped);
     sendGzipped(gzipped);
   });
+  return body;
 }

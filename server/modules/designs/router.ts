@@ -1,6 +1,7 @@
 import { Router, type RequestHandler } from 'express';
 import { createEmptyDesignDocument } from '../../domainBridge';
-import type { UserModel } from '../../db/models/user';
+import type { Role, UserModel } from '../../db/models/user';
+import type { HotReads } from '../../hotReads';
 import { requireAuth, requireRole } from '../../middleware/requireAuth';
 import { validate } from '../../middleware/validate';
 import { requireValidDocument } from './documentCheck';
@@ -11,7 +12,12 @@ import type { DesignsService } from './service';
 export interface DesignsRouterOptions {
   /** Whether a builder may read a revision (they are assigned to a build of it). */
   builderMayRead?: (user: UserModel, designId: number, revision: number) => Promise<boolean>;
+  /** Keeps the list's answer for repeats (server/hotReads.ts). */
+  hotReads?: Pick<HotReads, 'rememberDesignsList'>;
 }
+
+/** Who may list and read designs. */
+export const DESIGN_LIST_ROLES = ['owner', 'designer'] as const satisfies readonly Role[];
 
 /**
  * /api/designs — designs and their revisions; owners and designers. A builder assigned to a build
@@ -19,7 +25,7 @@ export interface DesignsRouterOptions {
  */
 export function designsRouter(designs: DesignsService, options: DesignsRouterOptions = {}): Router {
   const router = Router();
-  const staff = requireRole('owner', 'designer');
+  const staff = requireRole(...DESIGN_LIST_ROLES);
   const staffOrAssignedBuilder: RequestHandler = async (req, res, next) => {
     const params = revisionParamsSchema.safeParse(req.params);
     if (req.user?.role === 'builder' && params.success && options.builderMayRead && (await options.builderMayRead(req.user, params.data.id, params.data.number))) return next();
@@ -27,8 +33,10 @@ export function designsRouter(designs: DesignsService, options: DesignsRouterOpt
   };
   router.use(requireAuth);
 
-  router.route('/').get(staff).get(async (_req, res) => {
-    res.json({ designs: await designs.list() });
+  router.route('/').get(staff).get(async (req, res) => {
+    const text = JSON.stringify({ designs: await designs.list() });
+    res.type('application/json').send(text);
+    options.hotReads?.rememberDesignsList(req, text);
   });
 
   router.route('/').post(staff).post(validate({ body: createDesignBodySchema }), async (req, res) => {
@@ -62,7 +70,8 @@ export function designsRouter(designs: DesignsService, options: DesignsRouterOpt
   router.route('/:id/revisions').post(staff).post(validate({ params: designIdParamsSchema, body: saveRevisionBodySchema }), async (req, res) => {
     const { id } = req.params;
     const body = req.body;
-    const document = await requireValidDocument(body.document);
+    // The revision it was edited from, if still in memory: its unchanged parts need no new check.
+    const document = await requireValidDocument(body.document, 'document', designs.parsedRevision(id, body.baseRevision));
     const revision = await designs.saveRevision(id, req.user!, body.baseRevision, {
       document,
       thumbnail: body.thumbnail,

@@ -3,6 +3,7 @@ import type { DesignDocument } from '../../../src/domain/design/schema';
 import type { Database } from '../../db/database';
 import type { UserModel } from '../../db/models/user';
 import { AppError, notFound } from '../../middleware/appError';
+import { documentJson as jsonOfDocument } from './documentJson';
 import {
   presentRevisionMeta,
   thumbnailUrl,
@@ -45,8 +46,44 @@ const countsOf = (document: DesignDocument) => ({
   panelCount: document.panels.length,
 });
 
+/** Parsed documents of recent revisions kept for the next save's check: at most this many, and this much JSON. */
+const PARSED_KEPT = 16;
+const PARSED_KEPT_BYTES = 32 * 1024 * 1024;
+
+/**
+ * The parsed documents of the revisions saved last, by design and number (least recently used out
+ * first). A revision never changes, so nothing here goes stale. The next save of the design is
+ * checked against its base revision's parts (parseEditedDocument). Kept documents are never mutated.
+ */
+function keptParsedRevisions() {
+  const kept = new Map<string, { document: DesignDocument; bytes: number }>();
+  let bytes = 0;
+  const keyOf = (designId: number, number: number) => `${designId}:${number}`;
+  return {
+    get(designId: number, number: number): DesignDocument | undefined {
+      const key = keyOf(designId, number);
+      const entry = kept.get(key);
+      if (!entry) return undefined;
+      kept.delete(key);
+      kept.set(key, entry);
+      return entry.document;
+    },
+    set(designId: number, number: number, document: DesignDocument, jsonBytes: number): void {
+      if (jsonBytes > PARSED_KEPT_BYTES / 2) return;
+      kept.set(keyOf(designId, number), { document, bytes: jsonBytes });
+      bytes += jsonBytes;
+      for (const [key, entry] of kept) {
+        if (kept.size <= PARSED_KEPT && bytes <= PARSED_KEPT_BYTES) break;
+        kept.delete(key);
+        bytes -= entry.bytes;
+      }
+    },
+  };
+}
+
 export function createDesignsService(db: Database) {
   const { Design, DesignRevision } = db.models;
+  const parsed = keptParsedRevisions();
   const select = <T extends object>(sql: string, replacements: Record<string, unknown> = {}) =>
     db.sequelize.query<T>(sql, { replacements, type: QueryTypes.SELECT });
 
@@ -92,6 +129,7 @@ export function createDesignsService(db: Database) {
     /** Creates the design and its revision 1 in one transaction. */
     async create(author: UserModel, document: DesignDocument, extras: Omit<NewRevision, 'document'> = {}): Promise<{ design: DesignSummary; revision: Revision }> {
       const input: NewRevision = { ...extras, document };
+      const documentJson = jsonOfDocument(document);
       const { id, createdAt } = await db.write(async (transaction) => {
         const design = await Design.create(
           {
@@ -109,7 +147,7 @@ export function createDesignsService(db: Database) {
           {
             designId: design.id,
             number: 1,
-            document: JSON.stringify(document),
+            document: documentJson,
             ...countsOf(document),
             thumbnail: extras.thumbnail ?? null,
             message: extras.message ?? null,
@@ -119,6 +157,7 @@ export function createDesignsService(db: Database) {
         );
         return { id: design.id, createdAt: row.createdAt };
       });
+      parsed.set(id, 1, document, documentJson.length);
       return { design: await summary(id), revision: { ...savedMeta(id, 1, author, input, createdAt), document } };
     },
 
@@ -128,7 +167,7 @@ export function createDesignsService(db: Database) {
      */
     async saveRevision(designId: number, author: UserModel, baseRevision: number, input: NewRevision): Promise<StoredRevision> {
       // Serialised once, outside the write lock; the same text is stored and sent back.
-      const documentJson = JSON.stringify(input.document);
+      const documentJson = jsonOfDocument(input.document);
       const { number, createdAt } = await db.write(async (transaction) => {
         const design = await Design.findByPk(designId, { transaction });
         if (!design || design.archivedAt) throw notFound('That design');
@@ -162,8 +201,12 @@ export function createDesignsService(db: Database) {
         await design.save({ transaction });
         return { number: next, createdAt: row.createdAt };
       });
+      parsed.set(designId, number, input.document, documentJson.length);
       return { meta: savedMeta(designId, number, author, input, createdAt), documentJson };
     },
+
+    /** The parsed document of a revision saved recently by this server, if still kept. */
+    parsedRevision: (designId: number, number: number): DesignDocument | undefined => parsed.get(designId, number),
 
     async listRevisions(designId: number): Promise<RevisionMeta[]> {
       await summary(designId);

@@ -1,5 +1,6 @@
 import { Router, type RequestHandler } from 'express';
-import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
+import { ipKeyGenerator, MemoryStore, rateLimit } from 'express-rate-limit';
+import type { HotReads, LinkLimit } from '../../hotReads';
 import { DEFAULT_LINK_REQUESTS_PER_MINUTE, type AppConfig } from '../../config';
 import { AppError } from '../../middleware/appError';
 import { requireRole } from '../../middleware/requireAuth';
@@ -51,17 +52,23 @@ export function linksRouter(deps: { links: LinksService; designs: DesignsService
 }
 
 export interface LinkRateLimit {
-  /** Requests per client address within the window, over all link routes. */
   max: number;
   windowMs: number;
 }
 
 export const DEFAULT_LINK_RATE_LIMIT: LinkRateLimit = { max: DEFAULT_LINK_REQUESTS_PER_MINUTE, windowMs: 60_000 };
 
-function linkRateLimiter(limits: LinkRateLimit): RequestHandler {
+/** The link routes' limit and its counter store, shared by the middleware and the hot reads. */
+export function linkLimitOf(limits: LinkRateLimit): LinkLimit {
+  return { store: new MemoryStore(), limit: limits.max, windowMs: limits.windowMs, name: 'shared-link-reads' };
+}
+
+function linkRateLimiter(limits: LinkLimit): RequestHandler {
   return rateLimit({
     windowMs: limits.windowMs,
-    limit: limits.max,
+    limit: limits.limit,
+    store: limits.store,
+    identifier: limits.name,
     standardHeaders: 'draft-8',
     legacyHeaders: false,
     keyGenerator: (req) => ipKeyGenerator(req.ip ?? 'unknown'),
@@ -75,9 +82,9 @@ function linkRateLimiter(limits: LinkRateLimit): RequestHandler {
  * /api/shared/:token — what a read-only link shows, without signing in. Mounted before sessions:
  * a link never carries or creates a session. Only GET exists; every other method is refused.
  */
-export function sharedRouter(deps: { links: LinksService; rateLimit?: LinkRateLimit }): Router {
+export function sharedRouter(deps: { links: LinksService; limit?: LinkLimit; hotReads?: Pick<HotReads, 'rememberLink'> }): Router {
   const router = Router();
-  router.use(linkRateLimiter(deps.rateLimit ?? DEFAULT_LINK_RATE_LIMIT));
+  router.use(linkRateLimiter(deps.limit ?? linkLimitOf(DEFAULT_LINK_RATE_LIMIT)));
   router.use((req, res, next) => {
     res.setHeader('X-Robots-Tag', 'noindex, nofollow');
     if (req.method !== 'GET' && req.method !== 'HEAD') {
@@ -93,10 +100,11 @@ export function sharedRouter(deps: { links: LinksService; rateLimit?: LinkRateLi
       await deps.links.open('0'.repeat(43)).catch(() => undefined);
       throw linkNotFound();
     }
-    const { link, design, revision } = await deps.links.open(token);
+    const { link, design, revision, opened } = await deps.links.open(token);
     // A visitor sees the revision's number and date, not who saved it.
     const meta = { ...revision.meta, createdBy: { id: 0, displayName: '' }, thumbnailUrl: null };
-    sendRevisionJson(res, { link, design }, meta, revision.documentJson);
+    const text = sendRevisionJson(res, { link, design }, meta, revision.documentJson);
+    if (req.method === 'GET') deps.hotReads?.rememberLink(req, token, text, opened);
   });
 
   router.use(() => {

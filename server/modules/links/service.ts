@@ -102,10 +102,15 @@ export function createLinksService(db: Database) {
     if (pendingOpens.size === 0) return;
     const batch = [...pendingOpens];
     pendingOpens.clear();
-    await db.write(async (transaction) => {
-      for (const [id, count] of batch) await ShareLink.increment('openCount', { by: count, where: { id }, transaction });
-    });
+    // No kept answer shows an open count (server/hotReads.ts), so the counts leave them in place.
+    await db.write(
+      async (transaction) => {
+        for (const [id, count] of batch) await ShareLink.increment('openCount', { by: count, where: { id }, transaction });
+      },
+      { changesAnswers: false },
+    );
   }
+  const countOpen = (id: number) => void pendingOpens.set(id, (pendingOpens.get(id) ?? 0) + 1);
   const timer = setInterval(() => void flushOpens().catch(() => undefined), 2000);
   timer.unref();
 
@@ -181,7 +186,13 @@ export function createLinksService(db: Database) {
      * What a link shows: the pinned or latest revision. Every token costs the same work (one hash,
      * one indexed query); unknown, expired and revoked all end in the same 404.
      */
-    async open(token: string): Promise<{ link: { label: string; pinnedRevision: number | null; expiresAt: string | null }; design: { name: string; systemId: string; latestRevision: number }; revision: StoredRevision }> {
+    async open(token: string): Promise<{
+      link: { label: string; pinnedRevision: number | null; expiresAt: string | null };
+      design: { name: string; systemId: string; latestRevision: number };
+      revision: StoredRevision;
+      /** The link's row and when it stops working (the earlier of its own and its class's expiry). */
+      opened: { id: number; activeUntil: number | null };
+    }> {
       const hash = hashToken(token);
       // One indexed query answers every case: the link, its class and design, and the revision it
       // shows (pinned or latest), so a refused token and a shown one cost the same round trip.
@@ -200,14 +211,18 @@ export function createLinksService(db: Database) {
         meta: { number: row.shownNumber, createdAt: sqliteDateToIso(row.shownCreatedAt), createdBy: { id: 0, displayName: '' }, message: row.shownMessage, thumbnailUrl: null },
         documentJson: row.document ?? 'null',
       };
-      pendingOpens.set(row.id, (pendingOpens.get(row.id) ?? 0) + 1);
+      countOpen(row.id);
+      const expiries = [row.expiresAt, row.classExpiresAt].filter((expiry) => expiry !== null).map((expiry) => new Date(sqliteDateToIso(expiry)).getTime());
       return {
+        opened: { id: row.id, activeUntil: expiries.length ? Math.min(...expiries) : null },
         link: { label: row.label, pinnedRevision: row.revision, expiresAt: isoOrNull(row.expiresAt ?? row.classExpiresAt) },
         design: { name: row.designName, systemId: row.systemId, latestRevision: row.latestRevision },
         revision,
       };
     },
 
+    /** Counts an open of a link whose answer was served from memory (see server/hotReads.ts). */
+    countOpen,
     flushOpens,
     stop() {
       clearInterval(timer);
