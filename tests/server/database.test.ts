@@ -1,4 +1,4 @@
-import { existsSync, mkdtempSync, rmSync } from 'node:fs';
+import { existsSync, mkdtempSync, rmSync, statSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { basename, dirname, join } from 'node:path';
 import { QueryTypes } from 'sequelize';
@@ -17,6 +17,30 @@ async function pragma(db: Database, name: string): Promise<unknown> {
   const rows = await db.sequelize.query<Record<string, unknown>>(`PRAGMA ${name}`, { type: QueryTypes.SELECT });
   return Object.values(rows[0])[0];
 }
+
+describe('WAL checkpoints', () => {
+  it('copies the WAL back after writes (never inside a commit), so it does not grow with every save', async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'slotwise-wal-'));
+    const db = await openDatabase(join(dir, 'wal.sqlite'));
+    try {
+      await runMigrations(db);
+      await seedDemo(db, { passwordCost: TEST_PASSWORD_COST });
+      const design = (await db.models.Design.findOne())!;
+      const megabyte = JSON.stringify({ padding: 'x'.repeat(1024 * 1024) });
+      for (let i = 0; i < 8; i++) {
+        await db.write((transaction) => db.models.DesignRevision.create({ designId: design.id, number: 100 + i, document: megabyte, createdBy: design.createdBy }, { transaction }));
+        // Longer than the checkpoint's delay after a write.
+        await new Promise((resolve) => setTimeout(resolve, 400));
+      }
+      // Eight 1 MB commits with no checkpoint leave a WAL of 8 MB or more; checkpointed, it is reused.
+      expect(statSync(join(dir, 'wal.sqlite-wal')).size).toBeLessThan(4 * 1024 * 1024);
+      expect(await db.models.DesignRevision.count({ where: { designId: design.id } })).toBeGreaterThanOrEqual(8);
+    } finally {
+      await db.close();
+      rmSync(dir, { recursive: true, force: true });
+    }
+  });
+});
 
 describe('the running database', () => {
   let t: TestApp;
