@@ -67,6 +67,10 @@ test.describe('the editor as a newcomer meets it', () => {
     // What lies under it cannot take focus or be read out meanwhile.
     const inspectorInert = () => page.evaluate(() => Boolean(document.querySelector('aside[aria-label="Inspector"]')?.closest('[inert]')));
     expect(await inspectorInert()).toBe(true);
+    // The camera buttons in the top bar are off too: the model they would turn is covered.
+    const camera = page.locator('header').getByRole('group', { name: 'Camera' });
+    await expect(camera.getByRole('button', { name: 'Show all' })).toBeDisabled();
+    await expect(camera.getByRole('button', { name: 'Three-quarter view' })).toBeDisabled();
     const firstRow = cuts.locator('tbody tr').first();
     const rowHeight = (await firstRow.boundingBox())!.height;
     expect(Math.floor(bodyBox.height / rowHeight), 'rows that fit in the enlarged area').toBeGreaterThanOrEqual(10);
@@ -85,6 +89,7 @@ test.describe('the editor as a newcomer meets it', () => {
     await expect(outputs(page).getByRole('button', { name: 'Full width' })).toHaveAttribute('aria-pressed', 'false');
     await expect(outputs(page).getByRole('button', { name: 'Full width' })).toBeFocused();
     expect(await inspectorInert()).toBe(false);
+    await expect(camera.getByRole('button', { name: 'Show all' })).toBeEnabled();
 
     // 3. Click a cut row: its profiles are selected, in the parts list and the inspector.
     await showTab(page, 'Cuts');

@@ -13,10 +13,12 @@ export interface EditorTopBarProps {
   onSave: () => void;
   onUnitsChange: (units: DisplayUnits) => void;
   onOpenShortcuts: () => void;
+  /** True while the full-width outputs cover the model: the camera buttons are off. */
+  modelCovered?: boolean;
 }
 
 /** One slim line: what is open and whether it is saved, history, camera, units, keys and save. */
-export function EditorTopBar({ saving, onSave, onUnitsChange, onOpenShortcuts }: EditorTopBarProps) {
+export function EditorTopBar({ saving, onSave, onUnitsChange, onOpenShortcuts, modelCovered = false }: EditorTopBarProps) {
   const name = useEditorStore((state) => state.design.name);
   const units = useEditorStore((state) => state.units);
   return (
@@ -29,7 +31,7 @@ export function EditorTopBar({ saving, onSave, onUnitsChange, onOpenShortcuts }:
       </div>
       <HistoryButtons />
       <div className="h-7 border-l border-paper-line" aria-hidden />
-      <ViewButtons />
+      <ViewButtons covered={modelCovered} />
       <div className="h-7 border-l border-paper-line" aria-hidden />
       <UnitsSwitch units={units} onChange={onUnitsChange} />
       <ToolbarButton icon={<Keyboard aria-hidden className="size-5" />} label="Keys" title="Editor keys (?)" onClick={onOpenShortcuts} />

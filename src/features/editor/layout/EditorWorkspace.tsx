@@ -52,7 +52,7 @@ export function EditorWorkspace() {
 
   return (
     <div className="flex h-dvh min-h-0 flex-col md:h-full">
-      <EditorTopBar saving={saveState.saving} onSave={() => void saveState.save()} onUnitsChange={setUnits} onOpenShortcuts={() => setShortcutsOpen(true)} />
+      <EditorTopBar saving={saveState.saving} onSave={() => void saveState.save()} onUnitsChange={setUnits} onOpenShortcuts={() => setShortcutsOpen(true)} modelCovered={outputsFullWidth} />
       {saveState.error ? (
         <div className="border-b border-paper-line bg-paper-raised px-3 py-2">
           <ErrorNotice title="Not saved" message={saveState.error} onRetry={() => void saveState.save()} />
