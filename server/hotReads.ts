@@ -1,7 +1,8 @@
 import { createHash } from 'node:crypto';
 import type { IncomingMessage, ServerResponse } from 'node:http';
-import { gzip, gzipSync } from 'node:zlib';
+import { brotliCompress, brotliCompressSync, constants as zlibConstants, gzip, gzipSync } from 'node:zlib';
 import accepts from 'accepts';
+import Negotiator from 'negotiator';
 import type { NextFunction, Request, Response } from 'express';
 import { ipKeyGenerator, type MemoryStore } from 'express-rate-limit';
 import proxyaddr from 'proxy-addr';
@@ -29,9 +30,26 @@ import { hashToken } from './modules/links/tokens';
 
 const MAX_AGE_MS = 10_000;
 /** The compression middleware's threshold: smaller answers go out as they are. */
-const GZIP_MIN_BYTES = 1024;
-/** Kept answers up to this size are gzipped on the spot (~0.3 ms for 64 KB at level 1). */
-const GZIP_AT_ONCE_BYTES = 64 * 1024;
+const COMPRESS_MIN_BYTES = 1024;
+/** Kept answers up to this size are compressed on the spot (~0.3 ms for 64 KB). */
+const COMPRESS_AT_ONCE_BYTES = 64 * 1024;
+/** The compression middleware's settings for API answers (server/app.ts) and its brotli default. */
+const GZIP_OPTIONS = { level: 1 };
+const BROTLI_OPTIONS = { params: { [zlibConstants.BROTLI_PARAM_QUALITY]: 4 } };
+/** The compression middleware's negotiation (compression/index.js): brotli first, then gzip. */
+const SUPPORTED_ENCODINGS = ['br', 'gzip', 'deflate', 'identity'];
+const PREFERRED_ENCODINGS = ['br', 'gzip'];
+
+/** The encoding the compression middleware picks for the designs list. */
+function listEncoding(req: IncomingMessage): string | undefined {
+  if (!req.headers['accept-encoding']) return 'identity';
+  return new Negotiator(req).encoding(SUPPORTED_ENCODINGS, PREFERRED_ENCODINGS);
+}
+
+/** The encoding a revision answer takes (sendRevisionJson): gzip if accepted, else the text. */
+function linkEncoding(req: IncomingMessage): string {
+  return accepts(req).encodings('gzip', 'identity') === 'gzip' ? 'gzip' : 'identity';
+}
 const MAX_SIGNED_IN = 10_000;
 const MAX_LINK_BYTES = 32 * 1024 * 1024;
 const LIST_PATH = '/api/designs';
@@ -41,11 +59,13 @@ interface Kept {
   keptAt: number;
 }
 
+type Encoding = 'gzip' | 'br';
+
 interface Answer extends Kept {
   text: Buffer;
-  /** Compressed on first demand, off the request thread. */
-  gzipped?: Buffer;
-  gzipping?: boolean;
+  /** Compressed copies, made on first demand (see compress). */
+  encoded: Partial<Record<Encoding, Buffer>>;
+  encoding: Partial<Record<Encoding, boolean>>;
 }
 
 interface LinkAnswer extends Answer {
@@ -105,6 +125,17 @@ export function createHotReads(options: HotReadsOptions) {
     list = undefined;
   }
 
+  /**
+   * The answer to keep for `text`: the one already kept if it holds the same text (its compressed
+   * copies stay), else a new one, compressed now in the encodings Express's path uses.
+   */
+  function keep(kept: Answer | undefined, text: string, encodings: Encoding[] = ['br', 'gzip']): Answer {
+    if (kept && kept.text.toString('utf8') === text) return { ...kept, keptAt: Date.now() };
+    const answer: Answer = { text: Buffer.from(text), keptAt: Date.now(), encoded: {}, encoding: {} };
+    if (answer.text.length >= COMPRESS_MIN_BYTES) for (const encoding of encodings) compress(answer, encoding);
+    return answer;
+  }
+
   const fresh = <T extends Kept>(kept: T | undefined, now: number): T | undefined => (kept && now - kept.keptAt < MAX_AGE_MS ? kept : undefined);
 
   /** The change count at the start of the request, if nothing has been written since. */
@@ -114,41 +145,45 @@ export function createHotReads(options: HotReadsOptions) {
   }
 
   /**
-   * Compresses a kept answer at the API's compression level: at once when it is small (well under
-   * a millisecond), so the requests right behind it need not wait; larger ones off the request thread.
+   * Compresses a kept answer as the API's compression middleware would (gzip level 1, brotli
+   * quality 4): at once when it is small (well under a millisecond), so the requests right behind
+   * it need not wait; larger ones off the request thread, and Express answers meanwhile.
    */
-  function compress(answer: Answer): void {
-    if (answer.text.length < GZIP_MIN_BYTES || answer.gzipping) return;
-    answer.gzipping = true;
-    if (answer.text.length <= GZIP_AT_ONCE_BYTES) {
-      answer.gzipped = gzipSync(answer.text, { level: 1 });
-      return;
-    }
-    gzip(answer.text, { level: 1 }, (error, gzipped) => {
-      if (!error) answer.gzipped = gzipped;
-    });
+  function compress(answer: Answer, encoding: Encoding): void {
+    if (answer.encoding[encoding]) return;
+    answer.encoding[encoding] = true;
+    const done = (error: Error | null, bytes: Buffer) => {
+      if (!error) answer.encoded[encoding] = bytes;
+    };
+    if (encoding === 'gzip') {
+      if (answer.text.length <= COMPRESS_AT_ONCE_BYTES) done(null, gzipSync(answer.text, GZIP_OPTIONS));
+      else gzip(answer.text, GZIP_OPTIONS, done);
+    } else if (answer.text.length <= COMPRESS_AT_ONCE_BYTES) done(null, brotliCompressSync(answer.text, BROTLI_OPTIONS));
+    else brotliCompress(answer.text, BROTLI_OPTIONS, done);
   }
 
-  /** The body to send and whether it is gzipped, or null to let Express answer (gzip not ready yet). */
-  function bodyFor(req: IncomingMessage, answer: Answer): { body: Buffer; gzipped: boolean } | null {
-    if (answer.text.length < GZIP_MIN_BYTES) return { body: answer.text, gzipped: false };
-    const encoding = accepts(req).encoding(['gzip', 'deflate', 'identity']);
-    if (encoding === 'identity') return { body: answer.text, gzipped: false };
-    if (encoding !== 'gzip') return null;
-    if (answer.gzipped) return { body: answer.gzipped, gzipped: true };
-    compress(answer);
+  /**
+   * The body to send and its encoding, or null to let Express answer (an encoding not kept, or
+   * not ready yet). `chosen` is the encoding Express's path would pick for this request.
+   */
+  function bodyFor(answer: Answer, chosen: string | undefined): { body: Buffer; encoding: Encoding | null } | null {
+    if (answer.text.length < COMPRESS_MIN_BYTES || chosen === 'identity') return { body: answer.text, encoding: null };
+    if (chosen !== 'gzip' && chosen !== 'br') return null;
+    const body = answer.encoded[chosen];
+    if (body) return { body, encoding: chosen };
+    compress(answer, chosen);
     return null;
   }
 
-  function send(req: IncomingMessage, res: ServerResponse, answer: Answer, extraHeaders: Record<string, string>, began: number): boolean {
-    const chosen = bodyFor(req, answer);
+  function send(req: IncomingMessage, res: ServerResponse, answer: Answer, encoding: string | undefined, extraHeaders: Record<string, string>, began: number): boolean {
+    const chosen = bodyFor(answer, encoding);
     if (!chosen) return false;
     if (options.securityHeaders) applyFixedHeaders(res, options.securityHeaders);
     res.setHeader('Cache-Control', 'no-store');
     for (const [name, value] of Object.entries(extraHeaders)) res.setHeader(name, value);
     res.setHeader('Content-Type', 'application/json; charset=utf-8');
     res.setHeader('Vary', 'Accept-Encoding');
-    if (chosen.gzipped) res.setHeader('Content-Encoding', 'gzip');
+    if (chosen.encoding) res.setHeader('Content-Encoding', chosen.encoding);
     res.setHeader('Content-Length', chosen.body.length);
     res.statusCode = 200;
     res.end(chosen.body);
@@ -165,7 +200,7 @@ export function createHotReads(options: HotReadsOptions) {
     if (!cookie || !answer) return false;
     const who = fresh(signedIn.get(cookie), now);
     if (!who || who.expiresAt <= now || !options.listRoles.includes(who.role)) return false;
-    if (!send(req, res, answer, {}, began)) return false;
+    if (!send(req, res, answer, listEncoding(req), {}, began)) return false;
     hits.list++;
     return true;
   }
@@ -180,7 +215,7 @@ export function createHotReads(options: HotReadsOptions) {
       const { totalHits, resetTime } = await store.increment(key);
       // Over the limit, or the gzip is not ready: undo the count and let Express count and answer.
       const headers = totalHits <= limit ? rateLimitHeaders(key, totalHits, resetTime, options.linkLimit) : null;
-      if (!headers || !send(req, res, answer, { 'X-Robots-Tag': 'noindex, nofollow', ...headers }, began)) {
+      if (!headers || !send(req, res, answer, linkEncoding(req), { 'X-Robots-Tag': 'noindex, nofollow', ...headers }, began)) {
         await store.decrement(key);
         fallback();
         return;
@@ -226,21 +261,19 @@ export function createHotReads(options: HotReadsOptions) {
     /** The designs list's JSON text, as the list route sent it. */
     rememberDesignsList(req: Request, text: string): void {
       if (!unchangedSince(req)) return;
-      list = { text: Buffer.from(text), keptAt: Date.now() };
-      compress(list);
+      list = keep(list, text);
     },
 
     /** A link read's JSON text, as the link route sent it. */
     rememberLink(req: Request, token: string, text: string, link: { id: number; activeUntil: number | null }): void {
       if (!unchangedSince(req)) return;
-      const answer: LinkAnswer = { text: Buffer.from(text), keptAt: Date.now(), linkId: link.id, activeUntil: link.activeUntil };
-      if (answer.text.length > MAX_LINK_BYTES / 4) return;
+      if (Buffer.byteLength(text) > MAX_LINK_BYTES / 4) return;
       const hash = hashToken(token);
       const previous = links.get(hash);
+      const answer: LinkAnswer = { ...keep(previous, text, ['gzip']), linkId: link.id, activeUntil: link.activeUntil };
       if (previous) linkBytes -= previous.text.length;
       links.set(hash, answer);
       linkBytes += answer.text.length;
-      compress(answer);
       for (const [oldHash, old] of links) {
         if (linkBytes <= MAX_LINK_BYTES) break;
         links.delete(oldHash);
