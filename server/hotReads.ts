@@ -13,8 +13,9 @@ import { applyFixedHeaders, type FixedHeaders } from './middleware/securityHeade
 import { hashToken } from './modules/links/tokens';
 
 /**
- * Hot reads: the two answers asked for most under load, the designs list and a read-only link's
- * design, repeated from memory ahead of Express's router.
+ * Hot reads: the answers asked for most, the designs list, a design's latest revision (every
+ * editor and viewer opens it) and a read-only link's design, repeated from memory ahead of
+ * Express's router.
  *
  * Express always answers first. Its route handlers hand the text they sent to `remember…`, and
  * its session check records which Cookie header belongs to which signed-in role. A later request
@@ -47,12 +48,14 @@ function listEncoding(req: IncomingMessage): string | undefined {
 }
 
 /** The encoding a revision answer takes (sendRevisionJson): gzip if accepted, else the text. */
-function linkEncoding(req: IncomingMessage): string {
+function revisionEncoding(req: IncomingMessage): string {
   return accepts(req).encodings('gzip', 'identity') === 'gzip' ? 'gzip' : 'identity';
 }
 const MAX_SIGNED_IN = 10_000;
-const MAX_LINK_BYTES = 32 * 1024 * 1024;
+/** Kept design and link reads, each kind at most this much text (oldest out first). */
+const MAX_KEPT_BYTES = 32 * 1024 * 1024;
 const LIST_PATH = '/api/designs';
+const DESIGN_PATH = /^\/api\/designs\/([1-9][0-9]{0,15})$/;
 const LINK_PATH = /^\/api\/shared\/([A-Za-z0-9_-]{43})$/;
 
 interface Kept {
@@ -104,15 +107,42 @@ export interface HotReadsOptions {
 
 export type HotReads = ReturnType<typeof createHotReads>;
 
+/** Answers by key, bounded by their total text (the oldest kept goes first). */
+function keptAnswers<K, T extends Answer>() {
+  const map = new Map<K, T>();
+  let bytes = 0;
+  return {
+    get: (key: K) => map.get(key),
+    set(key: K, answer: T): void {
+      const previous = map.get(key);
+      if (previous) {
+        bytes -= previous.text.length;
+        map.delete(key);
+      }
+      map.set(key, answer);
+      bytes += answer.text.length;
+      for (const [oldKey, old] of map) {
+        if (bytes <= MAX_KEPT_BYTES) break;
+        map.delete(oldKey);
+        bytes -= old.text.length;
+      }
+    },
+    clear(): void {
+      map.clear();
+      bytes = 0;
+    },
+  };
+}
+
 export function createHotReads(options: HotReadsOptions) {
   const { db } = options;
   const startedAt = new WeakMap<IncomingMessage, number>();
   const signedIn = new Map<string, SignedIn>();
-  const links = new Map<string, LinkAnswer>();
-  let linkBytes = 0;
+  const links = keptAnswers<string, LinkAnswer>();
+  const designs = keptAnswers<number, Answer>();
   let list: Answer | undefined;
   let generation = db.changeCount();
-  const hits = { list: 0, link: 0 };
+  const hits = { list: 0, design: 0, link: 0 };
 
   /** Drops everything once a write has finished since it was kept. */
   function current(): void {
@@ -121,7 +151,7 @@ export function createHotReads(options: HotReadsOptions) {
     generation = now;
     signedIn.clear();
     links.clear();
-    linkBytes = 0;
+    designs.clear();
     list = undefined;
   }
 
@@ -139,7 +169,7 @@ export function createHotReads(options: HotReadsOptions) {
   const fresh = <T extends Kept>(kept: T | undefined, now: number): T | undefined => (kept && now - kept.keptAt < MAX_AGE_MS ? kept : undefined);
 
   /** The change count at the start of the request, if nothing has been written since. */
-  function unchangedSince(req: Request): boolean {
+  function unchangedSince(req: IncomingMessage): boolean {
     current();
     return startedAt.get(req) === generation;
   }
@@ -194,14 +224,24 @@ export function createHotReads(options: HotReadsOptions) {
     return true;
   }
 
-  function listAnswer(req: IncomingMessage, res: ServerResponse, now: number, began: number): boolean {
+  /** Whether the request's Cookie header belongs to someone who may read designs. */
+  function staffCookie(req: IncomingMessage, now: number): boolean {
     const cookie = req.headers.cookie;
+    const who = cookie ? fresh(signedIn.get(cookie), now) : undefined;
+    return who !== undefined && who.expiresAt > now && options.listRoles.includes(who.role);
+  }
+
+  function listAnswer(req: IncomingMessage, res: ServerResponse, now: number, began: number): boolean {
     const answer = fresh(list, now);
-    if (!cookie || !answer) return false;
-    const who = fresh(signedIn.get(cookie), now);
-    if (!who || who.expiresAt <= now || !options.listRoles.includes(who.role)) return false;
-    if (!send(req, res, answer, listEncoding(req), {}, began)) return false;
+    if (!answer || !staffCookie(req, now) || !send(req, res, answer, listEncoding(req), {}, began)) return false;
     hits.list++;
+    return true;
+  }
+
+  function designAnswer(req: IncomingMessage, res: ServerResponse, id: number, now: number, began: number): boolean {
+    const answer = fresh(designs.get(id), now);
+    if (!answer || !staffCookie(req, now) || !send(req, res, answer, revisionEncoding(req), {}, began)) return false;
+    hits.design++;
     return true;
   }
 
@@ -215,7 +255,7 @@ export function createHotReads(options: HotReadsOptions) {
       const { totalHits, resetTime } = await store.increment(key);
       // Over the limit, or the gzip is not ready: undo the count and let Express count and answer.
       const headers = totalHits <= limit ? rateLimitHeaders(key, totalHits, resetTime, options.linkLimit) : null;
-      if (!headers || !send(req, res, answer, linkEncoding(req), { 'X-Robots-Tag': 'noindex, nofollow', ...headers }, began)) {
+      if (!headers || !send(req, res, answer, revisionEncoding(req), { 'X-Robots-Tag': 'noindex, nofollow', ...headers }, began)) {
         await store.decrement(key);
         fallback();
         return;
@@ -242,6 +282,11 @@ export function createHotReads(options: HotReadsOptions) {
         if (!listAnswer(req, res, now, began)) handOn();
         return;
       }
+      const design = DESIGN_PATH.exec(req.url);
+      if (design) {
+        if (!designAnswer(req, res, Number(design[1]), now, began)) handOn();
+        return;
+      }
       const link = LINK_PATH.exec(req.url);
       if (link && linkAnswer(req, res, link[1], now, began, handOn)) return;
       handOn();
@@ -259,26 +304,22 @@ export function createHotReads(options: HotReadsOptions) {
     },
 
     /** The designs list's JSON text, as the list route sent it. */
-    rememberDesignsList(req: Request, text: string): void {
+    rememberDesignsList(req: IncomingMessage, text: string): void {
       if (!unchangedSince(req)) return;
       list = keep(list, text);
     },
 
+    /** A design read's JSON text (its latest revision), as the design route sent it. */
+    rememberDesign(req: IncomingMessage, id: number, text: string): void {
+      if (!unchangedSince(req) || Buffer.byteLength(text) > MAX_KEPT_BYTES / 4) return;
+      designs.set(id, keep(designs.get(id), text, ['gzip']));
+    },
+
     /** A link read's JSON text, as the link route sent it. */
-    rememberLink(req: Request, token: string, text: string, link: { id: number; activeUntil: number | null }): void {
-      if (!unchangedSince(req)) return;
-      if (Buffer.byteLength(text) > MAX_LINK_BYTES / 4) return;
+    rememberLink(req: IncomingMessage, token: string, text: string, link: { id: number; activeUntil: number | null }): void {
+      if (!unchangedSince(req) || Buffer.byteLength(text) > MAX_KEPT_BYTES / 4) return;
       const hash = hashToken(token);
-      const previous = links.get(hash);
-      const answer: LinkAnswer = { ...keep(previous, text, ['gzip']), linkId: link.id, activeUntil: link.activeUntil };
-      if (previous) linkBytes -= previous.text.length;
-      links.set(hash, answer);
-      linkBytes += answer.text.length;
-      for (const [oldHash, old] of links) {
-        if (linkBytes <= MAX_LINK_BYTES) break;
-        links.delete(oldHash);
-        linkBytes -= old.text.length;
-      }
+      links.set(hash, { ...keep(links.get(hash), text, ['gzip']), linkId: link.id, activeUntil: link.activeUntil });
     },
 
     /** How many answers came from memory (tests read these). */

@@ -74,6 +74,31 @@ describe('hot reads', () => {
     expect(after.find((d) => d.id === design.id)!.latestRevision).toBe(design.latestRevision + 1);
   });
 
+  it('repeats a design read from memory, gzipped or not, and shows the next save at once', async () => {
+    const listed = (await designer.get('/api/designs')).body.designs as { id: number; profileCount: number; latestRevision: number }[];
+    const design = listed.find((d) => d.profileCount > 0)!;
+    const url = `/api/designs/${design.id}`;
+    for (const encoding of ['gzip', 'identity']) {
+      const first = await rawBody(designer.get(url).set('Accept-Encoding', encoding));
+      const before = hits().design;
+      const repeat = await rawBody(designer.get(url).set('Accept-Encoding', encoding));
+      expect(hits().design).toBe(before + 1);
+      expect(stable(repeat)).toEqual(stable(first));
+      expect(repeat.headers['content-encoding']).toBe(encoding === 'gzip' ? 'gzip' : undefined);
+      expect(repeat.body.toString()).toBe(first.body.toString());
+    }
+    const read = JSON.parse((await rawBody(designer.get(url).set('Accept-Encoding', 'identity'))).body.toString());
+    const saved = await designer.post(`${url}/revisions`).set(CLIENT).send({ baseRevision: read.revision.number, document: { ...read.revision.document, name: 'Renamed by the hot reads test' } });
+    expect(saved.status).toBe(201);
+    const after = (await designer.get(url)).body;
+    expect(after.revision.number).toBe(read.revision.number + 1);
+    expect(after.revision.document.name).toBe('Renamed by the hot reads test');
+    // Another role never gets it from memory: a builder not assigned to it, and a stranger.
+    const builder = await t.signIn('builder');
+    expect((await builder.get(url)).status).toBe(403);
+    expect((await t.anonymous().get(url)).status).toBe(401);
+  });
+
   it('never serves the list to a role that may not read it, to a stranger, or after signing out', async () => {
     const builder = await t.signIn('builder');
     for (let i = 0; i < 3; i++) expect((await builder.get('/api/designs')).status).toBe(403);

@@ -12,8 +12,8 @@ import type { DesignsService } from './service';
 export interface DesignsRouterOptions {
   /** Whether a builder may read a revision (they are assigned to a build of it). */
   builderMayRead?: (user: UserModel, designId: number, revision: number) => Promise<boolean>;
-  /** Keeps the list's answer for repeats (server/hotReads.ts). */
-  hotReads?: Pick<HotReads, 'rememberDesignsList'>;
+  /** Keeps the list's and design reads' answers for repeats (server/hotReads.ts). */
+  hotReads?: Pick<HotReads, 'rememberDesignsList' | 'rememberDesign'>;
 }
 
 /** Who may list and read designs. */
@@ -53,7 +53,8 @@ export function designsRouter(designs: DesignsService, options: DesignsRouterOpt
   router.route('/:id').get(staff).get(validate({ params: designIdParamsSchema }), async (req, res) => {
     const { id } = req.params;
     const { design, revision } = await designs.getLatest(id);
-    sendRevisionJson(res, { design }, revision.meta, revision.documentJson);
+    const text = sendRevisionJson(res, { design }, revision.meta, revision.documentJson);
+    options.hotReads?.rememberDesign(req, id, text);
   });
 
   router.route('/:id').delete(staff).delete(validate({ params: designIdParamsSchema }), async (req, res) => {
