@@ -1,5 +1,5 @@
 /** The corner notches of each panel in an analysis, worked out once per analysis (mm). */
-import { NOTCHING_CONNECTOR_KINDS, cornerNotches, type CornerJoint, type CornerNotches } from '../geometry/cornerNotches';
+import { NOTCHING_CONNECTOR_KINDS, cornerNotchTally, cornerNotchesOf, tallyCornerJoint, type CornerNotches } from '../geometry/cornerNotches';
 import type { AnalysisContext, PanelInfo } from './context';
 
 /** Corners of a captured panel where a connector sits in the slot, and the notch that clears it, mm. */
@@ -17,20 +17,20 @@ export function panelCornerNotches(ctx: AnalysisContext, info: PanelInfo): Corne
 function computePanelCornerNotches(ctx: AnalysisContext, info: PanelInfo): CornerNotches {
   // Only a captured panel in a four-sided frame has frame corners to notch.
   if (info.panel.mounting !== 'captured' || info.bounding.length !== 4) return { size: 0, corners: 0, jointIds: [] };
-  const frame = new Set(info.bounding.map((b) => b.profile.id));
-  const joints: CornerJoint[] = [];
+  // The rule joint by joint, straight from the design's joints: no id set or joint record per panel.
+  const tally = cornerNotchTally();
   for (const b of info.bounding) {
     for (const joint of b.joints) {
-      // Joints the rule would pass over anyway (not in a slot, or not between two frame profiles) are left out here.
       if (!NOTCHING_CONNECTOR_KINDS.has(joint.kind) || joint.members.length < 2) continue;
-      if (!frame.has(joint.members[0].profileId) || !frame.has(joint.members[1].profileId)) continue;
-      joints.push({
-        id: joint.id,
-        kind: joint.kind,
-        memberIds: joint.members.map((m) => m.profileId),
-        occupiedSlotLength: ctx.catalogue.connectors.get(joint.connectorId)?.occupiedSlotLength,
-      });
+      if (!inFrame(info, joint.members[0].profileId) || !inFrame(info, joint.members[1].profileId)) continue;
+      tallyCornerJoint(tally, joint.id, ctx.catalogue.connectors.get(joint.connectorId)?.occupiedSlotLength);
     }
   }
-  return cornerNotches(frame, joints);
+  return cornerNotchesOf(tally);
+}
+
+/** Whether a profile id is one of the panel's bounding profiles. */
+function inFrame(info: PanelInfo, profileId: string): boolean {
+  for (const b of info.bounding) if (b.profile.id === profileId) return true;
+  return false;
 }

@@ -54,7 +54,8 @@ export function frameBracing(ctx: AnalysisContext): { x: boolean; z: boolean } {
   let z = false;
   for (const p of ctx.profiles) {
     const d = p.profile.direction;
-    const offAxis = [Math.abs(d[0]), Math.abs(d[1]), Math.abs(d[2])].filter((c) => c > DIAGONAL).length >= 2;
+    // Counted, not filtered into a list: one array per profile adds up at 8,000 profiles.
+    const offAxis = (Math.abs(d[0]) > DIAGONAL ? 1 : 0) + (Math.abs(d[1]) > DIAGONAL ? 1 : 0) + (Math.abs(d[2]) > DIAGONAL ? 1 : 0) >= 2;
     if (!offAxis || Math.abs(d[1]) <= DIAGONAL) continue;
     if (Math.abs(d[0]) > DIAGONAL) x = true;
     if (Math.abs(d[2]) > DIAGONAL) z = true;

@@ -9,6 +9,10 @@ export function distancePointToBox(p: ReadonlyVec3, b: Box): number {
   const dx = Math.max(b.minX - p[0], 0, p[0] - b.maxX);
   const dy = Math.max(b.minY - p[1], 0, p[1] - b.maxY);
   const dz = Math.max(b.minZ - p[2], 0, p[2] - b.maxZ);
+  // Inside, or off one face (the usual answers): the exact value Math.hypot gives, without its call.
+  if (dx === 0 && dy === 0) return dz;
+  if (dy === 0 && dz === 0) return dx;
+  if (dx === 0 && dz === 0) return dy;
   return Math.hypot(dx, dy, dz);
 }
 

@@ -9,7 +9,7 @@ import type { Joint, Machining, ProfileEnd } from '../design/schema';
 import type { Connector, ConnectorMachining } from '../catalogue/types';
 import { sectionHalfExtentAlong } from '../geometry/profileGeometry';
 import { dot } from '../geometry/vectors';
-import { CONTACT_TOLERANCE_MM, accessoriesAt, areJoined, jointsAt, memberEnd, memberPoint, type AnalysisContext, type ProfileInfo } from '../analysis/context';
+import { CONTACT_TOLERANCE_MM, accessoriesAt, areJoined, jointsAt, memberEnd, memberInfo, memberPoint, type AnalysisContext, type ProfileInfo } from '../analysis/context';
 import { capitalise, countOf, endPhrase, findingId, jointName, mm, profileName } from '../analysis/describe';
 import { distancePointToBox, firstProfileAtPoint, pointOffFace, projectAlong } from './geometryQueries';
 import { addEndCapFix, addMachiningFix } from './fixes';
@@ -38,20 +38,22 @@ interface JointCheckCache {
 export function jointFindings(ctx: AnalysisContext): Finding[] {
   const findings: Finding[] = [];
   const cache: JointCheckCache = { unknownScrews: new Map(), hasTNut: new Map() };
-  for (const joint of ctx.design.joints) checkJoint(ctx, joint, findings, cache);
+  const joints = ctx.design.joints;
+  for (let j = 0; j < joints.length; j++) checkJoint(ctx, j, findings, cache);
   checkProfileEnds(ctx, findings);
   checkSlotClaims(ctx, findings);
   checkAccessHolesUncovered(ctx, findings);
   return findings;
 }
 
-function checkJoint(ctx: AnalysisContext, joint: Joint, out: Finding[], cache: JointCheckCache): void {
+function checkJoint(ctx: AnalysisContext, jointIndex: number, out: Finding[], cache: JointCheckCache): void {
+  const joint = ctx.design.joints[jointIndex];
   const infos: ProfileInfo[] = [];
   let missing: string[] | null = null;
-  for (const m of joint.members) {
-    const info = ctx.profileById.get(m.profileId);
+  for (let k = 0; k < joint.members.length; k++) {
+    const info = memberInfo(ctx, jointIndex, k);
     if (info) infos.push(info);
-    else (missing ??= []).push(m.profileId);
+    else (missing ??= []).push(joint.members[k].profileId);
   }
   if (missing) {
     out.push({
@@ -299,11 +301,13 @@ interface SlotClaim {
 function checkSlotClaims(ctx: AnalysisContext, out: Finding[]): void {
   // Keyed by met profile index × 4 + face: a number, not a string per joint.
   const claims = new Map<number, SlotClaim[]>();
-  for (const joint of ctx.design.joints) {
+  const joints = ctx.design.joints;
+  for (let j = 0; j < joints.length; j++) {
+    const joint = joints[j];
     if (!SLOT_CONNECTOR_KINDS.has(joint.kind) || joint.members.length !== 2) continue;
     const connector = ctx.catalogue.connectors.get(joint.connectorId);
-    const joined = ctx.profileById.get(joint.members[0].profileId);
-    const met = ctx.profileById.get(joint.members[1].profileId);
+    const joined = memberInfo(ctx, j, 0);
+    const met = memberInfo(ctx, j, 1);
     if (!connector || !joined || !met) continue;
     const end = memberEnd(joint.members[0], joined);
     if (!end) continue;

@@ -106,9 +106,39 @@ function byLengthDescending(a: StockCut, b: StockCut): number {
   return b.length - a.length || (a.id < b.id ? -1 : a.id > b.id ? 1 : 0);
 }
 
+/**
+ * Sorts a bar's cuts in place, longest first (ties by id), keeping the order of equal ones as the
+ * stable built-in sort would. A bar holds a handful of cuts; insertion sort makes no work copy.
+ */
+function sortBarCuts(cuts: StockCut[]): StockCut[] {
+  for (let i = 1; i < cuts.length; i++) {
+    const cut = cuts[i];
+    let j = i - 1;
+    while (j >= 0 && byLengthDescending(cuts[j], cut) > 0) {
+      cuts[j + 1] = cuts[j];
+      j--;
+    }
+    cuts[j + 1] = cut;
+  }
+  return cuts;
+}
+
+/** Removes `list[position]`, shifting the rest down (as `splice(position, 1)`, without the removed-items array it returns). */
+function removeAt(list: number[], position: number): void {
+  for (let k = position + 1; k < list.length; k++) list[k - 1] = list[k];
+  list.length -= 1;
+}
+
+/** Inserts `value` at `position`, shifting the rest up (as `splice(position, 0, value)`, without the array it returns). */
+function insertAt(list: number[], position: number, value: number): void {
+  list.push(value);
+  for (let k = list.length - 1; k > position; k--) list[k] = list[k - 1];
+  list[position] = value;
+}
+
 function toStockBars(groups: StockCut[][], problem: PackingProblem, minReusableOffcut: number): StockBar[] {
   return groups.map((cuts, index) => {
-    const sorted = [...cuts].sort(byLengthDescending);
+    const sorted = sortBarCuts(cuts.slice());
     const consumed = sorted.reduce((sum, cut) => sum + cut.length + problem.kerf, 0);
     const usedLength = Math.min(problem.usable, consumed);
     const offcut = Math.max(0, problem.usable - consumed);
@@ -157,7 +187,7 @@ function fitDecreasing(problem: PackingProblem, rule: 'first' | 'best'): StockCu
     const chosen = open[chosenPosition];
     groups[chosen].push(cut);
     loads[chosen] += size;
-    if (loads[chosen] + smallest > limit) open.splice(chosenPosition, 1);
+    if (loads[chosen] + smallest > limit) removeAt(open, chosenPosition);
     previousSize = size;
     previousPosition = chosenPosition;
   }
@@ -188,7 +218,7 @@ function bestFitDecreasing(problem: PackingProblem): StockCut[][] {
       if (before(open[mid], bar)) lo = mid + 1;
       else hi = mid;
     }
-    open.splice(lo, 0, bar);
+    insertAt(open, lo, bar);
   };
   for (const cut of sorted) {
     const size = cut.length + problem.kerf;
@@ -203,7 +233,7 @@ function bestFitDecreasing(problem: PackingProblem): StockCut[][] {
     let chosen: number;
     if (lo < open.length) {
       chosen = open[lo];
-      open.splice(lo, 1);
+      removeAt(open, lo);
     } else {
       groups.push([]);
       loads.push(0);
