@@ -136,7 +136,8 @@ export function buildAnalysisContext(design: DesignDocument, catalogue: Catalogu
       height,
       axes,
       box: profileBoundingBoxBetween(profile.start, endPoint, width, height, axes),
-      startPoint: [profile.start[0], profile.start[1], profile.start[2]],
+      // The document's own start point (read-only here): no copy per profile.
+      startPoint: profile.start,
       endPoint,
       joints: NONE,
       startJoints: NONE,

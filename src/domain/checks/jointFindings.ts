@@ -39,16 +39,18 @@ export function jointFindings(ctx: AnalysisContext): Finding[] {
   const findings: Finding[] = [];
   const cache: JointCheckCache = { unknownScrews: new Map(), hasTNut: new Map() };
   const joints = ctx.design.joints;
-  for (let j = 0; j < joints.length; j++) checkJoint(ctx, j, findings, cache);
+  const infos: ProfileInfo[] = [];
+  for (let j = 0; j < joints.length; j++) checkJoint(ctx, j, infos, findings, cache);
   checkProfileEnds(ctx, findings);
   checkSlotClaims(ctx, findings);
   checkAccessHolesUncovered(ctx, findings);
   return findings;
 }
 
-function checkJoint(ctx: AnalysisContext, jointIndex: number, out: Finding[], cache: JointCheckCache): void {
+/** `infos`: a scratch list, refilled with the joint's member profiles (the checks below read it and keep none of it). */
+function checkJoint(ctx: AnalysisContext, jointIndex: number, infos: ProfileInfo[], out: Finding[], cache: JointCheckCache): void {
   const joint = ctx.design.joints[jointIndex];
-  const infos: ProfileInfo[] = [];
+  infos.length = 0;
   let missing: string[] | null = null;
   for (let k = 0; k < joint.members.length; k++) {
     const info = memberInfo(ctx, jointIndex, k);

@@ -40,6 +40,12 @@ export interface StockPlanInput {
   endTrim: number;
   /** mm, an offcut at least this long is kept for reuse */
   minReusableOffcut: number;
+  /**
+   * `cuts` as `sortCutsForPacking` orders them, when the caller plans the same cuts more than once
+   * (one plan per bar length): each plan then takes the cuts that fit from this list instead of
+   * sorting again. Every length must be a finite number.
+   */
+  sortedCuts?: readonly StockCut[];
 }
 
 export interface StockBar {
@@ -93,13 +99,19 @@ function sortedCuts(problem: PackingProblem): StockCut[] {
 function preparePacking(input: StockPlanInput): PackingProblem {
   const usable = input.stockLength - input.endTrim;
   const kerf = Math.max(0, input.kerf);
+  const fits = (cut: StockCut) => Number.isFinite(cut.length) && cut.length > 0 && usable > 0 && cut.length <= usable + LENGTH_TOLERANCE;
   const placeable: StockCut[] = [];
   const unplaceable: StockCut[] = [];
-  for (const cut of input.cuts) {
-    const fits = Number.isFinite(cut.length) && cut.length > 0 && usable > 0 && cut.length <= usable + LENGTH_TOLERANCE;
-    (fits ? placeable : unplaceable).push(cut);
-  }
-  return { usable, capacity: usable + kerf, kerf, placeable, unplaceable };
+  for (const cut of input.cuts) (fits(cut) ? placeable : unplaceable).push(cut);
+  const problem: PackingProblem = { usable, capacity: usable + kerf, kerf, placeable, unplaceable };
+  // The stable sort of the cuts that fit is the sorted list with the others left out.
+  if (input.sortedCuts) problem.sorted = input.sortedCuts.filter(fits);
+  return problem;
+}
+
+/** Cuts longest first, ties by id: the order every packing here starts from (a new list). */
+export function sortCutsForPacking(cuts: readonly StockCut[]): StockCut[] {
+  return [...cuts].sort(byLengthDescending);
 }
 
 function byLengthDescending(a: StockCut, b: StockCut): number {

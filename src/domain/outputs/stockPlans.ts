@@ -15,7 +15,7 @@ import type { VariantStockPlan } from '../analysis/types';
 import type { AnalysisContext } from '../analysis/context';
 import type { ProfileSystem } from '../catalogue/types';
 import type { DesignDocument, SystemStock } from '../design/schema';
-import { planStock, type StockBar, type StockCut } from './stockPlan';
+import { planStock, sortCutsForPacking, type StockBar, type StockCut } from './stockPlan';
 
 /** Price of a half bar per metre against a full one: short bars cost more per metre (demo assumption, invented). */
 const HALF_BAR_PRICE_FACTOR = 1.15;
@@ -109,10 +109,12 @@ export function planVariant(variantId: string, systemId: string, cuts: StockCut[
   const { used, rest } = useOffcuts(cuts, offcuts, settings.kerf);
   const trim = trimAllowance(settings);
   const options = [...settings.bars].sort((a, b) => b.length - a.length);
+  // One sort of the cuts for every bar length tried (the order needs finite lengths).
+  const sortedCuts = rest.every((cut) => Number.isFinite(cut.length)) ? sortCutsForPacking(rest) : undefined;
   let best: { plan: ReturnType<typeof planStock>; bars: { length: number; cost: number }[]; cost: number } | null = null;
   for (const option of options) {
     if (option.length - trim <= 0) continue;
-    const plan = planStock({ cuts: rest, stockLength: option.length, kerf: settings.kerf, endTrim: trim, minReusableOffcut: settings.minReusableOffcut });
+    const plan = planStock({ cuts: rest, stockLength: option.length, kerf: settings.kerf, endTrim: trim, minReusableOffcut: settings.minReusableOffcut, sortedCuts });
     // Each bar bought in the cheapest length that still holds its cuts.
     const bars = plan.bars.map((bar) => {
       let pick = option;
@@ -123,7 +125,7 @@ export function planVariant(variantId: string, systemId: string, cuts: StockCut[
     const cost = bars.reduce((s, b) => s + b.cost, 0) + unplaced * 1e9;
     if (!best || cost < best.cost - TOLERANCE) best = { plan, bars, cost };
   }
-  const plan = best?.plan ?? planStock({ cuts: rest, stockLength: options[0].length, kerf: settings.kerf, endTrim: trim, minReusableOffcut: settings.minReusableOffcut });
+  const plan = best?.plan ?? planStock({ cuts: rest, stockLength: options[0].length, kerf: settings.kerf, endTrim: trim, minReusableOffcut: settings.minReusableOffcut, sortedCuts });
   const bars = best?.bars ?? [];
   // Recompute offcuts for bars bought shorter than the plan's length.
   const adjusted = plan.bars.map((bar, i) => {
