@@ -104,6 +104,12 @@ export interface AnalysisContext {
    */
   jointMemberStart: Int32Array;
   jointMemberProfile: Int32Array;
+  /**
+   * `profiles[i].joints` as joint indices (into `design.joints`), in the same order: entries
+   * `profileJointStart[i]` up to `profileJointStart[i + 1]` of `profileJointIndex`.
+   */
+  profileJointStart: Int32Array;
+  profileJointIndex: Int32Array;
   /** Per accessory (`design.accessories[a]`): the index of its profile, or −1 (none, or not in the design). */
   accessoryProfile: Int32Array;
   /** Joints by id, built on first use (few analyses need it). */
@@ -180,6 +186,8 @@ export function buildAnalysisContext(design: DesignDocument, catalogue: Catalogu
     },
     jointMemberStart: jointMembers.start,
     jointMemberProfile: jointMembers.profile,
+    profileJointStart: jointMembers.profileJointStart,
+    profileJointIndex: jointMembers.profileJointIndex,
     accessoryProfile,
     profileGrid: new UniformGrid(boxes, { margin: CONTACT_TOLERANCE_MM }),
     memo: new Map(),
@@ -242,7 +250,11 @@ export function accessoryInfo(ctx: AnalysisContext, accessoryIndex: number): Pro
  * so no list grows by copying and no list is allocated for a profile without joints. Returns the
  * resolved members (see `AnalysisContext.jointMemberProfile`).
  */
-function attachJoints(joints: readonly Joint[], profiles: ProfileInfo[], profileById: Map<string, ProfileInfo>): { start: Int32Array; profile: Int32Array } {
+function attachJoints(
+  joints: readonly Joint[],
+  profiles: ProfileInfo[],
+  profileById: Map<string, ProfileInfo>,
+): { start: Int32Array; profile: Int32Array; profileJointStart: Int32Array; profileJointIndex: Int32Array } {
   const n = profiles.length;
   const anyCount = new Int32Array(n);
   const startCount = new Int32Array(n);
@@ -283,6 +295,9 @@ function attachJoints(joints: readonly Joint[], profiles: ProfileInfo[], profile
       }
     }
   }
+  const profileJointStart = new Int32Array(n + 1);
+  for (let i = 0; i < n; i++) profileJointStart[i + 1] = profileJointStart[i] + anyCount[i];
+  const profileJointIndex = new Int32Array(profileJointStart[n]);
   for (let i = 0; i < n; i++) {
     const info = profiles[i];
     if (anyCount[i] > 0) info.joints = new Array<Joint>(anyCount[i]);
@@ -306,11 +321,12 @@ function attachJoints(joints: readonly Joint[], profiles: ProfileInfo[], profile
       else if (memberEndCode[m] === 2) info.endJoints[endCount[i]++] = joint;
       if (lastJoint[i] !== j) {
         lastJoint[i] = j;
+        profileJointIndex[profileJointStart[i] + anyCount[i]] = j;
         info.joints[anyCount[i]++] = joint;
       }
     }
   }
-  return { start: memberStart, profile: memberProfile };
+  return { start: memberStart, profile: memberProfile, profileJointStart, profileJointIndex };
 }
 
 /**

@@ -17,20 +17,21 @@ export function panelCornerNotches(ctx: AnalysisContext, info: PanelInfo): Corne
 function computePanelCornerNotches(ctx: AnalysisContext, info: PanelInfo): CornerNotches {
   // Only a captured panel in a four-sided frame has frame corners to notch.
   if (info.panel.mounting !== 'captured' || info.bounding.length !== 4) return { size: 0, corners: 0, jointIds: [] };
-  // The rule joint by joint, straight from the design's joints: no id set or joint record per panel.
+  // The rule joint by joint, from the context's joint indices: members are compared by profile
+  // index (resolved once), with no id set or joint record per panel.
+  const [a, b, c, d] = info.bounding;
+  const inFrame = (i: number) => i >= 0 && (i === a.index || i === b.index || i === c.index || i === d.index);
+  const joints = ctx.design.joints;
   const tally = cornerNotchTally();
-  for (const b of info.bounding) {
-    for (const joint of b.joints) {
+  for (const bound of info.bounding) {
+    for (let k = ctx.profileJointStart[bound.index]; k < ctx.profileJointStart[bound.index + 1]; k++) {
+      const j = ctx.profileJointIndex[k];
+      const joint = joints[j];
       if (!NOTCHING_CONNECTOR_KINDS.has(joint.kind) || joint.members.length < 2) continue;
-      if (!inFrame(info, joint.members[0].profileId) || !inFrame(info, joint.members[1].profileId)) continue;
+      const first = ctx.jointMemberStart[j];
+      if (!inFrame(ctx.jointMemberProfile[first]) || !inFrame(ctx.jointMemberProfile[first + 1])) continue;
       tallyCornerJoint(tally, joint.id, ctx.catalogue.connectors.get(joint.connectorId)?.occupiedSlotLength);
     }
   }
   return cornerNotchesOf(tally);
-}
-
-/** Whether a profile id is one of the panel's bounding profiles. */
-function inFrame(info: PanelInfo, profileId: string): boolean {
-  for (const b of info.bounding) if (b.profile.id === profileId) return true;
-  return false;
 }

@@ -291,19 +291,37 @@ function checkThreadedEnd(info: ProfileInfo, end: ProfileEnd, accessories: reado
   });
 }
 
-interface SlotClaim {
-  joint: Joint;
-  connector: Connector;
-  lo: number;
-  hi: number;
-  /** The connector's own body (concealed connectors) rather than a bracket's possible legs. */
-  exact: boolean;
+/**
+ * Slot claims of one analysis, in parallel typed arrays (claim k = the k-th slot connector met):
+ * no object, list or map entry per joint. Claims on one slot face (met profile index × 4 + face)
+ * are chained from the face's first claim in the order they were made.
+ */
+interface SlotClaims {
+  joint: Int32Array;
+  lo: Float64Array;
+  hi: Float64Array;
+  /** 1 for the connector's own body (concealed connectors) rather than a bracket's possible legs. */
+  exact: Uint8Array;
+  /** Next claim on the same slot face, or −1. */
+  next: Int32Array;
+  count: number;
 }
 
 function checkSlotClaims(ctx: AnalysisContext, out: Finding[]): void {
-  // Keyed by met profile index × 4 + face: a number, not a string per joint.
-  const claims = new Map<number, SlotClaim[]>();
   const joints = ctx.design.joints;
+  const claims: SlotClaims = {
+    joint: new Int32Array(joints.length),
+    lo: new Float64Array(joints.length),
+    hi: new Float64Array(joints.length),
+    exact: new Uint8Array(joints.length),
+    next: new Int32Array(joints.length),
+    count: 0,
+  };
+  // Per slot face: its first and last claim (−1: none), and the faces in the order first claimed.
+  const faceCount = ctx.profiles.length * 4;
+  const firstClaim = new Int32Array(faceCount).fill(-1);
+  const lastClaim = new Int32Array(faceCount);
+  const facesInOrder: number[] = [];
   for (let j = 0; j < joints.length; j++) {
     const joint = joints[j];
     if (!SLOT_CONNECTOR_KINDS.has(joint.kind) || joint.members.length !== 2) continue;
@@ -328,44 +346,57 @@ function checkSlotClaims(ctx: AnalysisContext, out: Finding[]): void {
     const footprint = sectionHalfExtentAlong(joined.axes, joined.width, joined.height, met.profile.direction);
     const half = exact ? connector.occupiedSlotLength / 2 : footprint + connector.occupiedSlotLength;
     const key = met.index * 4 + face;
-    const claim = { joint, connector, lo: Math.max(0, centre - half), hi: Math.min(met.profile.length, centre + half), exact };
-    const list = claims.get(key);
-    if (list) list.push(claim);
-    else claims.set(key, [claim]);
+    const k = claims.count++;
+    claims.joint[k] = j;
+    claims.lo[k] = Math.max(0, centre - half);
+    claims.hi[k] = Math.min(met.profile.length, centre + half);
+    claims.exact[k] = exact ? 1 : 0;
+    claims.next[k] = -1;
+    if (firstClaim[key] < 0) {
+      firstClaim[key] = k;
+      facesInOrder.push(key);
+    } else claims.next[lastClaim[key]] = k;
+    lastClaim[key] = k;
   }
-  for (const [key, list] of claims) {
-    if (list.length < 2) continue;
-    sortByLo(list);
+  const list: number[] = [];
+  for (const key of facesInOrder) {
+    if (claims.next[firstClaim[key]] < 0) continue;
+    list.length = 0;
+    for (let k = firstClaim[key]; k >= 0; k = claims.next[k]) list.push(k);
+    sortByLo(list, claims.lo);
     const metId = ctx.profiles[key >> 2].profile.id;
     const faceText = String(key & 3);
     let reach = list[0];
     for (let i = 1; i < list.length; i++) {
       const c = list[i];
-      if (c.lo < reach.hi - 0.5) {
-        const both = [reach.joint.id, c.joint.id].sort();
-        const bothJoints = reach.joint.id < c.joint.id ? [reach.joint, c.joint] : [c.joint, reach.joint];
+      const reachJoint = joints[claims.joint[reach]];
+      const cJoint = joints[claims.joint[c]];
+      if (claims.lo[c] < claims.hi[reach] - 0.5) {
+        const both = [reachJoint.id, cJoint.id].sort();
+        const bothJoints = reachJoint.id < cJoint.id ? [reachJoint, cJoint] : [cJoint, reachJoint];
         out.push({
           id: findingId(CHECK, 'slot-claimed-twice', [metId, faceText, ...both]),
           check: CHECK,
-          severity: reach.exact && c.exact ? 'error' : 'warning',
+          severity: claims.exact[reach] === 1 && claims.exact[c] === 1 ? 'error' : 'warning',
           partIds: [metId, ...both],
-          message: `${capitalise(jointName(ctx, bothJoints[0]))} and ${jointName(ctx, bothJoints[1])} both need the slot on face ${faceText} of ${profileName(ctx.profileById.get(metId))} between ${mm(Math.max(c.lo, reach.lo))} and ${mm(Math.min(c.hi, reach.hi))} from its start. Move one joint or put its connector on another face.`,
+          message: `${capitalise(jointName(ctx, bothJoints[0]))} and ${jointName(ctx, bothJoints[1])} both need the slot on face ${faceText} of ${profileName(ctx.profileById.get(metId))} between ${mm(Math.max(claims.lo[c], claims.lo[reach]))} and ${mm(Math.min(claims.hi[c], claims.hi[reach]))} from its start. Move one joint or put its connector on another face.`,
         });
       }
-      if (c.hi > reach.hi) reach = c;
+      if (claims.hi[c] > claims.hi[reach]) reach = c;
     }
   }
 }
 
 /**
- * Sorts claims by `lo`, keeping the order of equal ones (as the stable `Array.prototype.sort`
- * would). Lists are a handful of claims per slot face; insertion sort makes no work copy per list.
+ * Sorts claim indices by their `lo`, keeping the order of equal ones (as the stable
+ * `Array.prototype.sort` would). Lists are a handful of claims per slot face; insertion sort makes
+ * no work copy per list.
  */
-function sortByLo(list: SlotClaim[]): void {
+function sortByLo(list: number[], lo: Float64Array): void {
   for (let i = 1; i < list.length; i++) {
     const claim = list[i];
     let j = i - 1;
-    while (j >= 0 && list[j].lo - claim.lo > 0) {
+    while (j >= 0 && lo[list[j]] - lo[claim] > 0) {
       list[j + 1] = list[j];
       j--;
     }
