@@ -144,10 +144,10 @@ function checkMachining(joint: Joint, connector: Connector, infos: ProfileInfo[]
       const offset = fromEnd === 'start' ? along : infos[1].profile.length - along;
       requireMachining(joint, connector, need, infos[1], fromEnd, offset, out);
     } else {
-      joint.members.forEach((m, i) => {
-        const end = memberEnd(m, infos[i]);
+      for (let i = 0; i < joint.members.length; i++) {
+        const end = memberEnd(joint.members[i], infos[i]);
         if (end) requireMachining(joint, connector, need, infos[i], end, need.offsetFromEnd, out);
-      });
+      }
     }
   }
 }
@@ -166,12 +166,10 @@ function requireMachining(
   out: Finding[],
 ): void {
   const wantAlong = fromEnd === 'start' ? offset : info.profile.length - offset;
-  const present = info.profile.machining.some(
-    (m) =>
-      m.kind === need.kind &&
-      (m.jointId === joint.id || Math.abs(machiningAlong(info, m) - wantAlong) <= MACHINING_POSITION_TOLERANCE_MM),
-  );
-  if (present) return;
+  // A loop rather than `some` with a closure: this runs for every joint.
+  for (const m of info.profile.machining) {
+    if (m.kind === need.kind && (m.jointId === joint.id || Math.abs(machiningAlong(info, m) - wantAlong) <= MACHINING_POSITION_TOLERANCE_MM)) return;
+  }
   const what = MACHINING_WORDS[need.kind];
   const where = need.kind === 'end-tap' ? `in ${endPhrase(info, fromEnd)}` : `${mm(offset)} from ${endPhrase(info, fromEnd)}`;
   const fix = addMachiningFix(joint, `Add the ${what}`);

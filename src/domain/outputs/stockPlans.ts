@@ -65,7 +65,7 @@ export interface OffcutUse {
 export function useOffcuts(cuts: StockCut[], offcuts: number[], kerf: number): { used: OffcutUse[]; rest: StockCut[] } {
   const bins = offcuts.map((length) => ({ length, space: length + kerf, cuts: [] as StockCut[] }));
   const rest: StockCut[] = [];
-  for (const cut of [...cuts].sort((a, b) => b.length - a.length)) {
+  for (const cut of longestFirst(cuts)) {
     let best: (typeof bins)[number] | null = null;
     for (const bin of bins) if (bin.space + TOLERANCE >= cut.length + kerf && (!best || bin.space < best.space)) best = bin;
     if (!best) rest.push(cut);
@@ -76,6 +76,26 @@ export function useOffcuts(cuts: StockCut[], offcuts: number[], kerf: number): {
   }
   const used = bins.filter((b) => b.cuts.length > 0).map((b) => ({ length: b.length, cuts: b.cuts, left: Math.max(0, round(b.space - kerf)) }));
   return { used, rest };
+}
+
+/**
+ * The cuts longest first, equal lengths in their given order: what the stable
+ * `[...cuts].sort((a, b) => b.length - a.length)` gives. Frames repeat a few lengths, so the cuts
+ * are bucketed by length and only the distinct lengths are sorted (falls back to the sort when a
+ * length is not a finite number, where that comparison is not an order).
+ */
+function longestFirst(cuts: readonly StockCut[]): StockCut[] {
+  const buckets = new Map<number, StockCut[]>();
+  for (const cut of cuts) {
+    if (!Number.isFinite(cut.length)) return [...cuts].sort((a, b) => b.length - a.length);
+    const bucket = buckets.get(cut.length);
+    if (bucket) bucket.push(cut);
+    else buckets.set(cut.length, [cut]);
+  }
+  const lengths = [...buckets.keys()].sort((a, b) => b - a);
+  const sorted: StockCut[] = [];
+  for (const length of lengths) for (const cut of buckets.get(length)!) sorted.push(cut);
+  return sorted;
 }
 
 function barHolds(bar: StockBar, usable: number, kerf: number): boolean {
