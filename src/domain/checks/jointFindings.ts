@@ -243,7 +243,7 @@ function checkProfileEnds(ctx: AnalysisContext, out: Finding[]): void {
     for (const end of ['start', 'end'] as const) {
       if (jointsAt(info, end).length > 0) continue;
       const accessories = accessoriesAt(info, end);
-      if (accessories.some((a) => END_CLOSERS.has(a.kind))) {
+      if (hasEndCloser(accessories)) {
         // A cap, foot or caster says the designer meant the end to be free.
         checkThreadedEnd(info, end, accessories, out);
         continue;
@@ -274,11 +274,17 @@ function checkProfileEnds(ctx: AnalysisContext, out: Finding[]): void {
   }
 }
 
+/** Whether an end has a cap, foot or caster (a loop, not `some` with a closure, for every profile end). */
+function hasEndCloser(accessories: readonly { kind: string }[]): boolean {
+  for (const a of accessories) if (END_CLOSERS.has(a.kind)) return true;
+  return false;
+}
+
 /** Feet and casters thread into the centre bore: the end must be tapped. `accessories`: those at the end. */
 function checkThreadedEnd(info: ProfileInfo, end: ProfileEnd, accessories: readonly { id: string; kind: string }[], out: Finding[]): void {
   const threaded = accessories.find((a) => a.kind === 'leveling-foot' || a.kind === 'caster');
   if (!threaded) return;
-  if (info.profile.machining.some((m) => m.kind === 'end-tap' && m.fromEnd === end)) return;
+  for (const m of info.profile.machining) if (m.kind === 'end-tap' && m.fromEnd === end) return;
   const word = threaded.kind === 'caster' ? 'caster' : 'leveling foot';
   out.push({
     id: findingId(CHECK, 'untapped-foot', [info.profile.id, end]),

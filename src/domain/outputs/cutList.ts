@@ -107,11 +107,7 @@ function cachedHead(root: Nested<string>, variantId: string, length: number, sta
 function endTreatment(info: ProfileInfo, end: ProfileEnd, thread: string | undefined, cache: Nested<EndTreatment>): EndTreatment {
   const accessories = accessoriesAt(info, end);
   const word = endWord(info, end);
-  let kind: EndTreatment['kind'] = 'plain';
-  const foot = accessories.find((a) => a.kind === 'leveling-foot' || a.kind === 'caster');
-  if (foot) kind = foot.kind === 'caster' ? 'caster' : 'foot';
-  else if (info.profile.machining.some((m) => m.kind === 'end-tap' && m.fromEnd === end)) kind = 'tap';
-  else if (accessories.some((a) => a.kind === 'end-cap')) kind = 'cap';
+  const kind = endKind(info, end, accessories);
   // Looked up level by level, without a key path array or a closure per profile end.
   const threadKey = thread ?? '';
   let byWord = cache.get(kind) as Nested<EndTreatment> | undefined;
@@ -122,6 +118,20 @@ function endTreatment(info: ProfileInfo, end: ProfileEnd, thread: string | undef
   const made = describeEnd(kind, word, thread);
   byThread.set(threadKey, made);
   return made;
+}
+
+/**
+ * What happens at a profile end: a foot or caster (the first fitted), else a tap, else a cap, else
+ * a plain cut. Loops rather than `find`/`some` with closures: this runs for every profile end.
+ */
+function endKind(info: ProfileInfo, end: ProfileEnd, accessories: readonly { kind: string }[]): EndTreatment['kind'] {
+  for (const a of accessories) {
+    if (a.kind === 'caster') return 'caster';
+    if (a.kind === 'leveling-foot') return 'foot';
+  }
+  for (const m of info.profile.machining) if (m.kind === 'end-tap' && m.fromEnd === end) return 'tap';
+  for (const a of accessories) if (a.kind === 'end-cap') return 'cap';
+  return 'plain';
 }
 
 function describeEnd(kind: EndTreatment['kind'], word: string, thread: string | undefined): EndTreatment {
