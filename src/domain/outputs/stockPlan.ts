@@ -119,26 +119,67 @@ function byLengthDescending(a: StockCut, b: StockCut): number {
 }
 
 /**
- * Sorts a bar's cuts in place, longest first (ties by id), keeping the order of equal ones as the
- * stable built-in sort would. A bar holds a handful of cuts; insertion sort makes no work copy.
+ * Each placeable cut's place in the packing order (`sortedCuts`), with cuts the order ties (same
+ * length and id) sharing one number: sorting a bar by these numbers, keeping the order of equal
+ * ones, gives what the stable sort by `byLengthDescending` gives, without comparing ids again.
  */
-function sortBarCuts(cuts: StockCut[]): StockCut[] {
+function packingRanks(problem: PackingProblem): Map<StockCut, number> {
+  const sorted = sortedCuts(problem);
+  const ranks = new Map<StockCut, number>();
+  let rank = 0;
+  for (let i = 0; i < sorted.length; i++) {
+    if (i > 0 && byLengthDescending(sorted[i - 1], sorted[i]) !== 0) rank = i;
+    if (!ranks.has(sorted[i])) ranks.set(sorted[i], rank);
+  }
+  return ranks;
+}
+
+/**
+ * Sorts a bar's cuts in place, longest first (ties by id), keeping the order of equal ones as the
+ * stable built-in sort would: by packing rank, or by the comparison for a cut without one. A bar
+ * holds a handful of cuts; insertion sort makes no work copy.
+ */
+function sortBarCuts(cuts: StockCut[], ranks: Map<StockCut, number>): StockCut[] {
+  const keys = new Array<number>(cuts.length);
+  for (let i = 0; i < cuts.length; i++) {
+    const rank = ranks.get(cuts[i]);
+    if (rank === undefined) return insertionSort(cuts, byLengthDescending);
+    keys[i] = rank;
+  }
   for (let i = 1; i < cuts.length; i++) {
     const cut = cuts[i];
+    const key = keys[i];
     let j = i - 1;
-    while (j >= 0 && byLengthDescending(cuts[j], cut) > 0) {
+    while (j >= 0 && keys[j] > key) {
       cuts[j + 1] = cuts[j];
+      keys[j + 1] = keys[j];
       j--;
     }
     cuts[j + 1] = cut;
+    keys[j + 1] = key;
   }
   return cuts;
+}
+
+/** Stable in-place insertion sort (as the built-in sort orders, without its work copy). */
+function insertionSort<T>(list: T[], compare: (a: T, b: T) => number): T[] {
+  for (let i = 1; i < list.length; i++) {
+    const item = list[i];
+    let j = i - 1;
+    while (j >= 0 && compare(list[j], item) > 0) {
+      list[j + 1] = list[j];
+      j--;
+    }
+    list[j + 1] = item;
+  }
+  return list;
 }
 
 /** Removes `list[position]`, shifting the rest down (as `splice(position, 1)`, without the removed-items array it returns). */
 function removeAt(list: number[], position: number): void {
   for (let k = position + 1; k < list.length; k++) list[k - 1] = list[k];
-  list.length -= 1;
+  // pop() rather than `length -= 1`, which takes a slow path in the engine.
+  list.pop();
 }
 
 /** Inserts `value` at `position`, shifting the rest up (as `splice(position, 0, value)`, without the array it returns). */
@@ -149,8 +190,9 @@ function insertAt(list: number[], position: number, value: number): void {
 }
 
 function toStockBars(groups: StockCut[][], problem: PackingProblem, minReusableOffcut: number): StockBar[] {
+  const ranks = packingRanks(problem);
   return groups.map((cuts, index) => {
-    const sorted = sortBarCuts(cuts.slice());
+    const sorted = sortBarCuts(cuts.slice(), ranks);
     const consumed = sorted.reduce((sum, cut) => sum + cut.length + problem.kerf, 0);
     const usedLength = Math.min(problem.usable, consumed);
     const offcut = Math.max(0, problem.usable - consumed);
