@@ -25,6 +25,7 @@ export function cutList(ctx: AnalysisContext): { items: CutListItem[]; groups: C
   // Caches are nested maps keyed by the parts themselves, so no key string is built per profile.
   const treatments: Nested<EndTreatment> = new Map();
   const keyHeads: Nested<string> = new Map();
+  const keyParts: Nested<string> = new Map();
   const threads = new Map<ProfileInfo['system'], string | undefined>();
   for (const info of ctx.profiles) {
     let thread = threads.get(info.system);
@@ -34,7 +35,7 @@ export function cutList(ctx: AnalysisContext): { items: CutListItem[]; groups: C
     const { variantId, length } = info.profile;
     const head = cachedHead(keyHeads, variantId, length, ends.start.kind, ends.end.kind);
     let groupKey = head;
-    for (const m of machining) groupKey += `|${m.kind}/${m.fromEnd}/${m.offset.toFixed(1)}/${m.face}/${m.diameter ?? ''}`;
+    for (const m of machining) groupKey = cachedKeyPart(keyParts, groupKey, m);
     items.push({
       id: info.profile.id,
       label: info.profile.label ?? info.profile.id,
@@ -102,6 +103,26 @@ function cachedHead(root: Nested<string>, variantId: string, length: number, sta
   let head = byEnd.get(endKind) as string | undefined;
   if (head === undefined) byEnd.set(endKind, (head = [variantId, length.toFixed(1), startKind, endKind].join('|')));
   return head;
+}
+
+/**
+ * `key` followed by one machining operation's part of the group key, made once per key and
+ * operation: the same key string comes back for every piece of a kind, so the group map finds it
+ * without hashing a new string per profile.
+ */
+function cachedKeyPart(root: Nested<string>, key: string, m: CutMachiningOperation): string {
+  const node = child(child(child(child(child(root, key), m.kind), m.fromEnd), m.offset), m.face);
+  const diameter = m.diameter ?? '';
+  let joined = node.get(diameter) as string | undefined;
+  if (joined === undefined) node.set(diameter, (joined = `${key}|${m.kind}/${m.fromEnd}/${m.offset.toFixed(1)}/${m.face}/${diameter}`));
+  return joined;
+}
+
+/** The map under `key`, made on first use. */
+function child<T>(node: Nested<T>, key: string | number): Nested<T> {
+  let next = node.get(key) as Nested<T> | undefined;
+  if (!next) node.set(key, (next = new Map()));
+  return next;
 }
 
 function endTreatment(info: ProfileInfo, end: ProfileEnd, thread: string | undefined, cache: Nested<EndTreatment>): EndTreatment {
