@@ -142,8 +142,10 @@ export function buildAnalysisContext(design: DesignDocument, catalogue: Catalogu
       height,
       axes,
       box: profileBoundingBoxBetween(profile.start, endPoint, width, height, axes),
-      // The document's own start point (read-only here): no copy per profile.
-      startPoint: profile.start,
+      // A copy, although the document's point would do: made here, every start and end point has
+      // the same array layout (the document's may hold small integers), so readers of points stay
+      // on one fast path.
+      startPoint: [profile.start[0], profile.start[1], profile.start[2]],
       endPoint,
       joints: NONE,
       startJoints: NONE,
