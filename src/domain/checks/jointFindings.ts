@@ -11,7 +11,7 @@ import { sectionHalfExtentAlong } from '../geometry/profileGeometry';
 import { dot } from '../geometry/vectors';
 import { CONTACT_TOLERANCE_MM, accessoriesAt, areJoined, jointsAt, memberEnd, memberInfo, memberPoint, type AnalysisContext, type ProfileInfo } from '../analysis/context';
 import { capitalise, countOf, endPhrase, findingId, jointName, mm, profileName } from '../analysis/describe';
-import { distancePointToBox, firstProfileAtPoint, pointOffFace, projectAlong } from './geometryQueries';
+import { distancePointToProfile, firstProfileAtPoint, pointOffFace, projectAlong } from './geometryQueries';
 import { addEndCapFix, addMachiningFix } from './fixes';
 
 const CHECK = 'joints';
@@ -100,7 +100,7 @@ function checkJoint(ctx: AnalysisContext, jointIndex: number, infos: ProfileInfo
       });
     }
   }
-  checkMembersMeet(joint, connector, infos, out);
+  checkMembersMeet(ctx, joint, connector, infos, out);
   checkMachining(joint, connector, infos, out);
   checkCounts(ctx, joint, connector, infos, out, cache);
 }
@@ -109,16 +109,16 @@ function memberIdsOf(joint: Joint): string[] {
   return joint.members.map((m) => m.profileId);
 }
 
-function checkMembersMeet(joint: Joint, connector: Connector, infos: ProfileInfo[], out: Finding[]): void {
+function checkMembersMeet(ctx: AnalysisContext, joint: Joint, connector: Connector, infos: ProfileInfo[], out: Finding[]): void {
   if (joint.kind === 'hinge' || infos.length < 2) return;
   const p0 = memberPoint(infos[0], joint.members[0]);
   let gap: number;
   if (joint.kind === 'corner-cube') {
     // The cube sits between the ends: each end lies within one section size of the others.
     const reach = Math.max(...infos.map((i) => Math.max(i.width, i.height)));
-    gap = Math.max(...infos.slice(1).map((info, k) => distancePointToBox(memberPoint(info, joint.members[k + 1]), infos[0].box))) - reach;
+    gap = Math.max(...infos.slice(1).map((info, k) => distancePointToProfile(ctx, memberPoint(info, joint.members[k + 1]), infos[0].index))) - reach;
   } else {
-    gap = distancePointToBox(p0, infos[1].box);
+    gap = distancePointToProfile(ctx, p0, infos[1].index);
   }
   if (gap > MEMBERS_MEET_TOLERANCE_MM) {
     out.push({
@@ -366,7 +366,7 @@ function checkSlotClaims(ctx: AnalysisContext, out: Finding[]): void {
   const list: number[] = [];
   for (const key of facesInOrder) {
     if (claims.next[firstClaim[key]] < 0) continue;
-    list.length = 0;
+    while (list.length > 0) list.pop();
     for (let k = firstClaim[key]; k >= 0; k = claims.next[k]) list.push(k);
     sortByLo(list, claims.lo);
     const metId = ctx.profiles[key >> 2].profile.id;

@@ -3,7 +3,7 @@
  * "what touches this profile end" queries. Building is O(n); pair enumeration visits each
  * candidate pair once (it is reported only by the cell holding the corner of the pair's overlap).
  */
-import type { Box } from './box';
+import { distancePointToCorners, type Box } from './box';
 
 /** Cell keys stay below 2^30 so they are small integers (fast Map keys, no boxed doubles). */
 const MAX_CELLS = 1 << 30;
@@ -157,6 +157,37 @@ export class UniformGrid {
         }
       }
     }
+  }
+
+  /**
+   * How deep indexed boxes `i` and `j` interpenetrate, mm: `boxPenetration` read from the grid's
+   * own copy of the corners (no box objects in the pair loop).
+   */
+  penetration(i: number, j: number): number {
+    const c = this.corners;
+    const a = i * 6;
+    const b = j * 6;
+    const ox = Math.min(c[a + 3], c[b + 3]) - Math.max(c[a], c[b]);
+    const oy = Math.min(c[a + 4], c[b + 4]) - Math.max(c[a + 1], c[b + 1]);
+    const oz = Math.min(c[a + 5], c[b + 5]) - Math.max(c[a + 2], c[b + 2]);
+    return Math.min(ox, oy, oz);
+  }
+
+  /** Distance (mm) from point `p` to indexed box `i` (0 inside), as `distancePointToBox`. */
+  distanceToPoint(i: number, p: readonly [number, number, number]): number {
+    const c = this.corners;
+    const o = i * 6;
+    return distancePointToCorners(p, c[o], c[o + 1], c[o + 2], c[o + 3], c[o + 4], c[o + 5]);
+  }
+
+  /** `boxPenetration` of indexed box `i` and `box`, mm. */
+  penetrationWith(i: number, box: Box): number {
+    const c = this.corners;
+    const a = i * 6;
+    const ox = Math.min(c[a + 3], box.maxX) - Math.max(c[a], box.minX);
+    const oy = Math.min(c[a + 4], box.maxY) - Math.max(c[a + 1], box.minY);
+    const oz = Math.min(c[a + 5], box.maxZ) - Math.max(c[a + 2], box.minZ);
+    return Math.min(ox, oy, oz);
   }
 
   /** Cell index along one axis, clamped to the grid (queries may reach outside it). */
