@@ -125,12 +125,16 @@ function byLengthDescending(a: StockCut, b: StockCut): number {
  */
 function packingRanks(problem: PackingProblem): Map<StockCut, number> {
   const sorted = sortedCuts(problem);
-  const ranks = new Map<StockCut, number>();
-  let rank = 0;
-  for (let i = 0; i < sorted.length; i++) {
-    if (i > 0 && byLengthDescending(sorted[i - 1], sorted[i]) !== 0) rank = i;
-    if (!ranks.has(sorted[i])) ranks.set(sorted[i], rank);
+  // The order ties two neighbours exactly when they have the same length and id (the lengths here are finite).
+  const rankAt = new Int32Array(sorted.length);
+  for (let i = 1; i < sorted.length; i++) {
+    const a = sorted[i - 1];
+    const b = sorted[i];
+    rankAt[i] = a.length === b.length && a.id === b.id ? rankAt[i - 1] : i;
   }
+  // Set from the end, so a cut listed twice keeps its first place (one map write per cut).
+  const ranks = new Map<StockCut, number>();
+  for (let i = sorted.length - 1; i >= 0; i--) ranks.set(sorted[i], rankAt[i]);
   return ranks;
 }
 
