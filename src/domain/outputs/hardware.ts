@@ -50,7 +50,9 @@ interface PartLike {
 
 export function hardwareSummary(ctx: AnalysisContext): HardwareSummary {
   const lines = new Map<string, HardwareLine>();
-  const massByCategory = new Map<BomCategory, MassMoment>();
+  // Mass sums per category in typed arrays (kg, Σ kg·x, Σ kg·y, Σ kg·z, unplaced kg): adding to a
+  // number field of an object can box every sum, tens of thousands of times at 8,000 profiles.
+  const sums = new Map<BomCategory, Float64Array>();
   const cat = ctx.catalogue;
 
   const lineByPart = new Map<PartLike, HardwareLine>();
@@ -69,17 +71,17 @@ export function hardwareSummary(ctx: AnalysisContext): HardwareSummary {
     if (line.sourceIds[line.sourceIds.length - 1] !== sourceId) line.sourceIds.push(sourceId);
     const kg = quantity * part.unitMass;
     if (!(kg > 0)) return;
-    let m = massByCategory.get(category);
+    let m = sums.get(category);
     if (!m) {
-      m = { kg: 0, mx: 0, my: 0, mz: 0, unplacedKg: 0 };
-      massByCategory.set(category, m);
+      m = new Float64Array(5);
+      sums.set(category, m);
     }
     if (at) {
-      m.kg += kg;
-      m.mx += kg * at[0];
-      m.my += kg * at[1];
-      m.mz += kg * at[2];
-    } else m.unplacedKg += kg;
+      m[0] += kg;
+      m[1] += kg * at[0];
+      m[2] += kg * at[1];
+      m[3] += kg * at[2];
+    } else m[4] += kg;
   };
 
   // Joints with the same connector, screw head, T-nut and host system use the same parts: resolve once.
@@ -128,6 +130,8 @@ export function hardwareSummary(ctx: AnalysisContext): HardwareSummary {
       if (nut) add('t-nut', nut, 'pcs', (part.tNutCount ?? 0) * acc.quantity, acc.id, at);
     }
   }
+  const massByCategory = new Map<BomCategory, MassMoment>();
+  for (const [category, m] of sums) massByCategory.set(category, { kg: m[0], mx: m[1], my: m[2], mz: m[3], unplacedKg: m[4] });
   return { lines: [...lines.values()], massByCategory };
 }
 
