@@ -5,6 +5,7 @@
 import { panelAxes } from '../geometry/panelGeometry';
 import { dominantAxis } from '../geometry/vectors';
 import type { AnalysisContext, PanelInfo, ProfileInfo } from '../analysis/context';
+import { frameLevels } from './footprint';
 
 /** A direction component above this counts as vertical. */
 const VERTICAL = 0.999;
@@ -34,8 +35,7 @@ export function panelSupports(ctx: AnalysisContext, panel: PanelInfo): ProfileIn
 
 /** Vertical profiles whose lower end stands at the lowest level of the frame. */
 export function findLegs(ctx: AnalysisContext): ProfileInfo[] {
-  let floor = Infinity;
-  for (const p of ctx.profiles) floor = Math.min(floor, p.box.minY);
+  const { floor } = frameLevels(ctx);
   const legs: ProfileInfo[] = [];
   for (const p of ctx.profiles) {
     if (Math.abs(p.profile.direction[1]) < VERTICAL) continue;

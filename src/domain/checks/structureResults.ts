@@ -30,7 +30,7 @@ import { oneWayStripDeflection, simplySupportedPlateDeflection } from '../struct
 import { PUSH_TEST_MIN_HEIGHT_MM, STABILITY_PUSH_FORCE_N } from '../structure/stability';
 import { tipOverForce } from '../structure/tipOver';
 import { memberAlong, type AnalysisContext, type PanelInfo, type ProfileInfo } from '../analysis/context';
-import { footprintLeverArm } from './footprint';
+import { footprintLeverArm, frameLevels } from './footprint';
 import { findLegs, frameBracing, panelSupports } from './frameShape';
 
 /** Standard gravity, m/s² (exact by definition, CGPM 1901). */
@@ -423,12 +423,7 @@ function jointChecks(ctx: AnalysisContext, reactions: Reaction[]): JointLoadResu
 /** Push at the top edge (or the load case's height) that tips the frame; null when nothing stands on the floor. */
 function tipOverCheck(ctx: AnalysisContext, loadCase: LoadCase | undefined, weight: number, centre: Vec3): TipOverResult | null {
   if (ctx.profiles.length === 0) return null;
-  let floor = Infinity;
-  let top = -Infinity;
-  for (const p of ctx.profiles) {
-    floor = Math.min(floor, p.box.minY);
-    top = Math.max(top, p.box.maxY);
-  }
+  const { floor, top } = frameLevels(ctx);
   const height = top - floor;
   const pushHeight = loadCase?.tipOverHeight ?? height;
   if (!(pushHeight > 0)) return null;
