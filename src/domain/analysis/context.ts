@@ -97,6 +97,21 @@ export interface AnalysisContext {
   profileById: Map<string, ProfileInfo>;
   panels: PanelInfo[];
   panelById: Map<string, PanelInfo>;
+  /**
+   * Joint members resolved to profile indices once, in document order: the members of joint j
+   * (`design.joints[j]`) are `jointMemberProfile[jointMemberStart[j] + k]`, −1 for a profile not in
+   * the design. Checks read these instead of looking ids up in `profileById` per joint.
+   */
+  jointMemberStart: Int32Array;
+  jointMemberProfile: Int32Array;
+  /**
+   * `profiles[i].joints` as joint indices (into `design.joints`), in the same order: entries
+   * `profileJointStart[i]` up to `profileJointStart[i + 1]` of `profileJointIndex`.
+   */
+  profileJointStart: Int32Array;
+  profileJointIndex: Int32Array;
+  /** Per accessory (`design.accessories[a]`): the index of its profile, or −1 (none, or not in the design). */
+  accessoryProfile: Int32Array;
   /** Joints by id, built on first use (few analyses need it). */
   readonly jointById: Map<string, Joint>;
   /** Spatial index over `profiles[i].box`. */
@@ -127,6 +142,9 @@ export function buildAnalysisContext(design: DesignDocument, catalogue: Catalogu
       height,
       axes,
       box: profileBoundingBoxBetween(profile.start, endPoint, width, height, axes),
+      // A copy, although the document's point would do: made here, every start and end point has
+      // the same array layout (the document's may hold small integers), so readers of points stay
+      // on one fast path.
       startPoint: [profile.start[0], profile.start[1], profile.start[2]],
       endPoint,
       joints: NONE,
@@ -139,8 +157,8 @@ export function buildAnalysisContext(design: DesignDocument, catalogue: Catalogu
     profileById.set(profile.id, info);
   }
 
-  attachJoints(design.joints, profiles, profileById);
-  attachAccessories(design.accessories, profiles, profileById);
+  const jointMembers = attachJoints(design.joints, profiles, profileById);
+  const accessoryProfile = attachAccessories(design.accessories, profiles, profileById);
 
   const panels: PanelInfo[] = [];
   const panelById = new Map<string, PanelInfo>();
@@ -168,6 +186,11 @@ export function buildAnalysisContext(design: DesignDocument, catalogue: Catalogu
       }
       return jointById;
     },
+    jointMemberStart: jointMembers.start,
+    jointMemberProfile: jointMembers.profile,
+    profileJointStart: jointMembers.profileJointStart,
+    profileJointIndex: jointMembers.profileJointIndex,
+    accessoryProfile,
     profileGrid: new UniformGrid(boxes, { margin: CONTACT_TOLERANCE_MM }),
     memo: new Map(),
   };
@@ -209,20 +232,44 @@ function exactText(x: number): string {
   return Object.is(x, -0) ? '-0' : String(x);
 }
 
+/** The profile of member `k` of joint `jointIndex` (`design.joints[jointIndex]`), or undefined when it is not in the design. */
+export function memberInfo(ctx: AnalysisContext, jointIndex: number, k: number): ProfileInfo | undefined {
+  const at = ctx.jointMemberStart[jointIndex] + k;
+  if (k < 0 || at >= ctx.jointMemberStart[jointIndex + 1]) return undefined;
+  const i = ctx.jointMemberProfile[at];
+  return i < 0 ? undefined : ctx.profiles[i];
+}
+
+/** The profile accessory `accessoryIndex` (`design.accessories[accessoryIndex]`) is fitted to, or undefined. */
+export function accessoryInfo(ctx: AnalysisContext, accessoryIndex: number): ProfileInfo | undefined {
+  const i = ctx.accessoryProfile[accessoryIndex];
+  return i < 0 ? undefined : ctx.profiles[i];
+}
+
 /**
  * Fills each profile's joint lists (any member, start, end) in joint order. Two passes: the first
  * resolves each member's profile once and counts, the second fills lists of exactly that length,
- * so no list grows by copying and no list is allocated for a profile without joints.
+ * so no list grows by copying and no list is allocated for a profile without joints. Returns the
+ * resolved members (see `AnalysisContext.jointMemberProfile`).
  */
-function attachJoints(joints: readonly Joint[], profiles: ProfileInfo[], profileById: Map<string, ProfileInfo>): void {
+function attachJoints(
+  joints: readonly Joint[],
+  profiles: ProfileInfo[],
+  profileById: Map<string, ProfileInfo>,
+): { start: Int32Array; profile: Int32Array; profileJointStart: Int32Array; profileJointIndex: Int32Array } {
   const n = profiles.length;
   const anyCount = new Int32Array(n);
   const startCount = new Int32Array(n);
   const endCount = new Int32Array(n);
   const lastJoint = new Int32Array(n).fill(-1);
   // Per member in order: its profile's index, or -1; its end: 0 none, 1 start, 2 end.
+  const memberStart = new Int32Array(joints.length + 1);
   let members = 0;
-  for (const joint of joints) members += joint.members.length;
+  for (let j = 0; j < joints.length; j++) {
+    memberStart[j] = members;
+    members += joints[j].members.length;
+  }
+  memberStart[joints.length] = members;
   const memberProfile = new Int32Array(members);
   const memberEndCode = new Uint8Array(members);
   let m = 0;
@@ -250,6 +297,9 @@ function attachJoints(joints: readonly Joint[], profiles: ProfileInfo[], profile
       }
     }
   }
+  const profileJointStart = new Int32Array(n + 1);
+  for (let i = 0; i < n; i++) profileJointStart[i + 1] = profileJointStart[i] + anyCount[i];
+  const profileJointIndex = new Int32Array(profileJointStart[n]);
   for (let i = 0; i < n; i++) {
     const info = profiles[i];
     if (anyCount[i] > 0) info.joints = new Array<Joint>(anyCount[i]);
@@ -273,24 +323,32 @@ function attachJoints(joints: readonly Joint[], profiles: ProfileInfo[], profile
       else if (memberEndCode[m] === 2) info.endJoints[endCount[i]++] = joint;
       if (lastJoint[i] !== j) {
         lastJoint[i] = j;
+        profileJointIndex[profileJointStart[i] + anyCount[i]] = j;
         info.joints[anyCount[i]++] = joint;
       }
     }
   }
+  return { start: memberStart, profile: memberProfile, profileJointStart, profileJointIndex };
 }
 
-/** Fills each profile's end accessory lists in document order, at their exact length (as `attachJoints`). */
-function attachAccessories(accessories: readonly Accessory[], profiles: ProfileInfo[], profileById: Map<string, ProfileInfo>): void {
+/**
+ * Fills each profile's end accessory lists in document order, at their exact length (as
+ * `attachJoints`). Returns each accessory's profile index (see `AnalysisContext.accessoryProfile`).
+ */
+function attachAccessories(accessories: readonly Accessory[], profiles: ProfileInfo[], profileById: Map<string, ProfileInfo>): Int32Array {
   const n = profiles.length;
   const startCount = new Int32Array(n);
   const endCount = new Int32Array(n);
+  const accessoryProfile = new Int32Array(accessories.length).fill(-1);
   // Per accessory: its profile's index and end (0 start, 1 end), or -1.
   const target = new Int32Array(accessories.length).fill(-1);
   for (let a = 0; a < accessories.length; a++) {
     const acc = accessories[a];
-    if (!acc.profileId || !acc.end) continue;
+    if (!acc.profileId) continue;
     const info = profileById.get(acc.profileId);
     if (!info) continue;
+    accessoryProfile[a] = info.index;
+    if (!acc.end) continue;
     const atStart = acc.end === 'start';
     target[a] = info.index * 2 + (atStart ? 0 : 1);
     if (atStart) startCount[info.index]++;
@@ -309,6 +367,7 @@ function attachAccessories(accessories: readonly Accessory[], profiles: ProfileI
     if ((t & 1) === 0) profiles[i].startAccessories[startCount[i]++] = accessories[a];
     else profiles[i].endAccessories[endCount[i]++] = accessories[a];
   }
+  return accessoryProfile;
 }
 
 function panelInfo(index: number, design: DesignDocument, catalogue: CatalogueIndex, profileById: Map<string, ProfileInfo>): PanelInfo {

@@ -11,10 +11,29 @@ const FLOOR_TOLERANCE_MM = 1;
 
 type P2 = [number, number];
 
+/**
+ * The frame's lowest and highest level, mm: the lowest profile box bottom and the highest top
+ * (Infinity and −Infinity without profiles). Worked out once per analysis: the legs, the footprint
+ * and every tip-over check ask for it.
+ */
+export function frameLevels(ctx: AnalysisContext): { floor: number; top: number } {
+  let levels = ctx.memo.get('frameLevels') as { floor: number; top: number } | undefined;
+  if (!levels) {
+    let floor = Infinity;
+    let top = -Infinity;
+    for (const p of ctx.profiles) {
+      floor = Math.min(floor, p.box.minY);
+      top = Math.max(top, p.box.maxY);
+    }
+    levels = { floor, top };
+    ctx.memo.set('frameLevels', levels);
+  }
+  return levels;
+}
+
 /** Floor contact points (x, z), mm, and whether feet or profiles make them. */
 export function floorContact(ctx: AnalysisContext): { points: P2[]; kind: 'feet' | 'profiles' } {
-  let floor = Infinity;
-  for (const p of ctx.profiles) floor = Math.min(floor, p.box.minY);
+  const { floor } = frameLevels(ctx);
   const feet: P2[] = [];
   for (const p of ctx.profiles) {
     if (p.box.minY > floor + FLOOR_TOLERANCE_MM + Math.max(p.width, p.height)) continue;
@@ -31,8 +50,7 @@ export function floorContact(ctx: AnalysisContext): { points: P2[]; kind: 'feet'
 
 /** Floor contact points (x, z), mm, of the profiles resting at the lowest level. */
 export function floorContactPoints(ctx: AnalysisContext): P2[] {
-  let floor = Infinity;
-  for (const p of ctx.profiles) floor = Math.min(floor, p.box.minY);
+  const { floor } = frameLevels(ctx);
   const points: P2[] = [];
   for (const p of ctx.profiles) {
     if (p.box.minY > floor + FLOOR_TOLERANCE_MM) continue;

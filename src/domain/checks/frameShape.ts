@@ -5,6 +5,7 @@
 import { panelAxes } from '../geometry/panelGeometry';
 import { dominantAxis } from '../geometry/vectors';
 import type { AnalysisContext, PanelInfo, ProfileInfo } from '../analysis/context';
+import { frameLevels } from './footprint';
 
 /** A direction component above this counts as vertical. */
 const VERTICAL = 0.999;
@@ -34,8 +35,7 @@ export function panelSupports(ctx: AnalysisContext, panel: PanelInfo): ProfileIn
 
 /** Vertical profiles whose lower end stands at the lowest level of the frame. */
 export function findLegs(ctx: AnalysisContext): ProfileInfo[] {
-  let floor = Infinity;
-  for (const p of ctx.profiles) floor = Math.min(floor, p.box.minY);
+  const { floor } = frameLevels(ctx);
   const legs: ProfileInfo[] = [];
   for (const p of ctx.profiles) {
     if (Math.abs(p.profile.direction[1]) < VERTICAL) continue;
@@ -54,7 +54,8 @@ export function frameBracing(ctx: AnalysisContext): { x: boolean; z: boolean } {
   let z = false;
   for (const p of ctx.profiles) {
     const d = p.profile.direction;
-    const offAxis = [Math.abs(d[0]), Math.abs(d[1]), Math.abs(d[2])].filter((c) => c > DIAGONAL).length >= 2;
+    // Counted, not filtered into a list: one array per profile adds up at 8,000 profiles.
+    const offAxis = (Math.abs(d[0]) > DIAGONAL ? 1 : 0) + (Math.abs(d[1]) > DIAGONAL ? 1 : 0) + (Math.abs(d[2]) > DIAGONAL ? 1 : 0) >= 2;
     if (!offAxis || Math.abs(d[1]) <= DIAGONAL) continue;
     if (Math.abs(d[0]) > DIAGONAL) x = true;
     if (Math.abs(d[2]) > DIAGONAL) z = true;

@@ -1,15 +1,17 @@
 /** Small geometric questions the checks ask about profiles, mm. */
-import type { Box } from '../geometry/box';
+import { distancePointToCorners, type Box } from '../geometry/box';
 import { faceNormal, sectionHalfExtentAlong } from '../geometry/profileGeometry';
 import { addScaled, dot, type ReadonlyVec3, type Vec3 } from '../geometry/vectors';
 import type { AnalysisContext, ProfileInfo } from '../analysis/context';
 
 /** Distance from a point to a box (0 inside). */
 export function distancePointToBox(p: ReadonlyVec3, b: Box): number {
-  const dx = Math.max(b.minX - p[0], 0, p[0] - b.maxX);
-  const dy = Math.max(b.minY - p[1], 0, p[1] - b.maxY);
-  const dz = Math.max(b.minZ - p[2], 0, p[2] - b.maxZ);
-  return Math.hypot(dx, dy, dz);
+  return distancePointToCorners(p, b.minX, b.minY, b.minZ, b.maxX, b.maxY, b.maxZ);
+}
+
+/** Distance from a point to profile `index`'s box (0 inside), read from the shared grid's copy of the boxes. */
+export function distancePointToProfile(ctx: AnalysisContext, p: ReadonlyVec3, index: number): number {
+  return ctx.profileGrid.distanceToPoint(index, p);
 }
 
 /** Where a point projects onto the profile's axis, mm from its start (clamped to the profile). */
@@ -46,7 +48,7 @@ export function profilesAtPoint(ctx: AnalysisContext, p: ReadonlyVec3, margin: n
     probe,
     (i) => {
       if (i === exceptIndex) return;
-      if (distancePointToBox(p, ctx.profiles[i].box) <= margin) out.push(ctx.profiles[i]);
+      if (distancePointToProfile(ctx, p, i) <= margin) out.push(ctx.profiles[i]);
     },
     margin,
   );
@@ -68,7 +70,7 @@ export function firstProfileAtPoint(
     (i) => {
       if (i === exceptIndex) return false;
       const info = ctx.profiles[i];
-      if (distancePointToBox(p, info.box) > margin || !accept(info)) return false;
+      if (distancePointToProfile(ctx, p, i) > margin || !accept(info)) return false;
       found = info;
       return true;
     },

@@ -103,15 +103,16 @@ function withPanelsOnSharedGrid(ctx: AnalysisContext): Finding[] | null {
   const panelSolid = (k: number): Solid =>
     (panelSolids[k] ??= { id: panels[k].panel.id, kind: 'panel', box: panels[k].box, frame: new Set(panels[k].panel.boundedBy ?? []) });
   // Solids are built only for boxes that interpenetrate beyond the tolerance (the narrow phase's first test).
-  ctx.profileGrid.forEachNearPair((i, j) => {
-    if (boxPenetration(profiles[i].box, profiles[j].box) <= INTERFERENCE_TOLERANCE_MM) return false;
+  const grid = ctx.profileGrid;
+  grid.forEachNearPair((i, j) => {
+    if (grid.penetration(i, j) <= INTERFERENCE_TOLERANCE_MM) return false;
     return narrowPhase(ctx, profileSolid(i), profileSolid(j), out, overflow);
   });
   if (overflow.omitted > 0 || out.length >= MAX_FINDINGS_PER_CHECK) return null;
   for (let k = 0; k < panels.length; k++) {
     const box = panels[k].box;
-    ctx.profileGrid.forEachNear(box, (i) => {
-      if (boxPenetration(profiles[i].box, box) <= INTERFERENCE_TOLERANCE_MM) return false;
+    grid.forEachNear(box, (i) => {
+      if (grid.penetrationWith(i, box) <= INTERFERENCE_TOLERANCE_MM) return false;
       return narrowPhase(ctx, profileSolid(i), panelSolid(k), out, overflow);
     });
     if (overflow.omitted > 0) return null;

@@ -9,9 +9,9 @@ import type { Joint, Machining, ProfileEnd } from '../design/schema';
 import type { Connector, ConnectorMachining } from '../catalogue/types';
 import { sectionHalfExtentAlong } from '../geometry/profileGeometry';
 import { dot } from '../geometry/vectors';
-import { CONTACT_TOLERANCE_MM, accessoriesAt, areJoined, jointsAt, memberEnd, memberPoint, type AnalysisContext, type ProfileInfo } from '../analysis/context';
+import { CONTACT_TOLERANCE_MM, accessoriesAt, areJoined, jointsAt, memberEnd, memberInfo, memberPoint, type AnalysisContext, type ProfileInfo } from '../analysis/context';
 import { capitalise, countOf, endPhrase, findingId, jointName, mm, profileName } from '../analysis/describe';
-import { distancePointToBox, firstProfileAtPoint, pointOffFace, projectAlong } from './geometryQueries';
+import { distancePointToProfile, firstProfileAtPoint, pointOffFace, projectAlong } from './geometryQueries';
 import { addEndCapFix, addMachiningFix } from './fixes';
 
 const CHECK = 'joints';
@@ -38,20 +38,25 @@ interface JointCheckCache {
 export function jointFindings(ctx: AnalysisContext): Finding[] {
   const findings: Finding[] = [];
   const cache: JointCheckCache = { unknownScrews: new Map(), hasTNut: new Map() };
-  for (const joint of ctx.design.joints) checkJoint(ctx, joint, findings, cache);
+  const joints = ctx.design.joints;
+  const infos: ProfileInfo[] = [];
+  for (let j = 0; j < joints.length; j++) checkJoint(ctx, j, infos, findings, cache);
   checkProfileEnds(ctx, findings);
   checkSlotClaims(ctx, findings);
   checkAccessHolesUncovered(ctx, findings);
   return findings;
 }
 
-function checkJoint(ctx: AnalysisContext, joint: Joint, out: Finding[], cache: JointCheckCache): void {
-  const infos: ProfileInfo[] = [];
+/** `infos`: a scratch list, refilled with the joint's member profiles (the checks below read it and keep none of it). */
+function checkJoint(ctx: AnalysisContext, jointIndex: number, infos: ProfileInfo[], out: Finding[], cache: JointCheckCache): void {
+  const joint = ctx.design.joints[jointIndex];
+  // Emptied by pop(): setting `length` takes a slow path in the engine, once per joint.
+  while (infos.length > 0) infos.pop();
   let missing: string[] | null = null;
-  for (const m of joint.members) {
-    const info = ctx.profileById.get(m.profileId);
+  for (let k = 0; k < joint.members.length; k++) {
+    const info = memberInfo(ctx, jointIndex, k);
     if (info) infos.push(info);
-    else (missing ??= []).push(m.profileId);
+    else (missing ??= []).push(joint.members[k].profileId);
   }
   if (missing) {
     out.push({
@@ -95,7 +100,7 @@ function checkJoint(ctx: AnalysisContext, joint: Joint, out: Finding[], cache: J
       });
     }
   }
-  checkMembersMeet(joint, connector, infos, out);
+  checkMembersMeet(ctx, joint, connector, infos, out);
   checkMachining(joint, connector, infos, out);
   checkCounts(ctx, joint, connector, infos, out, cache);
 }
@@ -104,16 +109,16 @@ function memberIdsOf(joint: Joint): string[] {
   return joint.members.map((m) => m.profileId);
 }
 
-function checkMembersMeet(joint: Joint, connector: Connector, infos: ProfileInfo[], out: Finding[]): void {
+function checkMembersMeet(ctx: AnalysisContext, joint: Joint, connector: Connector, infos: ProfileInfo[], out: Finding[]): void {
   if (joint.kind === 'hinge' || infos.length < 2) return;
   const p0 = memberPoint(infos[0], joint.members[0]);
   let gap: number;
   if (joint.kind === 'corner-cube') {
     // The cube sits between the ends: each end lies within one section size of the others.
     const reach = Math.max(...infos.map((i) => Math.max(i.width, i.height)));
-    gap = Math.max(...infos.slice(1).map((info, k) => distancePointToBox(memberPoint(info, joint.members[k + 1]), infos[0].box))) - reach;
+    gap = Math.max(...infos.slice(1).map((info, k) => distancePointToProfile(ctx, memberPoint(info, joint.members[k + 1]), infos[0].index))) - reach;
   } else {
-    gap = distancePointToBox(p0, infos[1].box);
+    gap = distancePointToProfile(ctx, p0, infos[1].index);
   }
   if (gap > MEMBERS_MEET_TOLERANCE_MM) {
     out.push({
@@ -140,10 +145,10 @@ function checkMachining(joint: Joint, connector: Connector, infos: ProfileInfo[]
       const offset = fromEnd === 'start' ? along : infos[1].profile.length - along;
       requireMachining(joint, connector, need, infos[1], fromEnd, offset, out);
     } else {
-      joint.members.forEach((m, i) => {
-        const end = memberEnd(m, infos[i]);
+      for (let i = 0; i < joint.members.length; i++) {
+        const end = memberEnd(joint.members[i], infos[i]);
         if (end) requireMachining(joint, connector, need, infos[i], end, need.offsetFromEnd, out);
-      });
+      }
     }
   }
 }
@@ -162,12 +167,10 @@ function requireMachining(
   out: Finding[],
 ): void {
   const wantAlong = fromEnd === 'start' ? offset : info.profile.length - offset;
-  const present = info.profile.machining.some(
-    (m) =>
-      m.kind === need.kind &&
-      (m.jointId === joint.id || Math.abs(machiningAlong(info, m) - wantAlong) <= MACHINING_POSITION_TOLERANCE_MM),
-  );
-  if (present) return;
+  // A loop rather than `some` with a closure: this runs for every joint.
+  for (const m of info.profile.machining) {
+    if (m.kind === need.kind && (m.jointId === joint.id || Math.abs(machiningAlong(info, m) - wantAlong) <= MACHINING_POSITION_TOLERANCE_MM)) return;
+  }
   const what = MACHINING_WORDS[need.kind];
   const where = need.kind === 'end-tap' ? `in ${endPhrase(info, fromEnd)}` : `${mm(offset)} from ${endPhrase(info, fromEnd)}`;
   const fix = addMachiningFix(joint, `Add the ${what}`);
@@ -241,7 +244,7 @@ function checkProfileEnds(ctx: AnalysisContext, out: Finding[]): void {
     for (const end of ['start', 'end'] as const) {
       if (jointsAt(info, end).length > 0) continue;
       const accessories = accessoriesAt(info, end);
-      if (accessories.some((a) => END_CLOSERS.has(a.kind))) {
+      if (hasEndCloser(accessories)) {
         // A cap, foot or caster says the designer meant the end to be free.
         checkThreadedEnd(info, end, accessories, out);
         continue;
@@ -272,11 +275,17 @@ function checkProfileEnds(ctx: AnalysisContext, out: Finding[]): void {
   }
 }
 
+/** Whether an end has a cap, foot or caster (a loop, not `some` with a closure, for every profile end). */
+function hasEndCloser(accessories: readonly { kind: string }[]): boolean {
+  for (const a of accessories) if (END_CLOSERS.has(a.kind)) return true;
+  return false;
+}
+
 /** Feet and casters thread into the centre bore: the end must be tapped. `accessories`: those at the end. */
 function checkThreadedEnd(info: ProfileInfo, end: ProfileEnd, accessories: readonly { id: string; kind: string }[], out: Finding[]): void {
   const threaded = accessories.find((a) => a.kind === 'leveling-foot' || a.kind === 'caster');
   if (!threaded) return;
-  if (info.profile.machining.some((m) => m.kind === 'end-tap' && m.fromEnd === end)) return;
+  for (const m of info.profile.machining) if (m.kind === 'end-tap' && m.fromEnd === end) return;
   const word = threaded.kind === 'caster' ? 'caster' : 'leveling foot';
   out.push({
     id: findingId(CHECK, 'untapped-foot', [info.profile.id, end]),
@@ -287,23 +296,43 @@ function checkThreadedEnd(info: ProfileInfo, end: ProfileEnd, accessories: reado
   });
 }
 
-interface SlotClaim {
-  joint: Joint;
-  connector: Connector;
-  lo: number;
-  hi: number;
-  /** The connector's own body (concealed connectors) rather than a bracket's possible legs. */
-  exact: boolean;
+/**
+ * Slot claims of one analysis, in parallel typed arrays (claim k = the k-th slot connector met):
+ * no object, list or map entry per joint. Claims on one slot face (met profile index × 4 + face)
+ * are chained from the face's first claim in the order they were made.
+ */
+interface SlotClaims {
+  joint: Int32Array;
+  lo: Float64Array;
+  hi: Float64Array;
+  /** 1 for the connector's own body (concealed connectors) rather than a bracket's possible legs. */
+  exact: Uint8Array;
+  /** Next claim on the same slot face, or −1. */
+  next: Int32Array;
+  count: number;
 }
 
 function checkSlotClaims(ctx: AnalysisContext, out: Finding[]): void {
-  // Keyed by met profile index × 4 + face: a number, not a string per joint.
-  const claims = new Map<number, SlotClaim[]>();
-  for (const joint of ctx.design.joints) {
+  const joints = ctx.design.joints;
+  const claims: SlotClaims = {
+    joint: new Int32Array(joints.length),
+    lo: new Float64Array(joints.length),
+    hi: new Float64Array(joints.length),
+    exact: new Uint8Array(joints.length),
+    next: new Int32Array(joints.length),
+    count: 0,
+  };
+  // Per slot face: its first and last claim (−1: none), and the faces in the order first claimed.
+  const faceCount = ctx.profiles.length * 4;
+  const firstClaim = new Int32Array(faceCount).fill(-1);
+  const lastClaim = new Int32Array(faceCount);
+  const facesInOrder: number[] = [];
+  for (let j = 0; j < joints.length; j++) {
+    const joint = joints[j];
     if (!SLOT_CONNECTOR_KINDS.has(joint.kind) || joint.members.length !== 2) continue;
     const connector = ctx.catalogue.connectors.get(joint.connectorId);
-    const joined = ctx.profileById.get(joint.members[0].profileId);
-    const met = ctx.profileById.get(joint.members[1].profileId);
+    const joined = memberInfo(ctx, j, 0);
+    const met = memberInfo(ctx, j, 1);
     if (!connector || !joined || !met) continue;
     const end = memberEnd(joint.members[0], joined);
     if (!end) continue;
@@ -322,44 +351,57 @@ function checkSlotClaims(ctx: AnalysisContext, out: Finding[]): void {
     const footprint = sectionHalfExtentAlong(joined.axes, joined.width, joined.height, met.profile.direction);
     const half = exact ? connector.occupiedSlotLength / 2 : footprint + connector.occupiedSlotLength;
     const key = met.index * 4 + face;
-    const claim = { joint, connector, lo: Math.max(0, centre - half), hi: Math.min(met.profile.length, centre + half), exact };
-    const list = claims.get(key);
-    if (list) list.push(claim);
-    else claims.set(key, [claim]);
+    const k = claims.count++;
+    claims.joint[k] = j;
+    claims.lo[k] = Math.max(0, centre - half);
+    claims.hi[k] = Math.min(met.profile.length, centre + half);
+    claims.exact[k] = exact ? 1 : 0;
+    claims.next[k] = -1;
+    if (firstClaim[key] < 0) {
+      firstClaim[key] = k;
+      facesInOrder.push(key);
+    } else claims.next[lastClaim[key]] = k;
+    lastClaim[key] = k;
   }
-  for (const [key, list] of claims) {
-    if (list.length < 2) continue;
-    sortByLo(list);
+  const list: number[] = [];
+  for (const key of facesInOrder) {
+    if (claims.next[firstClaim[key]] < 0) continue;
+    while (list.length > 0) list.pop();
+    for (let k = firstClaim[key]; k >= 0; k = claims.next[k]) list.push(k);
+    sortByLo(list, claims.lo);
     const metId = ctx.profiles[key >> 2].profile.id;
     const faceText = String(key & 3);
     let reach = list[0];
     for (let i = 1; i < list.length; i++) {
       const c = list[i];
-      if (c.lo < reach.hi - 0.5) {
-        const both = [reach.joint.id, c.joint.id].sort();
-        const bothJoints = reach.joint.id < c.joint.id ? [reach.joint, c.joint] : [c.joint, reach.joint];
+      const reachJoint = joints[claims.joint[reach]];
+      const cJoint = joints[claims.joint[c]];
+      if (claims.lo[c] < claims.hi[reach] - 0.5) {
+        const both = [reachJoint.id, cJoint.id].sort();
+        const bothJoints = reachJoint.id < cJoint.id ? [reachJoint, cJoint] : [cJoint, reachJoint];
         out.push({
           id: findingId(CHECK, 'slot-claimed-twice', [metId, faceText, ...both]),
           check: CHECK,
-          severity: reach.exact && c.exact ? 'error' : 'warning',
+          severity: claims.exact[reach] === 1 && claims.exact[c] === 1 ? 'error' : 'warning',
           partIds: [metId, ...both],
-          message: `${capitalise(jointName(ctx, bothJoints[0]))} and ${jointName(ctx, bothJoints[1])} both need the slot on face ${faceText} of ${profileName(ctx.profileById.get(metId))} between ${mm(Math.max(c.lo, reach.lo))} and ${mm(Math.min(c.hi, reach.hi))} from its start. Move one joint or put its connector on another face.`,
+          message: `${capitalise(jointName(ctx, bothJoints[0]))} and ${jointName(ctx, bothJoints[1])} both need the slot on face ${faceText} of ${profileName(ctx.profileById.get(metId))} between ${mm(Math.max(claims.lo[c], claims.lo[reach]))} and ${mm(Math.min(claims.hi[c], claims.hi[reach]))} from its start. Move one joint or put its connector on another face.`,
         });
       }
-      if (c.hi > reach.hi) reach = c;
+      if (claims.hi[c] > claims.hi[reach]) reach = c;
     }
   }
 }
 
 /**
- * Sorts claims by `lo`, keeping the order of equal ones (as the stable `Array.prototype.sort`
- * would). Lists are a handful of claims per slot face; insertion sort makes no work copy per list.
+ * Sorts claim indices by their `lo`, keeping the order of equal ones (as the stable
+ * `Array.prototype.sort` would). Lists are a handful of claims per slot face; insertion sort makes
+ * no work copy per list.
  */
-function sortByLo(list: SlotClaim[]): void {
+function sortByLo(list: number[], lo: Float64Array): void {
   for (let i = 1; i < list.length; i++) {
     const claim = list[i];
     let j = i - 1;
-    while (j >= 0 && list[j].lo - claim.lo > 0) {
+    while (j >= 0 && lo[list[j]] - lo[claim] > 0) {
       list[j + 1] = list[j];
       j--;
     }

@@ -5,7 +5,7 @@
  */
 import type { Finding } from '../analysis/types';
 import { panelAxes } from '../geometry/panelGeometry';
-import { sectionHalfExtentAlong } from '../geometry/profileGeometry';
+import { sectionHalfExtentAlongAxis } from '../geometry/profileGeometry';
 import { dominantAxis } from '../geometry/vectors';
 import type { AnalysisContext, PanelInfo } from '../analysis/context';
 import { panelCornerNotches } from '../analysis/panelNotches';
@@ -191,9 +191,7 @@ export function frameOpening(info: PanelInfo): { width: number; height: number; 
     // A profile running along the width axis bounds the height, and the other way round.
     const across = along === w ? h : w;
     const slot = along === w ? 1 : 0;
-    const unit: [number, number, number] = [0, 0, 0];
-    unit[across] = 1;
-    const half = sectionHalfExtentAlong(b.axes, b.width, b.height, unit);
+    const half = sectionHalfExtentAlongAxis(b.axes, b.width, b.height, across);
     const axisCoord = b.startPoint[across];
     if (axisCoord >= c[across]) high[slot] = Math.min(high[slot], axisCoord - half);
     else low[slot] = Math.max(low[slot], axisCoord + half);

@@ -28,6 +28,10 @@ export function structureFindings(ctx: AnalysisContext, results: StructureResult
   return out;
 }
 
+function nameOf(ctx: AnalysisContext, profileId: string): string {
+  return profileName(ctx.profileById.get(profileId), profileId);
+}
+
 function loadCaseFindings(ctx: AnalysisContext, r: StructureResult, out: Finding[]): void {
   const lc = `In load case "${r.loadCaseName}"`;
   const sf = r.settings.safetyFactor;
@@ -41,15 +45,15 @@ function loadCaseFindings(ctx: AnalysisContext, r: StructureResult, out: Finding
       out.push({ id: findingId(CHECK, 'unsupported', [r.loadCaseId, id]), check: CHECK, severity: 'warning', partIds: p.partIds, message: `${lc}, ${profileName(ctx.profileById.get(id), id)} carries ${formatNumber(p.force ?? 0, 0)} N but no joint supports it, so Slotwise cannot estimate its bending.` });
     }
   }
+  // Names are written only for parts that get a finding (most members and legs get none).
   for (const m of r.members) {
-    const name = profileName(ctx.profileById.get(m.profileId), m.profileId);
     if (!m.stressOk) {
       out.push({
         id: findingId(CHECK, 'stress', [r.loadCaseId, m.profileId]),
         check: CHECK,
         severity: 'error',
         partIds: [m.profileId],
-        message: `${lc}, ${name} reaches an estimated ${formatNumber(m.maxStress)} MPa bending stress, above the ${formatNumber(m.allowableStress)} MPa allowed (minimum yield ${formatNumber(r.settings.minYield)} MPa ÷ safety factor ${formatNumber(sf, 2)}). Use a deeper profile, add a support or reduce the load.`,
+        message: `${lc}, ${nameOf(ctx, m.profileId)} reaches an estimated ${formatNumber(m.maxStress)} MPa bending stress, above the ${formatNumber(m.allowableStress)} MPa allowed (minimum yield ${formatNumber(r.settings.minYield)} MPa ÷ safety factor ${formatNumber(sf, 2)}). Use a deeper profile, add a support or reduce the load.`,
         data: { maxStressMpa: m.maxStress, allowableStressMpa: m.allowableStress },
       });
     }
@@ -59,7 +63,7 @@ function loadCaseFindings(ctx: AnalysisContext, r: StructureResult, out: Finding
         check: CHECK,
         severity: 'warning',
         partIds: [m.profileId],
-        message: `${lc}, ${name} sags an estimated ${mm(m.maxDeflection)} over its ${mm(m.span)} span, more than span/${formatNumber(r.settings.deflectionLimitRatio, 0)} = ${mm(m.deflectionLimit)}. Add a support, turn a 40 × 80 profile on edge, or use a stiffer profile.`,
+        message: `${lc}, ${nameOf(ctx, m.profileId)} sags an estimated ${mm(m.maxDeflection)} over its ${mm(m.span)} span, more than span/${formatNumber(r.settings.deflectionLimitRatio, 0)} = ${mm(m.deflectionLimit)}. Add a support, turn a 40 × 80 profile on edge, or use a stiffer profile.`,
         data: { maxDeflectionMm: m.maxDeflection, limitMm: m.deflectionLimit, spanMm: m.span },
       });
     }
@@ -78,7 +82,6 @@ function loadCaseFindings(ctx: AnalysisContext, r: StructureResult, out: Finding
     });
   }
   for (const leg of r.legs) {
-    const name = profileName(ctx.profileById.get(leg.profileId), leg.profileId);
     if (leg.combinedUtilisation > 1) {
       const bending = leg.bendingMoment > 0 ? ` together with about ${formatNumber(leg.bendingMoment / 1000, 1)} N·m bending from the side load` : '';
       out.push({
@@ -86,7 +89,7 @@ function loadCaseFindings(ctx: AnalysisContext, r: StructureResult, out: Finding
         check: CHECK,
         severity: 'error',
         partIds: [leg.profileId],
-        message: `${lc}, leg ${name} carries about ${formatNumber(leg.load, 0)} N${bending}; it holds an estimated ${formatNumber(leg.bucklingLoad, 0)} N before buckling (EN 1999-1-1 χ = ${formatNumber(leg.chi, 2)}, ${END_CONDITION_LABELS[leg.endCondition as EndCondition]?.toLowerCase() ?? leg.endCondition}, K = ${formatNumber(leg.effectiveLengthFactor, 2)}), ÷ safety factor ${formatNumber(sf, 2)}. Brace the frame or use a larger profile.`,
+        message: `${lc}, leg ${nameOf(ctx, leg.profileId)} carries about ${formatNumber(leg.load, 0)} N${bending}; it holds an estimated ${formatNumber(leg.bucklingLoad, 0)} N before buckling (EN 1999-1-1 χ = ${formatNumber(leg.chi, 2)}, ${END_CONDITION_LABELS[leg.endCondition as EndCondition]?.toLowerCase() ?? leg.endCondition}, K = ${formatNumber(leg.effectiveLengthFactor, 2)}), ÷ safety factor ${formatNumber(sf, 2)}. Brace the frame or use a larger profile.`,
         data: { loadN: leg.load, bucklingLoadN: leg.bucklingLoad, combinedUtilisation: leg.combinedUtilisation },
       });
     }
@@ -96,7 +99,7 @@ function loadCaseFindings(ctx: AnalysisContext, r: StructureResult, out: Finding
         check: CHECK,
         severity: 'warning',
         partIds: [leg.support.accessoryId, leg.profileId],
-        message: `${lc}, the foot or caster under leg ${name} carries about ${formatNumber(leg.load, 0)} N, above its ${formatNumber(leg.support.rating, 0)} N demo rating. Use a stronger foot or caster and check the supplier’s rating.`,
+        message: `${lc}, the foot or caster under leg ${nameOf(ctx, leg.profileId)} carries about ${formatNumber(leg.load, 0)} N, above its ${formatNumber(leg.support.rating, 0)} N demo rating. Use a stronger foot or caster and check the supplier’s rating.`,
         data: { loadN: leg.load, ratingN: leg.support.rating },
       });
     }

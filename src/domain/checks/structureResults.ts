@@ -30,7 +30,7 @@ import { oneWayStripDeflection, simplySupportedPlateDeflection } from '../struct
 import { PUSH_TEST_MIN_HEIGHT_MM, STABILITY_PUSH_FORCE_N } from '../structure/stability';
 import { tipOverForce } from '../structure/tipOver';
 import { memberAlong, type AnalysisContext, type PanelInfo, type ProfileInfo } from '../analysis/context';
-import { footprintLeverArm } from './footprint';
+import { footprintLeverArm, frameLevels } from './footprint';
 import { findLegs, frameBracing, panelSupports } from './frameShape';
 
 /** Standard gravity, m/s² (exact by definition, CGPM 1901). */
@@ -342,11 +342,20 @@ function legChecks(ctx: AnalysisContext, legs: ProfileInfo[], loads: { force: nu
   const K = EFFECTIVE_LENGTH_FACTORS[endCondition].recommended;
   const sf = ctx.design.settings.safetyFactor;
   const results: LegResult[] = [];
-  legs.forEach((leg, i) => {
+  // Legs repeat a few sections and lengths: one column capacity per section and length.
+  const capacities = new Map<object, Map<number, ReturnType<typeof columnCapacity>>>();
+  for (let i = 0; i < legs.length; i++) {
+    const leg = legs[i];
     const props = leg.variant?.sectionProperties;
-    if (!props) return;
-    const I = Math.min(props.ix, props.iy);
-    const cap = columnCapacity({ area: props.area, secondMoment: I, proofStrength: f0, elasticModulus: E, effectiveLength: K * leg.profile.length });
+    if (!props) continue;
+    let byLength = capacities.get(props);
+    if (!byLength) capacities.set(props, (byLength = new Map()));
+    let cap = byLength.get(leg.profile.length);
+    if (!cap) {
+      const I = Math.min(props.ix, props.iy);
+      cap = columnCapacity({ area: props.area, secondMoment: I, proofStrength: f0, elasticModulus: E, effectiveLength: K * leg.profile.length });
+      byLength.set(leg.profile.length, cap);
+    }
     const load = shares[i];
     // Side loads on an unbraced frame: each leg takes an equal share as shear, bending it from its top joint.
     const mx = racking.bracedX ? 0 : (racking.sideLoadX / legs.length) * leg.profile.length;
@@ -355,15 +364,18 @@ function legChecks(ctx: AnalysisContext, legs: ProfileInfo[], loads: { force: nu
     const combined = axialBendingUtilisation({ axialLoad: load, bucklingLoad: cap.bucklingLoad, moment, sectionModulus: Math.min(props.sx, props.sy), proofStrength: f0, safetyFactor: sf });
     const utilisation = load / (cap.bucklingLoad / sf);
     const bottomEnd = leg.startPoint[1] <= leg.endPoint[1] ? leg.startAccessories : leg.endAccessories;
-    const foot = bottomEnd.find((a) => a.kind === 'leveling-foot' || a.kind === 'caster');
+    let foot: (typeof bottomEnd)[number] | undefined;
+    for (const a of bottomEnd) {
+      if (a.kind === 'leveling-foot' || a.kind === 'caster') {
+        foot = a;
+        break;
+      }
+    }
     const rating = foot ? (ctx.catalogue.accessories.get(foot.partId)?.demoLoadRating ?? null) : null;
-    const profileId = leg.profile.id;
-    const length = leg.profile.length;
-    const ok = combined <= 1 && (rating === null || load <= rating);
-    // The support sits before `ok` when there is one (the order the results have always had).
-    results.push({
-      profileId,
-      length,
+    // Written in the order the results have always had: the support, when there is one, before `ok`.
+    const result: Omit<LegResult, 'support' | 'ok'> & Partial<Pick<LegResult, 'support' | 'ok'>> = {
+      profileId: leg.profile.id,
+      length: leg.profile.length,
       endCondition,
       effectiveLengthFactor: K,
       load: round(load),
@@ -374,10 +386,11 @@ function legChecks(ctx: AnalysisContext, legs: ProfileInfo[], loads: { force: nu
       utilisation: Math.round(utilisation * 10000) / 10000,
       bendingMoment: Math.round(moment),
       combinedUtilisation: Math.round(combined * 10000) / 10000,
-      ...(foot ? { support: { accessoryId: foot.id, rating } } : {}),
-      ok,
-    });
-  });
+    };
+    if (foot) result.support = { accessoryId: foot.id, rating };
+    result.ok = combined <= 1 && (rating === null || load <= rating);
+    results.push(result as LegResult);
+  }
   return results;
 }
 
@@ -410,12 +423,7 @@ function jointChecks(ctx: AnalysisContext, reactions: Reaction[]): JointLoadResu
 /** Push at the top edge (or the load case's height) that tips the frame; null when nothing stands on the floor. */
 function tipOverCheck(ctx: AnalysisContext, loadCase: LoadCase | undefined, weight: number, centre: Vec3): TipOverResult | null {
   if (ctx.profiles.length === 0) return null;
-  let floor = Infinity;
-  let top = -Infinity;
-  for (const p of ctx.profiles) {
-    floor = Math.min(floor, p.box.minY);
-    top = Math.max(top, p.box.maxY);
-  }
+  const { floor, top } = frameLevels(ctx);
   const height = top - floor;
   const pushHeight = loadCase?.tipOverHeight ?? height;
   if (!(pushHeight > 0)) return null;

@@ -49,6 +49,18 @@ export function boxesNear(a: Box, b: Box, margin = 0): boolean {
   );
 }
 
+/** Distance (mm) from point `p` to the box with these corners; 0 inside. */
+export function distancePointToCorners(p: readonly [number, number, number], minX: number, minY: number, minZ: number, maxX: number, maxY: number, maxZ: number): number {
+  const dx = Math.max(minX - p[0], 0, p[0] - maxX);
+  const dy = Math.max(minY - p[1], 0, p[1] - maxY);
+  const dz = Math.max(minZ - p[2], 0, p[2] - maxZ);
+  // Inside, or off one face (the usual answers): the exact value Math.hypot gives, without its call.
+  if (dx === 0 && dy === 0) return dz;
+  if (dy === 0 && dz === 0) return dx;
+  if (dx === 0 && dz === 0) return dy;
+  return Math.hypot(dx, dy, dz);
+}
+
 export function pointInBox(b: Box, p: readonly [number, number, number], margin = 0): boolean {
   return (
     p[0] >= b.minX - margin &&

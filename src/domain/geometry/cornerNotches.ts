@@ -31,18 +31,50 @@ export interface CornerNotches {
  * is the longest such length (mm, to 0.1 mm).
  */
 export function cornerNotches(frameProfileIds: ReadonlySet<string>, joints: Iterable<CornerJoint>): CornerNotches {
-  const jointIds: string[] = [];
-  const seen = new Set<string>();
-  let size = 0;
+  const tally = cornerNotchTally();
   for (const joint of joints) {
     if (!NOTCHING_CONNECTOR_KINDS.has(joint.kind) || joint.memberIds.length < 2) continue;
-    if (!frameProfileIds.has(joint.memberIds[0]) || !frameProfileIds.has(joint.memberIds[1]) || seen.has(joint.id)) continue;
-    const length = joint.occupiedSlotLength;
-    if (length === undefined || length <= 0) continue;
-    seen.add(joint.id);
-    jointIds.push(joint.id);
-    // The notch clears the connector's length in the slot beyond the engagement depth.
-    size = Math.max(size, Math.round(length * 10) / 10);
+    if (!frameProfileIds.has(joint.memberIds[0]) || !frameProfileIds.has(joint.memberIds[1])) continue;
+    tallyCornerJoint(tally, joint.id, joint.occupiedSlotLength);
   }
-  return { size, corners: Math.min(jointIds.length, 4), jointIds: jointIds.sort() };
+  return cornerNotchesOf(tally);
+}
+
+/** The rule's running state while joints are walked: notch size so far (mm) and the joints counted. */
+export interface CornerNotchTally {
+  size: number;
+  jointIds: string[];
+}
+
+export function cornerNotchTally(): CornerNotchTally {
+  return { size: 0, jointIds: [] };
+}
+
+/**
+ * Counts one joint whose kind sits in the slot and whose first two members are frame profiles
+ * (the caller has checked both): once per joint id, and only when its connector occupies slot
+ * length (mm). For callers that walk the design's joints without a `CornerJoint` per joint.
+ */
+export function tallyCornerJoint(tally: CornerNotchTally, jointId: string, occupiedSlotLength: number | undefined): void {
+  // A frame has a handful of corner joints, so a list search stands in for a set.
+  if (occupiedSlotLength === undefined || occupiedSlotLength <= 0 || tally.jointIds.includes(jointId)) return;
+  tally.jointIds.push(jointId);
+  // The notch clears the connector's length in the slot beyond the engagement depth.
+  tally.size = Math.max(tally.size, Math.round(occupiedSlotLength * 10) / 10);
+}
+
+/** The notch a tally calls for; joint ids in code-unit order (as `Array.prototype.sort` puts strings). */
+export function cornerNotchesOf(tally: CornerNotchTally): CornerNotches {
+  const ids = tally.jointIds;
+  // Insertion sort: a few ids, and no work copy as the built-in sort makes.
+  for (let i = 1; i < ids.length; i++) {
+    const id = ids[i];
+    let j = i - 1;
+    while (j >= 0 && ids[j] > id) {
+      ids[j + 1] = ids[j];
+      j--;
+    }
+    ids[j + 1] = id;
+  }
+  return { size: tally.size, corners: Math.min(ids.length, 4), jointIds: ids };
 }

@@ -2,13 +2,23 @@
 import type { Box } from './box';
 
 export type AxisName = 'x' | 'y' | 'z';
-const AXIS_INDEX: Record<AxisName, 0 | 1 | 2> = { x: 0, y: 1, z: 2 };
+
+export interface PanelAxes {
+  readonly n: 0 | 1 | 2;
+  readonly w: 0 | 1 | 2;
+  readonly h: 0 | 1 | 2;
+}
+
+/** The normal axis, then the other two in x, y, z order; one shared record per normal. */
+const PANEL_AXES: Record<AxisName, PanelAxes> = {
+  x: { n: 0, w: 1, h: 2 },
+  y: { n: 1, w: 0, h: 2 },
+  z: { n: 2, w: 0, h: 1 },
+};
 
 /** Index of the normal axis, then of the width and height axes (the other two in x, y, z order). */
-export function panelAxes(normal: AxisName): { n: 0 | 1 | 2; w: 0 | 1 | 2; h: 0 | 1 | 2 } {
-  const n = AXIS_INDEX[normal];
-  const others = ([0, 1, 2] as const).filter((i) => i !== n) as (0 | 1 | 2)[];
-  return { n, w: others[0], h: others[1] };
+export function panelAxes(normal: AxisName): PanelAxes {
+  return PANEL_AXES[normal];
 }
 
 /** Box of a sheet `width` × `height` × `thickness` centred on `center` facing `normal`. */

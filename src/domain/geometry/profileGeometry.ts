@@ -98,6 +98,12 @@ export function profileBoundingBoxBetween(start: ReadonlyVec3, end: ReadonlyVec3
   };
 }
 
+/** `sectionHalfExtentAlong` a world axis (0 = x, 1 = y, 2 = z), mm, without a direction vector per call. */
+export function sectionHalfExtentAlongAxis(axes: SectionAxes, width: number, height: number, axis: 0 | 1 | 2): number {
+  // The dot product with a unit axis is that component (the other terms are zeros).
+  return (Math.abs(axes.u[axis]) * width) / 2 + (Math.abs(axes.v[axis]) * height) / 2;
+}
+
 /** The section's extent (mm) seen along a world direction: how far it reaches each side of its axis. */
 export function sectionHalfExtentAlong(axes: SectionAxes, width: number, height: number, worldDir: ReadonlyVec3): number {
   return (Math.abs(dot(axes.u, worldDir)) * width) / 2 + (Math.abs(dot(axes.v, worldDir)) * height) / 2;

@@ -3,7 +3,7 @@
  * "what touches this profile end" queries. Building is O(n); pair enumeration visits each
  * candidate pair once (it is reported only by the cell holding the corner of the pair's overlap).
  */
-import type { Box } from './box';
+import { distancePointToCorners, type Box } from './box';
 
 /** Cell keys stay below 2^30 so they are small integers (fast Map keys, no boxed doubles). */
 const MAX_CELLS = 1 << 30;
@@ -12,7 +12,8 @@ const MAX_AVERAGE_CELLS_PER_BOX = 12;
 
 export class UniformGrid {
   readonly cellSize: number;
-  private readonly boxes: readonly Box[];
+  /** The boxes' corners, six numbers per box (min x, y, z, max x, y, z): read in the hot loops without a field load per number. */
+  private readonly corners: Float64Array;
   private readonly margin: number;
   private readonly originX: number;
   private readonly originY: number;
@@ -31,9 +32,19 @@ export class UniformGrid {
    * @param cellSize mm; default from the boxes' typical size
    */
   constructor(boxes: readonly Box[], options: { margin?: number; cellSize?: number } = {}) {
-    this.boxes = boxes;
     this.margin = options.margin ?? 0;
     this.stamps = new Int32Array(boxes.length);
+    const corners = new Float64Array(boxes.length * 6);
+    for (let i = 0, o = 0; i < boxes.length; i++, o += 6) {
+      const b = boxes[i];
+      corners[o] = b.minX;
+      corners[o + 1] = b.minY;
+      corners[o + 2] = b.minZ;
+      corners[o + 3] = b.maxX;
+      corners[o + 4] = b.maxY;
+      corners[o + 5] = b.maxZ;
+    }
+    this.corners = corners;
     let minX = Infinity;
     let minY = Infinity;
     let minZ = Infinity;
@@ -69,7 +80,7 @@ export class UniformGrid {
     this.nx = Math.floor(spanX / cellSize) + 1;
     this.ny = Math.floor(spanY / cellSize) + 1;
     this.nz = Math.floor(spanZ / cellSize) + 1;
-    for (let i = 0; i < boxes.length; i++) this.insert(i);
+    for (let i = 0; i < boxes.length; i++) this.insert(i, boxes[i]);
   }
 
   /**
@@ -79,6 +90,7 @@ export class UniformGrid {
   forEachNearPair(visit: (i: number, j: number) => unknown): void {
     const s = this.cellSize;
     const m = this.margin;
+    const c = this.corners;
     for (const [key, items] of this.cells) {
       if (items.length < 2) continue;
       const cz = key % this.nz;
@@ -86,19 +98,20 @@ export class UniformGrid {
       const cx = Math.floor(key / (this.nz * this.ny));
       for (let a = 0; a < items.length; a++) {
         const i = items[a];
-        const bi = this.boxes[i];
+        const oi = i * 6;
         for (let b = a + 1; b < items.length; b++) {
           const j = items[b];
-          const bj = this.boxes[j];
-          if (bi.minX - m > bj.maxX + m || bj.minX - m > bi.maxX + m) continue;
-          if (bi.minY - m > bj.maxY + m || bj.minY - m > bi.maxY + m) continue;
-          if (bi.minZ - m > bj.maxZ + m || bj.minZ - m > bi.maxZ + m) continue;
+          const oj = j * 6;
+          // Box corners at offsets 0..2 (min x, y, z) and 3..5 (max x, y, z).
+          if (c[oi] - m > c[oj + 3] + m || c[oj] - m > c[oi + 3] + m) continue;
+          if (c[oi + 1] - m > c[oj + 4] + m || c[oj + 1] - m > c[oi + 4] + m) continue;
+          if (c[oi + 2] - m > c[oj + 5] + m || c[oj + 2] - m > c[oi + 5] + m) continue;
           // Report the pair only from the cell containing the low corner of the overlap.
-          const ox = Math.floor((Math.max(bi.minX, bj.minX) - m - this.originX) / s);
+          const ox = Math.floor((Math.max(c[oi], c[oj]) - m - this.originX) / s);
           if (ox !== cx) continue;
-          const oy = Math.floor((Math.max(bi.minY, bj.minY) - m - this.originY) / s);
+          const oy = Math.floor((Math.max(c[oi + 1], c[oj + 1]) - m - this.originY) / s);
           if (oy !== cy) continue;
-          const oz = Math.floor((Math.max(bi.minZ, bj.minZ) - m - this.originZ) / s);
+          const oz = Math.floor((Math.max(c[oi + 2], c[oj + 2]) - m - this.originZ) / s);
           if (oz !== cz) continue;
           if ((i < j ? visit(i, j) : visit(j, i)) === true) return;
         }
@@ -114,6 +127,13 @@ export class UniformGrid {
     const stamp = ++this.stamp;
     const s = this.cellSize;
     const m = this.margin + margin;
+    const c = this.corners;
+    const qMinX = query.minX;
+    const qMinY = query.minY;
+    const qMinZ = query.minZ;
+    const qMaxX = query.maxX;
+    const qMaxY = query.maxY;
+    const qMaxZ = query.maxZ;
     const x0 = this.cellIndex(query.minX - m, this.originX, s, this.nx);
     const x1 = this.cellIndex(query.maxX + m, this.originX, s, this.nx);
     const y0 = this.cellIndex(query.minY - m, this.originY, s, this.ny);
@@ -128,15 +148,46 @@ export class UniformGrid {
           for (const i of items) {
             if (this.stamps[i] === stamp) continue;
             this.stamps[i] = stamp;
-            const b = this.boxes[i];
-            if (b.minX > query.maxX + m || query.minX > b.maxX + m) continue;
-            if (b.minY > query.maxY + m || query.minY > b.maxY + m) continue;
-            if (b.minZ > query.maxZ + m || query.minZ > b.maxZ + m) continue;
+            const o = i * 6;
+            if (c[o] > qMaxX + m || qMinX > c[o + 3] + m) continue;
+            if (c[o + 1] > qMaxY + m || qMinY > c[o + 4] + m) continue;
+            if (c[o + 2] > qMaxZ + m || qMinZ > c[o + 5] + m) continue;
             if (visit(i) === true) return;
           }
         }
       }
     }
+  }
+
+  /**
+   * How deep indexed boxes `i` and `j` interpenetrate, mm: `boxPenetration` read from the grid's
+   * own copy of the corners (no box objects in the pair loop).
+   */
+  penetration(i: number, j: number): number {
+    const c = this.corners;
+    const a = i * 6;
+    const b = j * 6;
+    const ox = Math.min(c[a + 3], c[b + 3]) - Math.max(c[a], c[b]);
+    const oy = Math.min(c[a + 4], c[b + 4]) - Math.max(c[a + 1], c[b + 1]);
+    const oz = Math.min(c[a + 5], c[b + 5]) - Math.max(c[a + 2], c[b + 2]);
+    return Math.min(ox, oy, oz);
+  }
+
+  /** Distance (mm) from point `p` to indexed box `i` (0 inside), as `distancePointToBox`. */
+  distanceToPoint(i: number, p: readonly [number, number, number]): number {
+    const c = this.corners;
+    const o = i * 6;
+    return distancePointToCorners(p, c[o], c[o + 1], c[o + 2], c[o + 3], c[o + 4], c[o + 5]);
+  }
+
+  /** `boxPenetration` of indexed box `i` and `box`, mm. */
+  penetrationWith(i: number, box: Box): number {
+    const c = this.corners;
+    const a = i * 6;
+    const ox = Math.min(c[a + 3], box.maxX) - Math.max(c[a], box.minX);
+    const oy = Math.min(c[a + 4], box.maxY) - Math.max(c[a + 1], box.minY);
+    const oz = Math.min(c[a + 5], box.maxZ) - Math.max(c[a + 2], box.minZ);
+    return Math.min(ox, oy, oz);
   }
 
   /** Cell index along one axis, clamped to the grid (queries may reach outside it). */
@@ -153,8 +204,7 @@ export class UniformGrid {
     return nx * ny * nz;
   }
 
-  private insert(i: number): void {
-    const b = this.boxes[i];
+  private insert(i: number, b: Box): void {
     const s = this.cellSize;
     const m = this.margin;
     const x0 = this.cellIndex(b.minX - m, this.originX, s, this.nx);

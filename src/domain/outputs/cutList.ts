@@ -25,6 +25,7 @@ export function cutList(ctx: AnalysisContext): { items: CutListItem[]; groups: C
   // Caches are nested maps keyed by the parts themselves, so no key string is built per profile.
   const treatments: Nested<EndTreatment> = new Map();
   const keyHeads: Nested<string> = new Map();
+  const keyParts: Nested<string> = new Map();
   const threads = new Map<ProfileInfo['system'], string | undefined>();
   for (const info of ctx.profiles) {
     let thread = threads.get(info.system);
@@ -34,7 +35,7 @@ export function cutList(ctx: AnalysisContext): { items: CutListItem[]; groups: C
     const { variantId, length } = info.profile;
     const head = cachedHead(keyHeads, variantId, length, ends.start.kind, ends.end.kind);
     let groupKey = head;
-    for (const m of machining) groupKey += `|${m.kind}/${m.fromEnd}/${m.offset.toFixed(1)}/${m.face}/${m.diameter ?? ''}`;
+    for (const m of machining) groupKey = cachedKeyPart(keyParts, groupKey, m);
     items.push({
       id: info.profile.id,
       label: info.profile.label ?? info.profile.id,
@@ -104,14 +105,30 @@ function cachedHead(root: Nested<string>, variantId: string, length: number, sta
   return head;
 }
 
+/**
+ * `key` followed by one machining operation's part of the group key, made once per key and
+ * operation: the same key string comes back for every piece of a kind, so the group map finds it
+ * without hashing a new string per profile.
+ */
+function cachedKeyPart(root: Nested<string>, key: string, m: CutMachiningOperation): string {
+  const node = child(child(child(child(child(root, key), m.kind), m.fromEnd), m.offset), m.face);
+  const diameter = m.diameter ?? '';
+  let joined = node.get(diameter) as string | undefined;
+  if (joined === undefined) node.set(diameter, (joined = `${key}|${m.kind}/${m.fromEnd}/${m.offset.toFixed(1)}/${m.face}/${diameter}`));
+  return joined;
+}
+
+/** The map under `key`, made on first use. */
+function child<T>(node: Nested<T>, key: string | number): Nested<T> {
+  let next = node.get(key) as Nested<T> | undefined;
+  if (!next) node.set(key, (next = new Map()));
+  return next;
+}
+
 function endTreatment(info: ProfileInfo, end: ProfileEnd, thread: string | undefined, cache: Nested<EndTreatment>): EndTreatment {
   const accessories = accessoriesAt(info, end);
   const word = endWord(info, end);
-  let kind: EndTreatment['kind'] = 'plain';
-  const foot = accessories.find((a) => a.kind === 'leveling-foot' || a.kind === 'caster');
-  if (foot) kind = foot.kind === 'caster' ? 'caster' : 'foot';
-  else if (info.profile.machining.some((m) => m.kind === 'end-tap' && m.fromEnd === end)) kind = 'tap';
-  else if (accessories.some((a) => a.kind === 'end-cap')) kind = 'cap';
+  const kind = endKind(info, end, accessories);
   // Looked up level by level, without a key path array or a closure per profile end.
   const threadKey = thread ?? '';
   let byWord = cache.get(kind) as Nested<EndTreatment> | undefined;
@@ -122,6 +139,20 @@ function endTreatment(info: ProfileInfo, end: ProfileEnd, thread: string | undef
   const made = describeEnd(kind, word, thread);
   byThread.set(threadKey, made);
   return made;
+}
+
+/**
+ * What happens at a profile end: a foot or caster (the first fitted), else a tap, else a cap, else
+ * a plain cut. Loops rather than `find`/`some` with closures: this runs for every profile end.
+ */
+function endKind(info: ProfileInfo, end: ProfileEnd, accessories: readonly { kind: string }[]): EndTreatment['kind'] {
+  for (const a of accessories) {
+    if (a.kind === 'caster') return 'caster';
+    if (a.kind === 'leveling-foot') return 'foot';
+  }
+  for (const m of info.profile.machining) if (m.kind === 'end-tap' && m.fromEnd === end) return 'tap';
+  for (const a of accessories) if (a.kind === 'end-cap') return 'cap';
+  return 'plain';
 }
 
 function describeEnd(kind: EndTreatment['kind'], word: string, thread: string | undefined): EndTreatment {

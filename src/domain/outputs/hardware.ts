@@ -6,7 +6,7 @@
  */
 import type { BomCategory } from '../analysis/types';
 import { jointRecipe, type JointRecipeItem } from '../design/jointHardware';
-import { memberPoint, type AnalysisContext } from '../analysis/context';
+import { accessoryInfo, memberInfo, memberPoint, type AnalysisContext } from '../analysis/context';
 import { pointAlongProfile } from '../geometry/profileGeometry';
 import type { Vec3 } from '../geometry/vectors';
 
@@ -50,7 +50,9 @@ interface PartLike {
 
 export function hardwareSummary(ctx: AnalysisContext): HardwareSummary {
   const lines = new Map<string, HardwareLine>();
-  const massByCategory = new Map<BomCategory, MassMoment>();
+  // Mass sums per category in typed arrays (kg, Σ kg·x, Σ kg·y, Σ kg·z, unplaced kg): adding to a
+  // number field of an object can box every sum, tens of thousands of times at 8,000 profiles.
+  const sums = new Map<BomCategory, Float64Array>();
   const cat = ctx.catalogue;
 
   const lineByPart = new Map<PartLike, HardwareLine>();
@@ -69,25 +71,27 @@ export function hardwareSummary(ctx: AnalysisContext): HardwareSummary {
     if (line.sourceIds[line.sourceIds.length - 1] !== sourceId) line.sourceIds.push(sourceId);
     const kg = quantity * part.unitMass;
     if (!(kg > 0)) return;
-    let m = massByCategory.get(category);
+    let m = sums.get(category);
     if (!m) {
-      m = { kg: 0, mx: 0, my: 0, mz: 0, unplacedKg: 0 };
-      massByCategory.set(category, m);
+      m = new Float64Array(5);
+      sums.set(category, m);
     }
     if (at) {
-      m.kg += kg;
-      m.mx += kg * at[0];
-      m.my += kg * at[1];
-      m.mz += kg * at[2];
-    } else m.unplacedKg += kg;
+      m[0] += kg;
+      m[1] += kg * at[0];
+      m[2] += kg * at[1];
+      m[3] += kg * at[2];
+    } else m[4] += kg;
   };
 
   // Joints with the same connector, screw head, T-nut and host system use the same parts: resolve once.
   // Keyed connector → screw head → T-nut → host system in nested maps: no key string per joint.
   const recipes = new Map<unknown, Map<unknown, Map<unknown, Map<string, JointRecipeItem[]>>>>();
-  for (const joint of ctx.design.joints) {
-    const first = ctx.profileById.get(joint.members[0]?.profileId);
-    const host = ctx.profileById.get(joint.members[1]?.profileId) ?? first;
+  const joints = ctx.design.joints;
+  for (let j = 0; j < joints.length; j++) {
+    const joint = joints[j];
+    const first = memberInfo(ctx, j, 0);
+    const host = memberInfo(ctx, j, 1) ?? first;
     const hostSystem = host?.variant?.systemId ?? ctx.design.systemId;
     let byHead = recipes.get(joint.connectorId);
     if (!byHead) recipes.set(joint.connectorId, (byHead = new Map()));
@@ -105,13 +109,15 @@ export function hardwareSummary(ctx: AnalysisContext): HardwareSummary {
     for (const r of recipe) add(r.category, r.part, 'pcs', r.perConnector * joint.quantity, joint.id, at);
   }
 
-  for (const acc of ctx.design.accessories) {
+  const accessories = ctx.design.accessories;
+  for (let a = 0; a < accessories.length; a++) {
+    const acc = accessories[a];
     const part = cat.accessories.get(acc.partId);
     if (!part) continue;
-    const at = accessoryPosition(ctx, acc);
+    const at = accessoryPosition(ctx, acc, a);
     const category: BomCategory = acc.kind === 'gasket' ? 'gasket' : acc.kind === 'slot-cover' ? 'slot-cover' : 'accessory';
     if (part.soldBy === 'metre') {
-      add(category, part, 'm', ((acc.length ?? lengthFallback(ctx, acc)) / 1000) * acc.quantity, acc.id, at);
+      add(category, part, 'm', ((acc.length ?? lengthFallback(ctx, acc, a)) / 1000) * acc.quantity, acc.id, at);
     } else {
       add(category, part, 'pcs', acc.quantity, acc.id, at);
     }
@@ -124,12 +130,14 @@ export function hardwareSummary(ctx: AnalysisContext): HardwareSummary {
       if (nut) add('t-nut', nut, 'pcs', (part.tNutCount ?? 0) * acc.quantity, acc.id, at);
     }
   }
+  const massByCategory = new Map<BomCategory, MassMoment>();
+  for (const [category, m] of sums) massByCategory.set(category, { kg: m[0], mx: m[1], my: m[2], mz: m[3], unplacedKg: m[4] });
   return { lines: [...lines.values()], massByCategory };
 }
 
 /** Sold-by-length parts without a length: the profile's length, or the panel's perimeter. */
-function lengthFallback(ctx: AnalysisContext, acc: { profileId?: string; panelId?: string }): number {
-  if (acc.profileId) return ctx.profileById.get(acc.profileId)?.profile.length ?? 0;
+function lengthFallback(ctx: AnalysisContext, acc: { profileId?: string; panelId?: string }, accessoryIndex: number): number {
+  if (acc.profileId) return accessoryInfo(ctx, accessoryIndex)?.profile.length ?? 0;
   if (acc.panelId) {
     const p = ctx.panelById.get(acc.panelId);
     if (p) return 2 * (p.sheetWidth + p.sheetHeight);
@@ -137,9 +145,10 @@ function lengthFallback(ctx: AnalysisContext, acc: { profileId?: string; panelId
   return 0;
 }
 
-function accessoryPosition(ctx: AnalysisContext, acc: { profileId?: string; panelId?: string; end?: 'start' | 'end'; along?: number }): Vec3 | null {
+/** Where accessory `acc` (`design.accessories[accessoryIndex]`) sits, mm; null when it has no place. */
+function accessoryPosition(ctx: AnalysisContext, acc: { profileId?: string; panelId?: string; end?: 'start' | 'end'; along?: number }, accessoryIndex: number): Vec3 | null {
   if (acc.profileId) {
-    const info = ctx.profileById.get(acc.profileId);
+    const info = accessoryInfo(ctx, accessoryIndex);
     if (!info) return null;
     if (acc.end) return acc.end === 'start' ? info.startPoint : info.endPoint;
     return pointAlongProfile(info.profile, acc.along ?? info.profile.length / 2);

@@ -11,30 +11,42 @@ import type { PanelSheet } from './panelSheets';
 
 export function massSummary(ctx: AnalysisContext, hardware: HardwareSummary, sheets: PanelSheet[]): MassSummary {
   const byCategory: Record<string, number> = {};
+  // Sums kept in plain locals (no closure over them), added in the same order as always.
   let total = 0;
   let mx = 0;
   let my = 0;
   let mz = 0;
-  const add = (category: string, kg: number, x: number, y: number, z: number) => {
-    if (!(kg > 0)) return;
-    byCategory[category] = (byCategory[category] ?? 0) + kg;
-    total += kg;
-    mx += kg * x;
-    my += kg * y;
-    mz += kg * z;
-  };
   const box = emptyBox();
+  let profileKg = 0;
+  let profiles = 0;
   for (const p of ctx.profiles) {
+    expandBoxInPlace(box, p.box);
     // Mass per metre is area × alloy density unless the supplier's figure overrides it.
     const kg = ((p.variant?.massPerMetre ?? 0) * p.profile.length) / 1000;
-    add('profile', kg, (p.startPoint[0] + p.endPoint[0]) / 2, (p.startPoint[1] + p.endPoint[1]) / 2, (p.startPoint[2] + p.endPoint[2]) / 2);
-    expandBoxInPlace(box, p.box);
+    if (!(kg > 0)) continue;
+    profileKg += kg;
+    profiles += 1;
+    total += kg;
+    mx += kg * ((p.startPoint[0] + p.endPoint[0]) / 2);
+    my += kg * ((p.startPoint[1] + p.endPoint[1]) / 2);
+    mz += kg * ((p.startPoint[2] + p.endPoint[2]) / 2);
   }
+  if (profiles > 0) byCategory.profile = profileKg;
+  let panelKg = 0;
+  let panels = 0;
   for (const s of sheets) {
-    const c = s.info.panel.rect.center;
-    add('panel', s.mass, c[0], c[1], c[2]);
     expandBoxInPlace(box, s.info.box);
+    const kg = s.mass;
+    if (!(kg > 0)) continue;
+    const c = s.info.panel.rect.center;
+    panelKg += kg;
+    panels += 1;
+    total += kg;
+    mx += kg * c[0];
+    my += kg * c[1];
+    mz += kg * c[2];
   }
+  if (panels > 0) byCategory.panel = panelKg;
   for (const [category, m] of hardware.massByCategory) {
     if (m.kg > 0) {
       byCategory[category] = (byCategory[category] ?? 0) + m.kg;

@@ -1,6 +1,7 @@
 /** Sheet size, area, mass and price of each panel; captured panels include slot engagement. */
 import type { PanelCutItem } from '../analysis/types';
 import { panelPricePerSquareMetre } from '../catalogue';
+import type { PanelMaterial } from '../catalogue/types';
 import type { AnalysisContext, PanelInfo } from '../analysis/context';
 import { panelCornerNotches } from '../analysis/panelNotches';
 
@@ -16,6 +17,15 @@ export interface PanelSheet {
 }
 
 export function panelSheets(ctx: AnalysisContext): PanelSheet[] {
+  // Price per material and thickness, worked out once (it sorts the material's price rows).
+  const prices = new Map<PanelMaterial, Map<number, number>>();
+  const priceOf = (material: PanelMaterial, thickness: number): number => {
+    let byThickness = prices.get(material);
+    if (!byThickness) prices.set(material, (byThickness = new Map()));
+    let price = byThickness.get(thickness);
+    if (price === undefined) byThickness.set(thickness, (price = panelPricePerSquareMetre(material, thickness)));
+    return price;
+  };
   return ctx.panels.map((info) => {
     const notch = panelCornerNotches(ctx, info);
     const cutouts = info.panel.cutouts.reduce((sum, c) => sum + (Math.PI / 4) * c.diameter * c.diameter, 0);
@@ -26,7 +36,7 @@ export function panelSheets(ctx: AnalysisContext): PanelSheet[] {
       info,
       area,
       mass: area * (info.panel.thickness / 1000) * density,
-      pricePerSquareMetre: info.material ? panelPricePerSquareMetre(info.material, info.panel.thickness) : 0,
+      pricePerSquareMetre: info.material ? priceOf(info.material, info.panel.thickness) : 0,
       notch: { size: notch.size, corners: notch.corners },
     };
   });

@@ -40,6 +40,12 @@ export interface StockPlanInput {
   endTrim: number;
   /** mm, an offcut at least this long is kept for reuse */
   minReusableOffcut: number;
+  /**
+   * `cuts` as `sortCutsForPacking` orders them, when the caller plans the same cuts more than once
+   * (one plan per bar length): each plan then takes the cuts that fit from this list instead of
+   * sorting again. Every length must be a finite number.
+   */
+  sortedCuts?: readonly StockCut[];
 }
 
 export interface StockBar {
@@ -93,22 +99,104 @@ function sortedCuts(problem: PackingProblem): StockCut[] {
 function preparePacking(input: StockPlanInput): PackingProblem {
   const usable = input.stockLength - input.endTrim;
   const kerf = Math.max(0, input.kerf);
+  const fits = (cut: StockCut) => Number.isFinite(cut.length) && cut.length > 0 && usable > 0 && cut.length <= usable + LENGTH_TOLERANCE;
   const placeable: StockCut[] = [];
   const unplaceable: StockCut[] = [];
-  for (const cut of input.cuts) {
-    const fits = Number.isFinite(cut.length) && cut.length > 0 && usable > 0 && cut.length <= usable + LENGTH_TOLERANCE;
-    (fits ? placeable : unplaceable).push(cut);
-  }
-  return { usable, capacity: usable + kerf, kerf, placeable, unplaceable };
+  for (const cut of input.cuts) (fits(cut) ? placeable : unplaceable).push(cut);
+  const problem: PackingProblem = { usable, capacity: usable + kerf, kerf, placeable, unplaceable };
+  // The stable sort of the cuts that fit is the sorted list with the others left out.
+  if (input.sortedCuts) problem.sorted = input.sortedCuts.filter(fits);
+  return problem;
+}
+
+/** Cuts longest first, ties by id: the order every packing here starts from (a new list). */
+export function sortCutsForPacking(cuts: readonly StockCut[]): StockCut[] {
+  return [...cuts].sort(byLengthDescending);
 }
 
 function byLengthDescending(a: StockCut, b: StockCut): number {
   return b.length - a.length || (a.id < b.id ? -1 : a.id > b.id ? 1 : 0);
 }
 
+/**
+ * Each placeable cut's place in the packing order (`sortedCuts`), with cuts the order ties (same
+ * length and id) sharing one number: sorting a bar by these numbers, keeping the order of equal
+ * ones, gives what the stable sort by `byLengthDescending` gives, without comparing ids again.
+ */
+function packingRanks(problem: PackingProblem): Map<StockCut, number> {
+  const sorted = sortedCuts(problem);
+  // The order ties two neighbours exactly when they have the same length and id (the lengths here are finite).
+  const rankAt = new Int32Array(sorted.length);
+  for (let i = 1; i < sorted.length; i++) {
+    const a = sorted[i - 1];
+    const b = sorted[i];
+    rankAt[i] = a.length === b.length && a.id === b.id ? rankAt[i - 1] : i;
+  }
+  // Set from the end, so a cut listed twice keeps its first place (one map write per cut).
+  const ranks = new Map<StockCut, number>();
+  for (let i = sorted.length - 1; i >= 0; i--) ranks.set(sorted[i], rankAt[i]);
+  return ranks;
+}
+
+/**
+ * Sorts a bar's cuts in place, longest first (ties by id), keeping the order of equal ones as the
+ * stable built-in sort would: by packing rank, or by the comparison for a cut without one. A bar
+ * holds a handful of cuts; insertion sort makes no work copy.
+ */
+function sortBarCuts(cuts: StockCut[], ranks: Map<StockCut, number>): StockCut[] {
+  const keys = new Array<number>(cuts.length);
+  for (let i = 0; i < cuts.length; i++) {
+    const rank = ranks.get(cuts[i]);
+    if (rank === undefined) return insertionSort(cuts, byLengthDescending);
+    keys[i] = rank;
+  }
+  for (let i = 1; i < cuts.length; i++) {
+    const cut = cuts[i];
+    const key = keys[i];
+    let j = i - 1;
+    while (j >= 0 && keys[j] > key) {
+      cuts[j + 1] = cuts[j];
+      keys[j + 1] = keys[j];
+      j--;
+    }
+    cuts[j + 1] = cut;
+    keys[j + 1] = key;
+  }
+  return cuts;
+}
+
+/** Stable in-place insertion sort (as the built-in sort orders, without its work copy). */
+function insertionSort<T>(list: T[], compare: (a: T, b: T) => number): T[] {
+  for (let i = 1; i < list.length; i++) {
+    const item = list[i];
+    let j = i - 1;
+    while (j >= 0 && compare(list[j], item) > 0) {
+      list[j + 1] = list[j];
+      j--;
+    }
+    list[j + 1] = item;
+  }
+  return list;
+}
+
+/** Removes `list[position]`, shifting the rest down (as `splice(position, 1)`, without the removed-items array it returns). */
+function removeAt(list: number[], position: number): void {
+  for (let k = position + 1; k < list.length; k++) list[k - 1] = list[k];
+  // pop() rather than `length -= 1`, which takes a slow path in the engine.
+  list.pop();
+}
+
+/** Inserts `value` at `position`, shifting the rest up (as `splice(position, 0, value)`, without the array it returns). */
+function insertAt(list: number[], position: number, value: number): void {
+  list.push(value);
+  for (let k = list.length - 1; k > position; k--) list[k] = list[k - 1];
+  list[position] = value;
+}
+
 function toStockBars(groups: StockCut[][], problem: PackingProblem, minReusableOffcut: number): StockBar[] {
+  const ranks = packingRanks(problem);
   return groups.map((cuts, index) => {
-    const sorted = [...cuts].sort(byLengthDescending);
+    const sorted = sortBarCuts(cuts.slice(), ranks);
     const consumed = sorted.reduce((sum, cut) => sum + cut.length + problem.kerf, 0);
     const usedLength = Math.min(problem.usable, consumed);
     const offcut = Math.max(0, problem.usable - consumed);
@@ -157,7 +245,7 @@ function fitDecreasing(problem: PackingProblem, rule: 'first' | 'best'): StockCu
     const chosen = open[chosenPosition];
     groups[chosen].push(cut);
     loads[chosen] += size;
-    if (loads[chosen] + smallest > limit) open.splice(chosenPosition, 1);
+    if (loads[chosen] + smallest > limit) removeAt(open, chosenPosition);
     previousSize = size;
     previousPosition = chosenPosition;
   }
@@ -188,7 +276,7 @@ function bestFitDecreasing(problem: PackingProblem): StockCut[][] {
       if (before(open[mid], bar)) lo = mid + 1;
       else hi = mid;
     }
-    open.splice(lo, 0, bar);
+    insertAt(open, lo, bar);
   };
   for (const cut of sorted) {
     const size = cut.length + problem.kerf;
@@ -203,7 +291,7 @@ function bestFitDecreasing(problem: PackingProblem): StockCut[][] {
     let chosen: number;
     if (lo < open.length) {
       chosen = open[lo];
-      open.splice(lo, 1);
+      removeAt(open, lo);
     } else {
       groups.push([]);
       loads.push(0);

@@ -15,7 +15,7 @@ import type { VariantStockPlan } from '../analysis/types';
 import type { AnalysisContext } from '../analysis/context';
 import type { ProfileSystem } from '../catalogue/types';
 import type { DesignDocument, SystemStock } from '../design/schema';
-import { planStock, type StockBar, type StockCut } from './stockPlan';
+import { planStock, sortCutsForPacking, type StockBar, type StockCut } from './stockPlan';
 
 /** Price of a half bar per metre against a full one: short bars cost more per metre (demo assumption, invented). */
 const HALF_BAR_PRICE_FACTOR = 1.15;
@@ -65,7 +65,7 @@ export interface OffcutUse {
 export function useOffcuts(cuts: StockCut[], offcuts: number[], kerf: number): { used: OffcutUse[]; rest: StockCut[] } {
   const bins = offcuts.map((length) => ({ length, space: length + kerf, cuts: [] as StockCut[] }));
   const rest: StockCut[] = [];
-  for (const cut of [...cuts].sort((a, b) => b.length - a.length)) {
+  for (const cut of longestFirst(cuts)) {
     let best: (typeof bins)[number] | null = null;
     for (const bin of bins) if (bin.space + TOLERANCE >= cut.length + kerf && (!best || bin.space < best.space)) best = bin;
     if (!best) rest.push(cut);
@@ -76,6 +76,26 @@ export function useOffcuts(cuts: StockCut[], offcuts: number[], kerf: number): {
   }
   const used = bins.filter((b) => b.cuts.length > 0).map((b) => ({ length: b.length, cuts: b.cuts, left: Math.max(0, round(b.space - kerf)) }));
   return { used, rest };
+}
+
+/**
+ * The cuts longest first, equal lengths in their given order: what the stable
+ * `[...cuts].sort((a, b) => b.length - a.length)` gives. Frames repeat a few lengths, so the cuts
+ * are bucketed by length and only the distinct lengths are sorted (falls back to the sort when a
+ * length is not a finite number, where that comparison is not an order).
+ */
+function longestFirst(cuts: readonly StockCut[]): StockCut[] {
+  const buckets = new Map<number, StockCut[]>();
+  for (const cut of cuts) {
+    if (!Number.isFinite(cut.length)) return [...cuts].sort((a, b) => b.length - a.length);
+    const bucket = buckets.get(cut.length);
+    if (bucket) bucket.push(cut);
+    else buckets.set(cut.length, [cut]);
+  }
+  const lengths = [...buckets.keys()].sort((a, b) => b - a);
+  const sorted: StockCut[] = [];
+  for (const length of lengths) for (const cut of buckets.get(length)!) sorted.push(cut);
+  return sorted;
 }
 
 function barHolds(bar: StockBar, usable: number, kerf: number): boolean {
@@ -109,10 +129,12 @@ export function planVariant(variantId: string, systemId: string, cuts: StockCut[
   const { used, rest } = useOffcuts(cuts, offcuts, settings.kerf);
   const trim = trimAllowance(settings);
   const options = [...settings.bars].sort((a, b) => b.length - a.length);
+  // One sort of the cuts for every bar length tried (the order needs finite lengths).
+  const sortedCuts = rest.every((cut) => Number.isFinite(cut.length)) ? sortCutsForPacking(rest) : undefined;
   let best: { plan: ReturnType<typeof planStock>; bars: { length: number; cost: number }[]; cost: number } | null = null;
   for (const option of options) {
     if (option.length - trim <= 0) continue;
-    const plan = planStock({ cuts: rest, stockLength: option.length, kerf: settings.kerf, endTrim: trim, minReusableOffcut: settings.minReusableOffcut });
+    const plan = planStock({ cuts: rest, stockLength: option.length, kerf: settings.kerf, endTrim: trim, minReusableOffcut: settings.minReusableOffcut, sortedCuts });
     // Each bar bought in the cheapest length that still holds its cuts.
     const bars = plan.bars.map((bar) => {
       let pick = option;
@@ -123,7 +145,7 @@ export function planVariant(variantId: string, systemId: string, cuts: StockCut[
     const cost = bars.reduce((s, b) => s + b.cost, 0) + unplaced * 1e9;
     if (!best || cost < best.cost - TOLERANCE) best = { plan, bars, cost };
   }
-  const plan = best?.plan ?? planStock({ cuts: rest, stockLength: options[0].length, kerf: settings.kerf, endTrim: trim, minReusableOffcut: settings.minReusableOffcut });
+  const plan = best?.plan ?? planStock({ cuts: rest, stockLength: options[0].length, kerf: settings.kerf, endTrim: trim, minReusableOffcut: settings.minReusableOffcut, sortedCuts });
   const bars = best?.bars ?? [];
   // Recompute offcuts for bars bought shorter than the plan's length.
   const adjusted = plan.bars.map((bar, i) => {
