@@ -52,9 +52,12 @@ function apply(document: Record<string, Json>, change: Edit): void {
   if (!Array.isArray(list) || list.length === 0) return;
   const at = change.at % list.length;
   const item = list[at];
+  // An earlier edit may have put a non-object in the list: only removal, repeats and swaps apply.
+  if ((typeof item !== 'object' || item === null) && !['remove', 'repeat', 'swap'].includes(change.kind)) return;
   const fields = Object.keys(item);
   switch (change.kind) {
     case 'set': {
+      if (fields.length === 0) break;
       const field = fields[change.field % fields.length];
       if (change.value === undefined) delete item[field];
       else item[field] = change.value;
