@@ -20,7 +20,7 @@ export function massSummary(ctx: AnalysisContext, hardware: HardwareSummary, she
   let profileKg = 0;
   let profiles = 0;
   for (const p of ctx.profiles) {
-    expandBoxInPlace(box, p.box);
+    ctx.profileGrid.expandBoxInPlace(box, p.index);
     // Mass per metre is area × alloy density unless the supplier's figure overrides it.
     const kg = ((p.variant?.massPerMetre ?? 0) * p.profile.length) / 1000;
     if (!(kg > 0)) continue;
