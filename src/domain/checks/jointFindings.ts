@@ -9,7 +9,7 @@ import type { Joint, Machining, ProfileEnd } from '../design/schema';
 import type { Connector, ConnectorMachining } from '../catalogue/types';
 import { sectionHalfExtentAlong } from '../geometry/profileGeometry';
 import { dot } from '../geometry/vectors';
-import { CONTACT_TOLERANCE_MM, accessoriesAt, areJoined, jointsAt, memberEnd, memberInfo, memberPoint, type AnalysisContext, type ProfileInfo } from '../analysis/context';
+import { CONTACT_TOLERANCE_MM, accessoriesAt, areJoined, jointCountAt, memberEnd, memberInfo, memberPoint, type AnalysisContext, type ProfileInfo } from '../analysis/context';
 import { capitalise, countOf, endPhrase, findingId, jointName, mm, profileName } from '../analysis/describe';
 import { distancePointToProfile, firstProfileAtPoint, pointOffFace, projectAlong } from './geometryQueries';
 import { addEndCapFix, addMachiningFix } from './fixes';
@@ -242,7 +242,7 @@ function hasTNut(ctx: AnalysisContext, cache: JointCheckCache, systemId: string,
 function checkProfileEnds(ctx: AnalysisContext, out: Finding[]): void {
   for (const info of ctx.profiles) {
     for (const end of ['start', 'end'] as const) {
-      if (jointsAt(info, end).length > 0) continue;
+      if (jointCountAt(info, end) > 0) continue;
       const accessories = accessoriesAt(info, end);
       if (hasEndCloser(accessories)) {
         // A cap, foot or caster says the designer meant the end to be free.
