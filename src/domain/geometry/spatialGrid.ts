@@ -25,6 +25,8 @@ export class UniformGrid {
   private readonly nx: number;
   private readonly stamps: Int32Array;
   private stamp = 0;
+  /** The smallest box holding every indexed box (the empty box without any). */
+  private readonly extent: Box;
 
   /**
    * @param boxes items to index, addressed by their array index; or their corners already laid out
@@ -52,6 +54,7 @@ export class UniformGrid {
       if (corners[o + 4] > maxY) maxY = corners[o + 4];
       if (corners[o + 5] > maxZ) maxZ = corners[o + 5];
     }
+    this.extent = { minX, minY, minZ, maxX, maxY, maxZ };
     const m = this.margin;
     this.originX = (Number.isFinite(minX) ? minX : 0) - m - 1;
     this.originY = (Number.isFinite(minY) ? minY : 0) - m - 1;
@@ -86,16 +89,13 @@ export class UniformGrid {
     return this.corners[i * 6 + 4];
   }
 
-  /** Grows `target` in place to contain indexed box `i` (as `expandBoxInPlace`, without a box object). */
-  expandBoxInPlace(target: Box, i: number): void {
-    const c = this.corners;
-    const o = i * 6;
-    if (c[o] < target.minX) target.minX = c[o];
-    if (c[o + 1] < target.minY) target.minY = c[o + 1];
-    if (c[o + 2] < target.minZ) target.minZ = c[o + 2];
-    if (c[o + 3] > target.maxX) target.maxX = c[o + 3];
-    if (c[o + 4] > target.maxY) target.maxY = c[o + 4];
-    if (c[o + 5] > target.maxZ) target.maxZ = c[o + 5];
+  /**
+   * The smallest box holding every indexed box, as a new object: what growing the empty box by each
+   * one in turn (`expandBoxInPlace`) gives, worked out once when the grid is built.
+   */
+  bounds(): Box {
+    const e = this.extent;
+    return { minX: e.minX, minY: e.minY, minZ: e.minZ, maxX: e.maxX, maxY: e.maxY, maxZ: e.maxZ };
   }
 
   /** Indexed box `i` as a new box object (the grid keeps only the corners). */
