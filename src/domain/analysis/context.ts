@@ -8,8 +8,8 @@ import type { Connector, PanelMaterial, ProfileSystem, ProfileVariant } from '..
 import type { Alloy } from '../catalogue/materials';
 import type { Box } from '../geometry/box';
 import { panelBox, panelAxes } from '../geometry/panelGeometry';
-import { pointAlongProfile, profileBoundingBoxBetween, sectionAxes, type SectionAxes } from '../geometry/profileGeometry';
-import { UniformGrid } from '../geometry/spatialGrid';
+import { pointAlongProfile, profileBoundsInto, sectionAxes, type SectionAxes } from '../geometry/profileGeometry';
+import { UniformGrid, boxAt } from '../geometry/spatialGrid';
 import type { Vec3 } from '../geometry/vectors';
 import type { CatalogueIndex } from './catalogueIndex';
 import { slotLimitsOf } from '../design/slotLimits';
@@ -29,14 +29,23 @@ export interface ProfileInfo {
   width: number;
   height: number;
   axes: SectionAxes;
-  box: Box;
+  /**
+   * The profile's bounding box, a new object on every read (made from the shared grid's corner
+   * table; loops over every profile read the grid instead: `profileGrid.minY(i)` and the like).
+   */
+  readonly box: Box;
   startPoint: Vec3;
   endPoint: Vec3;
-  /** Joints with any member on this profile. */
-  joints: Joint[];
-  /** Joints with a member at the start / end (a span member within 1 mm of an end counts). */
-  startJoints: Joint[];
-  endJoints: Joint[];
+  /** Joints with any member on this profile (a new list on every read; `AnalysisContext.profileJointIndex` has them as indices). */
+  readonly joints: Joint[];
+  /**
+   * Joints with a member at the start / end (a span member within 1 mm of an end counts), a new list
+   * on every read; `jointCountAt` counts them without one.
+   */
+  readonly startJoints: Joint[];
+  readonly endJoints: Joint[];
+  readonly startJointCount: number;
+  readonly endJointCount: number;
   /** Accessories fitted to the start / end. */
   startAccessories: Accessory[];
   endAccessories: Accessory[];
@@ -45,8 +54,116 @@ export interface ProfileInfo {
 /** Shared empty list: most ends have no accessories, so do not allocate one per end. */
 const NONE: never[] = [];
 
+/**
+ * Each profile's joints as joint indices (into `joints`), in joint order, with any member on the
+ * profile, a member at its start and a member at its end: profile i's are entries `xStart[i]` up to
+ * `xStart[i + 1]` of `xIndex`. Shared by every `ProfileRecord` of one context.
+ */
+interface ProfileJointTables {
+  joints: readonly Joint[];
+  anyStart: Int32Array;
+  anyIndex: Int32Array;
+  startStart: Int32Array;
+  startIndex: Int32Array;
+  endStart: Int32Array;
+  endIndex: Int32Array;
+}
+
+/** Joints `start[i]` up to `start[i + 1]` of a joint table as a new list (the shared empty one when there are none). */
+function jointList(joints: readonly Joint[], start: Int32Array, index: Int32Array, i: number): Joint[] {
+  const from = start[i];
+  const to = start[i + 1];
+  if (from === to) return NONE;
+  const list = new Array<Joint>(to - from);
+  for (let k = from; k < to; k++) list[k - from] = joints[index[k]];
+  return list;
+}
+
+/**
+ * The context's `ProfileInfo`. It keeps no box object and no joint lists: 8,000 boxes (six boxed
+ * numbers each) and three joint lists per profile alive through the analysis were nearly half of
+ * what the young-generation collector copied of the context. Both are made on reading, from typed
+ * tables the context shares.
+ */
+class ProfileRecord implements ProfileInfo {
+  readonly index: number;
+  readonly profile: Profile;
+  readonly variant: ProfileVariant | undefined;
+  readonly system: ProfileSystem | undefined;
+  readonly width: number;
+  readonly height: number;
+  readonly axes: SectionAxes;
+  readonly startPoint: Vec3;
+  readonly endPoint: Vec3;
+  startAccessories: Accessory[] = NONE;
+  endAccessories: Accessory[] = NONE;
+  /** Six numbers per profile (min x, y, z, max x, y, z), shared with the grid. */
+  private readonly corners: Float64Array;
+  private readonly jointTables: ProfileJointTables;
+
+  constructor(
+    index: number,
+    profile: Profile,
+    variant: ProfileVariant | undefined,
+    system: ProfileSystem | undefined,
+    width: number,
+    height: number,
+    axes: SectionAxes,
+    endPoint: Vec3,
+    corners: Float64Array,
+    jointTables: ProfileJointTables,
+  ) {
+    this.index = index;
+    this.profile = profile;
+    this.variant = variant;
+    this.system = system;
+    this.width = width;
+    this.height = height;
+    this.axes = axes;
+    // A copy, although the document's point would do: made here, every start and end point has
+    // the same array layout (the document's may hold small integers), so readers of points stay
+    // on one fast path.
+    this.startPoint = [profile.start[0], profile.start[1], profile.start[2]];
+    this.endPoint = endPoint;
+    this.corners = corners;
+    this.jointTables = jointTables;
+  }
+
+  get box(): Box {
+    return boxAt(this.corners, this.index);
+  }
+
+  get joints(): Joint[] {
+    const t = this.jointTables;
+    return jointList(t.joints, t.anyStart, t.anyIndex, this.index);
+  }
+
+  get startJoints(): Joint[] {
+    const t = this.jointTables;
+    return jointList(t.joints, t.startStart, t.startIndex, this.index);
+  }
+
+  get endJoints(): Joint[] {
+    const t = this.jointTables;
+    return jointList(t.joints, t.endStart, t.endIndex, this.index);
+  }
+
+  get startJointCount(): number {
+    return this.jointTables.startStart[this.index + 1] - this.jointTables.startStart[this.index];
+  }
+
+  get endJointCount(): number {
+    return this.jointTables.endStart[this.index + 1] - this.jointTables.endStart[this.index];
+  }
+}
+
 export function jointsAt(info: ProfileInfo, end: ProfileEnd): Joint[] {
   return end === 'start' ? info.startJoints : info.endJoints;
+}
+
+/** How many joints have a member at this end (`jointsAt(info, end).length` without the list). */
+export function jointCountAt(info: ProfileInfo, end: ProfileEnd): number {
+  return end === 'start' ? info.startJointCount : info.endJointCount;
 }
 
 export function accessoriesAt(info: ProfileInfo, end: ProfileEnd): Accessory[] {
@@ -57,7 +174,10 @@ export function accessoriesAt(info: ProfileInfo, end: ProfileEnd): Accessory[] {
 export function areJoined(ctx: AnalysisContext, a: string, b: string): boolean {
   const info = ctx.profileById.get(a);
   if (!info) return false;
-  for (const j of info.joints) for (const m of j.members) if (m.profileId === b) return true;
+  const joints = ctx.design.joints;
+  for (let k = ctx.profileJointStart[info.index]; k < ctx.profileJointStart[info.index + 1]; k++) {
+    for (const m of joints[ctx.profileJointIndex[k]].members) if (m.profileId === b) return true;
+  }
   return false;
 }
 
@@ -125,6 +245,11 @@ export function buildAnalysisContext(design: DesignDocument, catalogue: Catalogu
   const profileById = new Map<string, ProfileInfo>();
   // Frames repeat a few directions and rolls, so profiles share one (read-only) SectionAxes per pair.
   const orientations = new OrientationCache();
+  // The profile boxes, six numbers each, written straight into the table the grid indexes.
+  const corners = new Float64Array(design.profiles.length * 6);
+  // Filled in by `attachJoints` once every profile has its record.
+  const none = new Int32Array(0);
+  const jointTables: ProfileJointTables = { joints: design.joints, anyStart: none, anyIndex: none, startStart: none, startIndex: none, endStart: none, endIndex: none };
   for (let i = 0; i < design.profiles.length; i++) {
     const profile = design.profiles[i];
     const variant = catalogue.variants.get(profile.variantId);
@@ -133,31 +258,13 @@ export function buildAnalysisContext(design: DesignDocument, catalogue: Catalogu
     const height = variant?.height ?? UNKNOWN_SECTION_MM;
     const axes = orientations.axes(profile.direction, profile.rollDeg);
     const endPoint = pointAlongProfile(profile, profile.length);
-    const info: ProfileInfo = {
-      index: i,
-      profile,
-      variant,
-      system,
-      width,
-      height,
-      axes,
-      box: profileBoundingBoxBetween(profile.start, endPoint, width, height, axes),
-      // A copy, although the document's point would do: made here, every start and end point has
-      // the same array layout (the document's may hold small integers), so readers of points stay
-      // on one fast path.
-      startPoint: [profile.start[0], profile.start[1], profile.start[2]],
-      endPoint,
-      joints: NONE,
-      startJoints: NONE,
-      endJoints: NONE,
-      startAccessories: NONE,
-      endAccessories: NONE,
-    };
+    profileBoundsInto(profile.start, endPoint, width, height, axes, corners, i * 6);
+    const info = new ProfileRecord(i, profile, variant, system, width, height, axes, endPoint, corners, jointTables);
     profiles.push(info);
     profileById.set(profile.id, info);
   }
 
-  const jointMembers = attachJoints(design.joints, profiles, profileById);
+  const jointMembers = attachJoints(design.joints, profiles.length, profileById, jointTables);
   const accessoryProfile = attachAccessories(design.accessories, profiles, profileById);
 
   const panels: PanelInfo[] = [];
@@ -167,8 +274,6 @@ export function buildAnalysisContext(design: DesignDocument, catalogue: Catalogu
     panels.push(info);
     panelById.set(info.panel.id, info);
   }
-  const boxes = new Array<Box>(profiles.length);
-  for (let i = 0; i < profiles.length; i++) boxes[i] = profiles[i].box;
 
   let jointById: Map<string, Joint> | undefined;
   return {
@@ -191,7 +296,7 @@ export function buildAnalysisContext(design: DesignDocument, catalogue: Catalogu
     profileJointStart: jointMembers.profileJointStart,
     profileJointIndex: jointMembers.profileJointIndex,
     accessoryProfile,
-    profileGrid: new UniformGrid(boxes, { margin: CONTACT_TOLERANCE_MM }),
+    profileGrid: new UniformGrid(corners, { margin: CONTACT_TOLERANCE_MM }),
     memo: new Map(),
   };
 }
@@ -247,17 +352,17 @@ export function accessoryInfo(ctx: AnalysisContext, accessoryIndex: number): Pro
 }
 
 /**
- * Fills each profile's joint lists (any member, start, end) in joint order. Two passes: the first
- * resolves each member's profile once and counts, the second fills lists of exactly that length,
- * so no list grows by copying and no list is allocated for a profile without joints. Returns the
- * resolved members (see `AnalysisContext.jointMemberProfile`).
+ * Fills the profiles' joint tables (any member, start, end; see `ProfileJointTables`) in joint
+ * order. Two passes: the first resolves each member's profile once and counts, the second fills
+ * typed arrays of exactly that length (no list per profile). Returns the resolved members (see
+ * `AnalysisContext.jointMemberProfile`).
  */
 function attachJoints(
   joints: readonly Joint[],
-  profiles: ProfileInfo[],
+  n: number,
   profileById: Map<string, ProfileInfo>,
+  tables: ProfileJointTables,
 ): { start: Int32Array; profile: Int32Array; profileJointStart: Int32Array; profileJointIndex: Int32Array } {
-  const n = profiles.length;
   const anyCount = new Int32Array(n);
   const startCount = new Int32Array(n);
   const endCount = new Int32Array(n);
@@ -297,15 +402,17 @@ function attachJoints(
       }
     }
   }
-  const profileJointStart = new Int32Array(n + 1);
-  for (let i = 0; i < n; i++) profileJointStart[i + 1] = profileJointStart[i] + anyCount[i];
-  const profileJointIndex = new Int32Array(profileJointStart[n]);
+  const anyStart = new Int32Array(n + 1);
+  const startStart = new Int32Array(n + 1);
+  const endStart = new Int32Array(n + 1);
   for (let i = 0; i < n; i++) {
-    const info = profiles[i];
-    if (anyCount[i] > 0) info.joints = new Array<Joint>(anyCount[i]);
-    if (startCount[i] > 0) info.startJoints = new Array<Joint>(startCount[i]);
-    if (endCount[i] > 0) info.endJoints = new Array<Joint>(endCount[i]);
+    anyStart[i + 1] = anyStart[i] + anyCount[i];
+    startStart[i + 1] = startStart[i] + startCount[i];
+    endStart[i + 1] = endStart[i] + endCount[i];
   }
+  const anyIndex = new Int32Array(anyStart[n]);
+  const startIndex = new Int32Array(startStart[n]);
+  const endIndex = new Int32Array(endStart[n]);
   // Reuse the counters as fill positions.
   anyCount.fill(0);
   startCount.fill(0);
@@ -313,22 +420,25 @@ function attachJoints(
   lastJoint.fill(-1);
   m = 0;
   for (let j = 0; j < joints.length; j++) {
-    const joint = joints[j];
-    const count = joint.members.length;
+    const count = joints[j].members.length;
     for (let k = 0; k < count; k++, m++) {
       const i = memberProfile[m];
       if (i < 0) continue;
-      const info = profiles[i];
-      if (memberEndCode[m] === 1) info.startJoints[startCount[i]++] = joint;
-      else if (memberEndCode[m] === 2) info.endJoints[endCount[i]++] = joint;
+      if (memberEndCode[m] === 1) startIndex[startStart[i] + startCount[i]++] = j;
+      else if (memberEndCode[m] === 2) endIndex[endStart[i] + endCount[i]++] = j;
       if (lastJoint[i] !== j) {
         lastJoint[i] = j;
-        profileJointIndex[profileJointStart[i] + anyCount[i]] = j;
-        info.joints[anyCount[i]++] = joint;
+        anyIndex[anyStart[i] + anyCount[i]++] = j;
       }
     }
   }
-  return { start: memberStart, profile: memberProfile, profileJointStart, profileJointIndex };
+  tables.anyStart = anyStart;
+  tables.anyIndex = anyIndex;
+  tables.startStart = startStart;
+  tables.startIndex = startIndex;
+  tables.endStart = endStart;
+  tables.endIndex = endIndex;
+  return { start: memberStart, profile: memberProfile, profileJointStart: anyStart, profileJointIndex: anyIndex };
 }
 
 /**

@@ -258,7 +258,9 @@ function solidsOf(ctx: AnalysisContext): { bounds: Box; near: (box: Box, visit: 
     near(box, visit) {
       ctx.profileGrid.forEachNear(box, (i) => {
         const p = ctx.profiles[i];
-        if (overlaps(box, p.box, BLOCK_TOLERANCE_MM)) visit({ id: p.profile.id, box: p.box });
+        // Read once: a profile's box is a new object on every read.
+        const b = p.box;
+        if (overlaps(box, b, BLOCK_TOLERANCE_MM)) visit({ id: p.profile.id, box: b });
       });
       for (const p of panels) if (overlaps(box, p.box, BLOCK_TOLERANCE_MM)) visit(p);
     },

@@ -21,9 +21,10 @@ export function frameLevels(ctx: AnalysisContext): { floor: number; top: number 
   if (!levels) {
     let floor = Infinity;
     let top = -Infinity;
-    for (const p of ctx.profiles) {
-      floor = Math.min(floor, p.box.minY);
-      top = Math.max(top, p.box.maxY);
+    const grid = ctx.profileGrid;
+    for (let i = 0; i < ctx.profiles.length; i++) {
+      floor = Math.min(floor, grid.minY(i));
+      top = Math.max(top, grid.maxY(i));
     }
     levels = { floor, top };
     ctx.memo.set('frameLevels', levels);
@@ -36,7 +37,7 @@ export function floorContact(ctx: AnalysisContext): { points: P2[]; kind: 'feet'
   const { floor } = frameLevels(ctx);
   const feet: P2[] = [];
   for (const p of ctx.profiles) {
-    if (p.box.minY > floor + FLOOR_TOLERANCE_MM + Math.max(p.width, p.height)) continue;
+    if (ctx.profileGrid.minY(p.index) > floor + FLOOR_TOLERANCE_MM + Math.max(p.width, p.height)) continue;
     for (let e = 0; e < 2; e++) {
       const point = e === 0 ? p.startPoint : p.endPoint;
       const accessories = e === 0 ? p.startAccessories : p.endAccessories;
@@ -53,7 +54,7 @@ export function floorContactPoints(ctx: AnalysisContext): P2[] {
   const { floor } = frameLevels(ctx);
   const points: P2[] = [];
   for (const p of ctx.profiles) {
-    if (p.box.minY > floor + FLOOR_TOLERANCE_MM) continue;
+    if (ctx.profileGrid.minY(p.index) > floor + FLOOR_TOLERANCE_MM) continue;
     const b = p.box;
     points.push([b.minX, b.minZ], [b.maxX, b.minZ], [b.maxX, b.maxZ], [b.minX, b.maxZ]);
   }

@@ -9,7 +9,7 @@ import type { Joint, Machining, ProfileEnd } from '../design/schema';
 import type { Connector, ConnectorMachining } from '../catalogue/types';
 import { sectionHalfExtentAlong } from '../geometry/profileGeometry';
 import { dot } from '../geometry/vectors';
-import { CONTACT_TOLERANCE_MM, accessoriesAt, areJoined, jointsAt, memberEnd, memberInfo, memberPoint, type AnalysisContext, type ProfileInfo } from '../analysis/context';
+import { CONTACT_TOLERANCE_MM, accessoriesAt, areJoined, jointCountAt, memberEnd, memberInfo, memberPoint, type AnalysisContext, type ProfileInfo } from '../analysis/context';
 import { capitalise, countOf, endPhrase, findingId, jointName, mm, profileName } from '../analysis/describe';
 import { distancePointToProfile, firstProfileAtPoint, pointOffFace, projectAlong } from './geometryQueries';
 import { addEndCapFix, addMachiningFix } from './fixes';
@@ -239,10 +239,16 @@ function hasTNut(ctx: AnalysisContext, cache: JointCheckCache, systemId: string,
   return known;
 }
 
+/** Both ends, in the order the checks visit them (one list, not one per profile). */
+const ENDS: readonly ProfileEnd[] = ['start', 'end'];
+
 function checkProfileEnds(ctx: AnalysisContext, out: Finding[]): void {
-  for (const info of ctx.profiles) {
-    for (const end of ['start', 'end'] as const) {
-      if (jointsAt(info, end).length > 0) continue;
+  // Index loops: these run for every profile end, and iterators here were allocated per profile.
+  for (let i = 0; i < ctx.profiles.length; i++) {
+    const info = ctx.profiles[i];
+    for (let e = 0; e < ENDS.length; e++) {
+      const end = ENDS[e];
+      if (jointCountAt(info, end) > 0) continue;
       const accessories = accessoriesAt(info, end);
       if (hasEndCloser(accessories)) {
         // A cap, foot or caster says the designer meant the end to be free.
@@ -410,8 +416,11 @@ function sortByLo(list: number[], lo: Float64Array): void {
 }
 
 function checkAccessHolesUncovered(ctx: AnalysisContext, out: Finding[]): void {
-  for (const info of ctx.profiles) {
-    for (const m of info.profile.machining) {
+  for (let i = 0; i < ctx.profiles.length; i++) {
+    const info = ctx.profiles[i];
+    const machining = info.profile.machining;
+    for (let k = 0; k < machining.length; k++) {
+      const m = machining[k];
       if (m.kind !== 'access-counterbore' && m.kind !== 'access-hole') continue;
       const probe = pointOffFace(info, m.face, machiningAlong(info, m), COVER_PROBE_MM);
       const other = firstProfileAtPoint(ctx, probe, 0, info.index, () => true);

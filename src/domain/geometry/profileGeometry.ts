@@ -98,6 +98,24 @@ export function profileBoundingBoxBetween(start: ReadonlyVec3, end: ReadonlyVec3
   };
 }
 
+/**
+ * `profileBoundingBoxBetween` written into `out` from `offset` as six numbers (min x, y, z, max x,
+ * y, z), the layout of the spatial grid's corner table: no box object.
+ */
+export function profileBoundsInto(start: ReadonlyVec3, end: ReadonlyVec3, width: number, height: number, axes: SectionAxes, out: Float64Array, offset: number): void {
+  const hw = width / 2;
+  const hh = height / 2;
+  const ex = Math.abs(axes.u[0]) * hw + Math.abs(axes.v[0]) * hh;
+  const ey = Math.abs(axes.u[1]) * hw + Math.abs(axes.v[1]) * hh;
+  const ez = Math.abs(axes.u[2]) * hw + Math.abs(axes.v[2]) * hh;
+  out[offset] = Math.min(start[0], end[0]) - ex;
+  out[offset + 1] = Math.min(start[1], end[1]) - ey;
+  out[offset + 2] = Math.min(start[2], end[2]) - ez;
+  out[offset + 3] = Math.max(start[0], end[0]) + ex;
+  out[offset + 4] = Math.max(start[1], end[1]) + ey;
+  out[offset + 5] = Math.max(start[2], end[2]) + ez;
+}
+
 /** `sectionHalfExtentAlong` a world axis (0 = x, 1 = y, 2 = z), mm, without a direction vector per call. */
 export function sectionHalfExtentAlongAxis(axes: SectionAxes, width: number, height: number, axis: 0 | 1 | 2): number {
   // The dot product with a unit axis is that component (the other terms are zeros).

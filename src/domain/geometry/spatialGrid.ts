@@ -25,25 +25,20 @@ export class UniformGrid {
   private readonly nx: number;
   private readonly stamps: Int32Array;
   private stamp = 0;
+  /** The smallest box holding every indexed box (the empty box without any). */
+  private readonly extent: Box;
 
   /**
-   * @param boxes items to index, addressed by their array index
+   * @param boxes items to index, addressed by their array index; or their corners already laid out
+   *   as `corners` is (six numbers per box), which the grid then keeps without a copy
    * @param margin mm added around every box, so "touching within margin" counts as near
    * @param cellSize mm; default from the boxes' typical size
    */
-  constructor(boxes: readonly Box[], options: { margin?: number; cellSize?: number } = {}) {
+  constructor(boxes: readonly Box[] | Float64Array, options: { margin?: number; cellSize?: number } = {}) {
     this.margin = options.margin ?? 0;
-    this.stamps = new Int32Array(boxes.length);
-    const corners = new Float64Array(boxes.length * 6);
-    for (let i = 0, o = 0; i < boxes.length; i++, o += 6) {
-      const b = boxes[i];
-      corners[o] = b.minX;
-      corners[o + 1] = b.minY;
-      corners[o + 2] = b.minZ;
-      corners[o + 3] = b.maxX;
-      corners[o + 4] = b.maxY;
-      corners[o + 5] = b.maxZ;
-    }
+    const corners = boxes instanceof Float64Array ? boxes : cornersOf(boxes);
+    const count = corners.length / 6;
+    this.stamps = new Int32Array(count);
     this.corners = corners;
     let minX = Infinity;
     let minY = Infinity;
@@ -51,14 +46,15 @@ export class UniformGrid {
     let maxX = -Infinity;
     let maxY = -Infinity;
     let maxZ = -Infinity;
-    for (const b of boxes) {
-      if (b.minX < minX) minX = b.minX;
-      if (b.minY < minY) minY = b.minY;
-      if (b.minZ < minZ) minZ = b.minZ;
-      if (b.maxX > maxX) maxX = b.maxX;
-      if (b.maxY > maxY) maxY = b.maxY;
-      if (b.maxZ > maxZ) maxZ = b.maxZ;
+    for (let o = 0; o < corners.length; o += 6) {
+      if (corners[o] < minX) minX = corners[o];
+      if (corners[o + 1] < minY) minY = corners[o + 1];
+      if (corners[o + 2] < minZ) minZ = corners[o + 2];
+      if (corners[o + 3] > maxX) maxX = corners[o + 3];
+      if (corners[o + 4] > maxY) maxY = corners[o + 4];
+      if (corners[o + 5] > maxZ) maxZ = corners[o + 5];
     }
+    this.extent = { minX, minY, minZ, maxX, maxY, maxZ };
     const m = this.margin;
     this.originX = (Number.isFinite(minX) ? minX : 0) - m - 1;
     this.originY = (Number.isFinite(minY) ? minY : 0) - m - 1;
@@ -66,21 +62,45 @@ export class UniformGrid {
     const spanX = Number.isFinite(maxX) ? maxX - minX + 2 * m + 2 : 1;
     const spanY = Number.isFinite(maxY) ? maxY - minY + 2 * m + 2 : 1;
     const spanZ = Number.isFinite(maxZ) ? maxZ - minZ + 2 * m + 2 : 1;
-    let cellSize = Math.max(options.cellSize ?? defaultCellSize(boxes), 1e-3);
+    let cellSize = Math.max(options.cellSize ?? defaultCellSize(corners), 1e-3);
     const cellsFor = (size: number) => (Math.floor(spanX / size) + 1) * (Math.floor(spanY / size) + 1) * (Math.floor(spanZ / size) + 1);
     while (cellsFor(cellSize) >= MAX_CELLS) cellSize *= 2;
     // Coarsen until the total number of cell entries stays proportional to n.
     for (;;) {
       let entries = 0;
-      for (const b of boxes) entries += this.cellCount(b, cellSize);
-      if (entries <= Math.max(64, MAX_AVERAGE_CELLS_PER_BOX * boxes.length)) break;
+      for (let i = 0; i < count; i++) entries += this.cellCount(i, cellSize);
+      if (entries <= Math.max(64, MAX_AVERAGE_CELLS_PER_BOX * count)) break;
       cellSize *= 2;
     }
     this.cellSize = cellSize;
     this.nx = Math.floor(spanX / cellSize) + 1;
     this.ny = Math.floor(spanY / cellSize) + 1;
     this.nz = Math.floor(spanZ / cellSize) + 1;
-    for (let i = 0; i < boxes.length; i++) this.insert(i, boxes[i]);
+    for (let i = 0; i < count; i++) this.insert(i);
+  }
+
+  /** Bottom of indexed box `i` (its min y), mm. */
+  minY(i: number): number {
+    return this.corners[i * 6 + 1];
+  }
+
+  /** Top of indexed box `i` (its max y), mm. */
+  maxY(i: number): number {
+    return this.corners[i * 6 + 4];
+  }
+
+  /**
+   * The smallest box holding every indexed box, as a new object: what growing the empty box by each
+   * one in turn (`expandBoxInPlace`) gives, worked out once when the grid is built.
+   */
+  bounds(): Box {
+    const e = this.extent;
+    return { minX: e.minX, minY: e.minY, minZ: e.minZ, maxX: e.maxX, maxY: e.maxY, maxZ: e.maxZ };
+  }
+
+  /** Indexed box `i` as a new box object (the grid keeps only the corners). */
+  box(i: number): Box {
+    return boxAt(this.corners, i);
   }
 
   /**
@@ -196,23 +216,27 @@ export class UniformGrid {
     return c < 0 ? 0 : c >= count ? count - 1 : c;
   }
 
-  private cellCount(b: Box, size: number): number {
+  private cellCount(i: number, size: number): number {
     const m = this.margin;
-    const nx = Math.floor((b.maxX + m - this.originX) / size) - Math.floor((b.minX - m - this.originX) / size) + 1;
-    const ny = Math.floor((b.maxY + m - this.originY) / size) - Math.floor((b.minY - m - this.originY) / size) + 1;
-    const nz = Math.floor((b.maxZ + m - this.originZ) / size) - Math.floor((b.minZ - m - this.originZ) / size) + 1;
+    const c = this.corners;
+    const o = i * 6;
+    const nx = Math.floor((c[o + 3] + m - this.originX) / size) - Math.floor((c[o] - m - this.originX) / size) + 1;
+    const ny = Math.floor((c[o + 4] + m - this.originY) / size) - Math.floor((c[o + 1] - m - this.originY) / size) + 1;
+    const nz = Math.floor((c[o + 5] + m - this.originZ) / size) - Math.floor((c[o + 2] - m - this.originZ) / size) + 1;
     return nx * ny * nz;
   }
 
-  private insert(i: number, b: Box): void {
+  private insert(i: number): void {
     const s = this.cellSize;
     const m = this.margin;
-    const x0 = this.cellIndex(b.minX - m, this.originX, s, this.nx);
-    const x1 = this.cellIndex(b.maxX + m, this.originX, s, this.nx);
-    const y0 = this.cellIndex(b.minY - m, this.originY, s, this.ny);
-    const y1 = this.cellIndex(b.maxY + m, this.originY, s, this.ny);
-    const z0 = this.cellIndex(b.minZ - m, this.originZ, s, this.nz);
-    const z1 = this.cellIndex(b.maxZ + m, this.originZ, s, this.nz);
+    const c = this.corners;
+    const o = i * 6;
+    const x0 = this.cellIndex(c[o] - m, this.originX, s, this.nx);
+    const x1 = this.cellIndex(c[o + 3] + m, this.originX, s, this.nx);
+    const y0 = this.cellIndex(c[o + 1] - m, this.originY, s, this.ny);
+    const y1 = this.cellIndex(c[o + 4] + m, this.originY, s, this.ny);
+    const z0 = this.cellIndex(c[o + 2] - m, this.originZ, s, this.nz);
+    const z1 = this.cellIndex(c[o + 5] + m, this.originZ, s, this.nz);
     for (let x = x0; x <= x1; x++) {
       for (let y = y0; y <= y1; y++) {
         for (let z = z0; z <= z1; z++) {
@@ -226,14 +250,36 @@ export class UniformGrid {
   }
 }
 
-/** Median of each box's longest side: long members then span only a few cells. */
-function defaultCellSize(boxes: readonly Box[]): number {
-  if (boxes.length === 0) return 100;
-  const step = Math.max(1, Math.floor(boxes.length / 512));
-  const sizes: number[] = [];
-  for (let i = 0; i < boxes.length; i += step) {
+/** Box `i` of a corner table (six numbers per box, as the grid keeps them) as a new box object. */
+export function boxAt(corners: Float64Array, i: number): Box {
+  const o = i * 6;
+  return { minX: corners[o], minY: corners[o + 1], minZ: corners[o + 2], maxX: corners[o + 3], maxY: corners[o + 4], maxZ: corners[o + 5] };
+}
+
+/** Six numbers per box (min x, y, z, max x, y, z), in the boxes' order. */
+function cornersOf(boxes: readonly Box[]): Float64Array {
+  const corners = new Float64Array(boxes.length * 6);
+  for (let i = 0, o = 0; i < boxes.length; i++, o += 6) {
     const b = boxes[i];
-    sizes.push(Math.max(b.maxX - b.minX, b.maxY - b.minY, b.maxZ - b.minZ));
+    corners[o] = b.minX;
+    corners[o + 1] = b.minY;
+    corners[o + 2] = b.minZ;
+    corners[o + 3] = b.maxX;
+    corners[o + 4] = b.maxY;
+    corners[o + 5] = b.maxZ;
+  }
+  return corners;
+}
+
+/** Median of each box's longest side (`corners` as the grid keeps them): long members then span only a few cells. */
+function defaultCellSize(corners: Float64Array): number {
+  const count = corners.length / 6;
+  if (count === 0) return 100;
+  const step = Math.max(1, Math.floor(count / 512));
+  const sizes: number[] = [];
+  for (let i = 0; i < count; i += step) {
+    const o = i * 6;
+    sizes.push(Math.max(corners[o + 3] - corners[o], corners[o + 4] - corners[o + 1], corners[o + 5] - corners[o + 2]));
   }
   sizes.sort((a, b) => a - b);
   return Math.max(sizes[sizes.length >> 1], 1);

@@ -4,7 +4,7 @@
  * Overall size from the boxes of profiles and panels.
  */
 import type { MassSummary } from '../analysis/types';
-import { emptyBox, expandBoxInPlace, isEmptyBox } from '../geometry/box';
+import { expandBoxInPlace, isEmptyBox } from '../geometry/box';
 import type { AnalysisContext } from '../analysis/context';
 import type { HardwareSummary } from './hardware';
 import type { PanelSheet } from './panelSheets';
@@ -16,11 +16,11 @@ export function massSummary(ctx: AnalysisContext, hardware: HardwareSummary, she
   let mx = 0;
   let my = 0;
   let mz = 0;
-  const box = emptyBox();
+  // Every profile box, grown from the empty box (the grid found it when it was built).
+  const box = ctx.profileGrid.bounds();
   let profileKg = 0;
   let profiles = 0;
   for (const p of ctx.profiles) {
-    expandBoxInPlace(box, p.box);
     // Mass per metre is area × alloy density unless the supplier's figure overrides it.
     const kg = ((p.variant?.massPerMetre ?? 0) * p.profile.length) / 1000;
     if (!(kg > 0)) continue;

@@ -65,9 +65,15 @@ export interface OffcutUse {
 export function useOffcuts(cuts: StockCut[], offcuts: number[], kerf: number): { used: OffcutUse[]; rest: StockCut[] } {
   const bins = offcuts.map((length) => ({ length, space: length + kerf, cuts: [] as StockCut[] }));
   const rest: StockCut[] = [];
-  for (const cut of longestFirst(cuts)) {
+  // Index loops: an iterator per cut was most of what this allocated at 8,000 profiles.
+  const ordered = longestFirst(cuts);
+  for (let c = 0; c < ordered.length; c++) {
+    const cut = ordered[c];
     let best: (typeof bins)[number] | null = null;
-    for (const bin of bins) if (bin.space + TOLERANCE >= cut.length + kerf && (!best || bin.space < best.space)) best = bin;
+    for (let b = 0; b < bins.length; b++) {
+      const bin = bins[b];
+      if (bin.space + TOLERANCE >= cut.length + kerf && (!best || bin.space < best.space)) best = bin;
+    }
     if (!best) rest.push(cut);
     else {
       best.cuts.push(cut);
@@ -86,15 +92,21 @@ export function useOffcuts(cuts: StockCut[], offcuts: number[], kerf: number): {
  */
 function longestFirst(cuts: readonly StockCut[]): StockCut[] {
   const buckets = new Map<number, StockCut[]>();
-  for (const cut of cuts) {
+  for (let c = 0; c < cuts.length; c++) {
+    const cut = cuts[c];
     if (!Number.isFinite(cut.length)) return [...cuts].sort((a, b) => b.length - a.length);
     const bucket = buckets.get(cut.length);
     if (bucket) bucket.push(cut);
     else buckets.set(cut.length, [cut]);
   }
   const lengths = [...buckets.keys()].sort((a, b) => b - a);
-  const sorted: StockCut[] = [];
-  for (const length of lengths) for (const cut of buckets.get(length)!) sorted.push(cut);
+  // Filled at its final length, by index (no iterator or growth per cut).
+  const sorted = new Array<StockCut>(cuts.length);
+  let at = 0;
+  for (const length of lengths) {
+    const bucket = buckets.get(length)!;
+    for (let c = 0; c < bucket.length; c++) sorted[at++] = bucket[c];
+  }
   return sorted;
 }
 
