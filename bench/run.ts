@@ -1,6 +1,7 @@
 /**
  * Runs every bench/*.bench.ts module (`export async function run(): Promise<BenchRow[]>`) and
- * prints one table with each figure beside its bar and pass/FAIL.
+ * prints one table with each figure beside its bar and pass/FAIL. Each module runs in a process of
+ * its own (bench/runOne.ts).
  *
  *   npm run bench                    every benchmark, full length; writes bench/results/latest.json
  *   npm run bench -- server save     only the benchmarks whose file name contains a word given
@@ -10,9 +11,10 @@
  * writes bench/results/partial.json, which git ignores. Both record the date, Node, the CPU and
  * the load average before and after, because a busy machine makes every figure worse.
  */
-import { mkdirSync, readdirSync, writeFileSync } from 'node:fs';
+import { spawnSync } from 'node:child_process';
+import { existsSync, mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { dirname, join } from 'node:path';
-import { fileURLToPath, pathToFileURL } from 'node:url';
+import { fileURLToPath } from 'node:url';
 import os from 'node:os';
 import { QUICK } from './mode';
 import type { BenchRow } from './types';
@@ -55,19 +57,20 @@ async function main(): Promise<void> {
   if (files.length === 0) throw new Error(`no benchmark matches ${filters.join(', ')}`);
   const rows: BenchRow[] = [];
   const failures: string[] = [];
+  const scratch = mkdtempSync(join(os.tmpdir(), 'slotwise-bench-'));
   for (const file of files) {
-    const mod = (await import(pathToFileURL(join(here, file)).href)) as { run?: () => Promise<BenchRow[]> };
-    if (typeof mod.run !== 'function') {
-      failures.push(`${file} has no run() export`);
-      continue;
-    }
     console.error(`running ${file} …`);
-    try {
-      rows.push(...(await mod.run()));
-    } catch (error) {
-      failures.push(`${file}: ${(error as Error).message}`);
-    }
+    // Each benchmark in a fresh process (bench/runOne.ts): one module's heap, worker threads or
+    // browser must not slow the next one down.
+    const out = join(scratch, `${file}.json`);
+    const child = spawnSync(process.execPath, ['--import', 'tsx', join(here, 'runOne.ts'), join(here, file), out], {
+      stdio: ['ignore', 'inherit', 'inherit'],
+      env: { ...process.env, ...(QUICK ? { BENCH_QUICK: '1' } : {}) },
+    });
+    if (child.status === 0 && existsSync(out)) rows.push(...(JSON.parse(readFileSync(out, 'utf8')) as BenchRow[]));
+    else failures.push(`${file}: ended with ${child.status === null ? `signal ${child.signal}` : `exit code ${child.status}`}`);
   }
+  rmSync(scratch, { recursive: true, force: true });
   printTable(rows);
   const held = rows.filter((r) => r.pass !== undefined);
   const missed = held.filter((r) => !r.pass);
