@@ -1,11 +1,13 @@
 import type { Database } from '../../db/database';
 import type { UserModel, UserPreferences } from '../../db/models/user';
+import { keptReads } from '../../db/keptReads';
 import { AppError } from '../../middleware/appError';
 import type { Passwords } from './passwords';
 import { destroySessionsOfUser } from './sessionRevocation';
 
 export function createAuthService(db: Database, passwords: Passwords) {
   const { User } = db.models;
+  const userRows = keptReads<number, UserModel['dataValues'] | null>(db, 10_000);
 
   return {
     /**
@@ -18,10 +20,19 @@ export function createAuthService(db: Database, passwords: Passwords) {
       return user && matches && user.active ? user : null;
     },
 
-    /** The signed-in user for a session, or null once the account is gone or deactivated. */
+    /**
+     * The signed-in user for a session, or null once the account is gone or deactivated. Every
+     * signed-in request asks: the row is kept until the next write, and each call gets an
+     * instance of its own built from it, as the query would have built it.
+     */
     async findActiveUser(id: number): Promise<UserModel | null> {
-      const user = await User.findByPk(id);
-      return user && user.active ? user : null;
+      const row = await userRows(id, async () => {
+        const user = await User.findByPk(id);
+        return user ? { ...user.dataValues } : null;
+      });
+      if (!row) return null;
+      const user = User.build({ ...row }, { isNewRecord: false, raw: true });
+      return user.active ? user : null;
     },
 
     async updateProfile(user: UserModel, changes: { displayName?: string; preferences?: UserPreferences }): Promise<UserModel> {
