@@ -20,6 +20,8 @@ import { QUICK } from './mode';
 import type { BenchRow } from './types';
 
 const here = dirname(fileURLToPath(import.meta.url));
+/** Pause between benchmark modules, ms (BENCH_SETTLE_MS). */
+const SETTLE_MS = Number(process.env.BENCH_SETTLE_MS ?? 5000);
 
 function formatValue(v: number): string {
   if (!Number.isFinite(v)) return String(v);
@@ -58,7 +60,9 @@ async function main(): Promise<void> {
   const rows: BenchRow[] = [];
   const failures: string[] = [];
   const scratch = mkdtempSync(join(os.tmpdir(), 'slotwise-bench-'));
-  for (const file of files) {
+  for (const [index, file] of files.entries()) {
+    // A pause between modules: the last one's browser and server may still be shutting down.
+    if (index > 0) await new Promise((resolve) => setTimeout(resolve, SETTLE_MS));
     console.error(`running ${file} …`);
     // Each benchmark in a fresh process (bench/runOne.ts): one module's heap, worker threads or
     // browser must not slow the next one down.

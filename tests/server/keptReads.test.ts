@@ -1,6 +1,7 @@
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { QueryTypes } from 'sequelize';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { openDatabase, type Database } from '../../server/db/database';
 import { keptReads } from '../../server/db/keptReads';
@@ -19,7 +20,10 @@ describe('keptReads', () => {
     rmSync(dir, { recursive: true, force: true });
   });
 
-  const countUsers = async () => Number((await db.sequelize.query<{ n: number }>('SELECT COUNT(*) AS n FROM users', { type: 'SELECT' }))[0].n);
+  const countUsers = async () => {
+    const [row] = await db.sequelize.query<{ n: number }>('SELECT COUNT(*) AS n FROM users', { type: QueryTypes.SELECT });
+    return Number(row?.n);
+  };
   const addUser = (email: string) =>
     db.write((transaction) => db.models.User.create({ email, displayName: 'Kept', role: 'designer', passwordHash: 'x', preferences: { units: 'mm' } }, { transaction }));
 
