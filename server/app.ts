@@ -7,7 +7,7 @@ import { serveClient } from './middleware/clientStatic';
 import { csrfGuard } from './middleware/csrfGuard';
 import { embeddable } from './middleware/embeddable';
 import { apiNotFound, errorHandler } from './middleware/errorHandler';
-import { recordSecurityHeaders, setFixedHeaders, helmetFor } from './middleware/securityHeaders';
+import { recordSecurityHeaders, securityHeaders } from './middleware/securityHeaders';
 import { createHotReads, type HotReads } from './hotReads';
 import { createAnalysisPool, type AnalysisPool } from './modules/analysis/pool';
 import { analysisRouter } from './modules/analysis/router';
@@ -106,7 +106,7 @@ export function createApp(deps: AppDependencies): Express {
 
   const headerOptions = { production, behindTls: config.trustProxy !== false };
   const fixedHeaders = recordSecurityHeaders(headerOptions);
-  app.use(fixedHeaders ? setFixedHeaders(fixedHeaders) : helmetFor(headerOptions));
+  app.use(securityHeaders(headerOptions, fixedHeaders));
   // API answers carry no-store, so an ETag would only cost a hash of every body.
   app.set('etag', false);
 

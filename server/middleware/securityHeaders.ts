@@ -7,8 +7,11 @@ import type { RequestHandler } from 'express';
  * served (Vite's dev server injects inline scripts). It allows what the 3D viewer needs: workers
  * and images from blob:, data: URLs for textures and exports, inline styles set by R3F.
  */
-export function securityHeaders(options: { production: boolean; behindTls: boolean }): RequestHandler {
-  const fixed = recordSecurityHeaders(options);
+export function securityHeaders(
+  options: { production: boolean; behindTls: boolean },
+  /** Headers already recorded for these options (the app shares them with the hot reads). */
+  fixed: FixedHeaders | null = recordSecurityHeaders(options),
+): RequestHandler {
   return fixed ? setFixedHeaders(fixed) : helmetFor(options);
 }
 
@@ -53,7 +56,7 @@ export function applyFixedHeaders(res: Pick<ServerResponse, 'setHeader' | 'remov
   for (const name of fixed.removals) res.removeHeader(name);
 }
 
-export function setFixedHeaders(fixed: FixedHeaders): RequestHandler {
+function setFixedHeaders(fixed: FixedHeaders): RequestHandler {
   return (_req, res, next) => {
     applyFixedHeaders(res, fixed);
     next();
