@@ -13,7 +13,6 @@ import { pointAlongProfile, profileBoundsInto, sectionAxes, type SectionAxes } f
 import { UniformGrid, boxAt } from '../geometry/spatialGrid';
 import type { Vec3 } from '../geometry/vectors';
 import type { CatalogueIndex } from './catalogueIndex';
-import { slotLimitsOf } from '../design/slotLimits';
 import { attachAccessories, attachJoints, jointList, NONE, type ProfileJointTables } from './profileLinks';
 
 /** Two parts closer than this (mm) count as touching. Common practice for a drawn model, no source. */
@@ -336,12 +335,29 @@ function panelInfo(index: number, design: DesignDocument, catalogue: CatalogueIn
   let slotOpening: number | null = null;
   let engagement = 0;
   if (panel.mounting === 'captured') {
-    const systems = bounding.map((b) => b.system).filter((s): s is ProfileSystem => !!s);
-    const fallback = catalogue.systems.get(design.systemId);
-    const limits = slotLimitsOf(systems.length > 0 ? systems : fallback ? [fallback] : []);
-    if (limits) {
-      slotOpening = limits.slotOpening;
-      engagement = limits.engagement;
+    // `slotLimitsOf` over the bounding profiles' systems (the design's system when none has one),
+    // worked out in place: no list of systems per panel.
+    let opening = Infinity;
+    let depth = Infinity;
+    let found = false;
+    for (let k = 0; k < bounding.length; k++) {
+      const system = bounding[k].system;
+      if (!system) continue;
+      found = true;
+      if (system.slotOpening < opening) opening = system.slotOpening;
+      if (system.slotEngagement < depth) depth = system.slotEngagement;
+    }
+    if (!found) {
+      const fallback = catalogue.systems.get(design.systemId);
+      if (fallback) {
+        found = true;
+        opening = fallback.slotOpening;
+        depth = fallback.slotEngagement;
+      }
+    }
+    if (found) {
+      slotOpening = opening;
+      engagement = depth;
     }
   }
   const clearance = panel.mounting === 'captured' ? design.settings.panelClearance : 0;

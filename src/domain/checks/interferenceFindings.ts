@@ -109,12 +109,20 @@ function withPanelsOnSharedGrid(ctx: AnalysisContext): Finding[] | null {
     return narrowPhase(ctx, profileSolid(i), profileSolid(j), out, overflow);
   });
   if (overflow.omitted > 0 || out.length >= MAX_FINDINGS_PER_CHECK) return null;
-  for (let k = 0; k < panels.length; k++) {
-    const box = panels[k].box;
-    grid.forEachNear(box, (i) => {
-      if (grid.penetrationWith(i, box) <= INTERFERENCE_TOLERANCE_MM) return false;
-      return narrowPhase(ctx, profileSolid(i), panelSolid(k), out, overflow);
-    });
+  // A captured panel sits in its own frame's slots: those profiles are contacts (as `isContact`
+  // finds), so they are passed over before any solid is made for the pair.
+  let panel = 0;
+  let box: Box = ctx.profileGrid.bounds();
+  let frame: readonly string[] = [];
+  const visitProfile = (i: number): boolean => {
+    if (grid.penetrationWith(i, box) <= INTERFERENCE_TOLERANCE_MM) return false;
+    if (frame.length > 0 && frame.includes(profiles[i].profile.id)) return false;
+    return narrowPhase(ctx, profileSolid(i), panelSolid(panel), out, overflow);
+  };
+  for (panel = 0; panel < panels.length; panel++) {
+    box = panels[panel].box;
+    frame = panels[panel].panel.boundedBy ?? [];
+    grid.forEachNear(box, visitProfile);
     if (overflow.omitted > 0) return null;
   }
   const panelBoxes = new Array<Box>(panels.length);

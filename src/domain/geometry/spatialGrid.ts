@@ -18,13 +18,23 @@ export class UniformGrid {
   private readonly originX: number;
   private readonly originY: number;
   private readonly originZ: number;
-  private readonly cells = new Map<number, number[]>();
+  /**
+   * The cells as one table: cell `s` (numbered in the order cells were first filled) has key
+   * `cellKeys[s]` and holds boxes `cellItems[cellStart[s]]` up to `cellItems[cellStart[s + 1]]`,
+   * in box order; `cellSlot` maps a key to its cell. No list per cell (thousands of small arrays
+   * grown by push, all alive while the grid is).
+   */
+  private readonly cellSlot = new Map<number, number>();
+  private cellKeys: Int32Array = new Int32Array(0);
+  private cellStart: Int32Array = new Int32Array(1);
+  private cellItems: Int32Array = new Int32Array(0);
   /** Cells along y and z: key = (x · ny + y) · nz + z. */
   private readonly ny: number;
   private readonly nz: number;
   private readonly nx: number;
   private readonly stamps: Int32Array;
   private stamp = 0;
+
   /** The smallest box holding every indexed box (the empty box without any). */
   private readonly extent: Box;
 
@@ -76,7 +86,7 @@ export class UniformGrid {
     this.nx = Math.floor(spanX / cellSize) + 1;
     this.ny = Math.floor(spanY / cellSize) + 1;
     this.nz = Math.floor(spanZ / cellSize) + 1;
-    for (let i = 0; i < count; i++) this.insert(i);
+    this.fillCells(count);
   }
 
   /** Bottom of indexed box `i` (its min y), mm. */
@@ -111,15 +121,20 @@ export class UniformGrid {
     const s = this.cellSize;
     const m = this.margin;
     const c = this.corners;
-    for (const [key, items] of this.cells) {
-      if (items.length < 2) continue;
+    const items = this.cellItems;
+    const starts = this.cellStart;
+    for (let cell = 0; cell < this.cellKeys.length; cell++) {
+      const first = starts[cell];
+      const end = starts[cell + 1];
+      if (end - first < 2) continue;
+      const key = this.cellKeys[cell];
       const cz = key % this.nz;
       const cy = Math.floor(key / this.nz) % this.ny;
       const cx = Math.floor(key / (this.nz * this.ny));
-      for (let a = 0; a < items.length; a++) {
+      for (let a = first; a < end; a++) {
         const i = items[a];
         const oi = i * 6;
-        for (let b = a + 1; b < items.length; b++) {
+        for (let b = a + 1; b < end; b++) {
           const j = items[b];
           const oj = j * 6;
           // Box corners at offsets 0..2 (min x, y, z) and 3..5 (max x, y, z).
@@ -148,6 +163,8 @@ export class UniformGrid {
     const s = this.cellSize;
     const m = this.margin + margin;
     const c = this.corners;
+    const items = this.cellItems;
+    const starts = this.cellStart;
     const qMinX = query.minX;
     const qMinY = query.minY;
     const qMinZ = query.minZ;
@@ -163,9 +180,10 @@ export class UniformGrid {
     for (let x = x0; x <= x1; x++) {
       for (let y = y0; y <= y1; y++) {
         for (let z = z0; z <= z1; z++) {
-          const items = this.cells.get((x * this.ny + y) * this.nz + z);
-          if (!items) continue;
-          for (const i of items) {
+          const cell = this.cellSlot.get((x * this.ny + y) * this.nz + z);
+          if (cell === undefined) continue;
+          for (let k = starts[cell], end = starts[cell + 1]; k < end; k++) {
+            const i = items[k];
             if (this.stamps[i] === stamp) continue;
             this.stamps[i] = stamp;
             const o = i * 6;
@@ -226,28 +244,72 @@ export class UniformGrid {
     return nx * ny * nz;
   }
 
-  private insert(i: number): void {
+  /**
+   * Puts every box in the cells it covers. One pass over the boxes numbers the cells and notes each
+   * (cell, box) entry; a second over the entries writes each box into its cell's run of
+   * `cellItems`. Every table ends at its final length.
+   */
+  private fillCells(count: number): void {
     const s = this.cellSize;
     const m = this.margin;
     const c = this.corners;
-    const o = i * 6;
-    const x0 = this.cellIndex(c[o] - m, this.originX, s, this.nx);
-    const x1 = this.cellIndex(c[o + 3] + m, this.originX, s, this.nx);
-    const y0 = this.cellIndex(c[o + 1] - m, this.originY, s, this.ny);
-    const y1 = this.cellIndex(c[o + 4] + m, this.originY, s, this.ny);
-    const z0 = this.cellIndex(c[o + 2] - m, this.originZ, s, this.nz);
-    const z1 = this.cellIndex(c[o + 5] + m, this.originZ, s, this.nz);
-    for (let x = x0; x <= x1; x++) {
-      for (let y = y0; y <= y1; y++) {
-        for (let z = z0; z <= z1; z++) {
-          const key = (x * this.ny + y) * this.nz + z;
-          const list = this.cells.get(key);
-          if (list) list.push(i);
-          else this.cells.set(key, [i]);
+    const slots = this.cellSlot;
+    let entryCell: Int32Array<ArrayBuffer> = new Int32Array(Math.max(64, count * 2));
+    let entryBox: Int32Array<ArrayBuffer> = new Int32Array(entryCell.length);
+    let sizes: Int32Array<ArrayBuffer> = new Int32Array(64);
+    let keys: Int32Array<ArrayBuffer> = new Int32Array(64);
+    let cellCount = 0;
+    let e = 0;
+    for (let i = 0; i < count; i++) {
+      const o = i * 6;
+      const x0 = this.cellIndex(c[o] - m, this.originX, s, this.nx);
+      const x1 = this.cellIndex(c[o + 3] + m, this.originX, s, this.nx);
+      const y0 = this.cellIndex(c[o + 1] - m, this.originY, s, this.ny);
+      const y1 = this.cellIndex(c[o + 4] + m, this.originY, s, this.ny);
+      const z0 = this.cellIndex(c[o + 2] - m, this.originZ, s, this.nz);
+      const z1 = this.cellIndex(c[o + 5] + m, this.originZ, s, this.nz);
+      for (let x = x0; x <= x1; x++) {
+        for (let y = y0; y <= y1; y++) {
+          for (let z = z0; z <= z1; z++) {
+            const key = (x * this.ny + y) * this.nz + z;
+            let cell = slots.get(key);
+            if (cell === undefined) {
+              cell = cellCount++;
+              if (cell === sizes.length) {
+                sizes = grown(sizes);
+                keys = grown(keys);
+              }
+              keys[cell] = key;
+              slots.set(key, cell);
+            }
+            sizes[cell] += 1;
+            if (e === entryCell.length) {
+              entryCell = grown(entryCell);
+              entryBox = grown(entryBox);
+            }
+            entryCell[e] = cell;
+            entryBox[e] = i;
+            e++;
+          }
         }
       }
     }
+    const start = new Int32Array(cellCount + 1);
+    for (let cell = 0; cell < cellCount; cell++) start[cell + 1] = start[cell] + sizes[cell];
+    const next = start.slice(0, cellCount);
+    const items = new Int32Array(e);
+    for (let k = 0; k < e; k++) items[next[entryCell[k]]++] = entryBox[k];
+    this.cellKeys = keys.slice(0, cellCount);
+    this.cellStart = start;
+    this.cellItems = items;
   }
+}
+
+/** A copy of `list` twice as long (the new half zero). */
+function grown(list: Int32Array<ArrayBuffer>): Int32Array<ArrayBuffer> {
+  const bigger = new Int32Array(list.length * 2);
+  bigger.set(list);
+  return bigger;
 }
 
 /** Box `i` of a corner table (six numbers per box, as the grid keeps them) as a new box object. */
