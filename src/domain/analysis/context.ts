@@ -214,7 +214,8 @@ export interface AnalysisContext {
 }
 
 export function buildAnalysisContext(design: DesignDocument, catalogue: CatalogueIndex): AnalysisContext {
-  const profiles: ProfileInfo[] = [];
+  // Made at its final length (a list grown by push is copied each time it fills).
+  const profiles = new Array<ProfileInfo>(design.profiles.length);
   const profileById = new Map<string, ProfileInfo>();
   // Frames repeat a few directions and rolls, so profiles share one (read-only) SectionAxes per pair.
   const orientations = new OrientationCache();
@@ -233,7 +234,7 @@ export function buildAnalysisContext(design: DesignDocument, catalogue: Catalogu
     const endPoint = pointAlongProfile(profile, profile.length);
     profileBoundsInto(profile.start, endPoint, width, height, axes, corners, i * 6);
     const info = new ProfileRecord(i, profile, variant, system, width, height, axes, endPoint, corners, jointTables);
-    profiles.push(info);
+    profiles[i] = info;
     profileById.set(profile.id, info);
   }
 
@@ -327,11 +328,15 @@ export function accessoryInfo(ctx: AnalysisContext, accessoryIndex: number): Pro
 function panelInfo(index: number, design: DesignDocument, catalogue: CatalogueIndex, profileById: Map<string, ProfileInfo>): PanelInfo {
   const panel = design.panels[index];
   const material = catalogue.panelMaterials.get(panel.materialId);
-  const bounding: ProfileInfo[] = [];
-  for (const id of panel.boundedBy ?? []) {
-    const p = profileById.get(id);
-    if (p) bounding.push(p);
+  // At its final length when every id resolves (as they do in a valid design).
+  const ids = panel.boundedBy ?? NONE;
+  let bounding = new Array<ProfileInfo>(ids.length);
+  let resolved = 0;
+  for (let k = 0; k < ids.length; k++) {
+    const p = profileById.get(ids[k]);
+    if (p) bounding[resolved++] = p;
   }
+  if (resolved < ids.length) bounding = bounding.slice(0, resolved);
   let slotOpening: number | null = null;
   let engagement = 0;
   if (panel.mounting === 'captured') {
