@@ -144,8 +144,16 @@ export function planVariant(variantId: string, systemId: string, cuts: StockCut[
   // One sort of the cuts for every bar length tried (the order needs finite lengths).
   const sortedCuts = rest.every((cut) => Number.isFinite(cut.length)) ? sortCutsForPacking(rest) : undefined;
   let best: { plan: ReturnType<typeof planStock>; bars: { length: number; cost: number }[]; cost: number } | null = null;
+  // Every bar is bought at a length no dearer than the plan's own, so no bar costs less than the
+  // cheapest length on offer: a plan for another bar length costs at least its fewest possible bars
+  // at that price (plus its unplaceable cuts). When that bound already loses to the best plan, the
+  // plan could never be chosen and is not made.
+  // (Only with prices that are numbers of at least 0, where more bars never cost less.)
+  let cheapestBar = Infinity;
+  for (const o of options) cheapestBar = o.cost >= 0 && cheapestBar >= 0 ? Math.min(cheapestBar, o.cost) : Number.NaN;
   for (const option of options) {
     if (option.length - trim <= 0) continue;
+    if (best && cheapestBar >= 0 && planCostFloor(rest, option.length - trim, settings.kerf, cheapestBar) > best.cost + COST_MARGIN) continue;
     const plan = planStock({ cuts: rest, stockLength: option.length, kerf: settings.kerf, endTrim: trim, minReusableOffcut: settings.minReusableOffcut, sortedCuts });
     // Each bar bought in the cheapest length that still holds its cuts.
     const bars = plan.bars.map((bar) => {
@@ -177,6 +185,28 @@ export function planVariant(variantId: string, systemId: string, cuts: StockCut[
     cost: round(bars.reduce((s, b) => s + b.cost, 0)),
     costLowerBound: round(Number.isFinite(cheapestPerMm) ? need * cheapestPerMm : 0),
   };
+}
+
+/** Slack when a cost bound is compared with a summed cost (the sums add thousands of prices). */
+const COST_MARGIN = 1e-3;
+
+/**
+ * No plan of `cuts` into bars of `usable` mm costs less than this: the fewest bars that can hold the
+ * cuts that fit (each cut takes its length plus a kerf of the usable length plus one kerf, as in
+ * `planStock`'s lower bound, with the packing's length tolerance allowed per bar) at `barCost`
+ * each, plus the penalty per cut too long for the bar.
+ */
+function planCostFloor(cuts: readonly StockCut[], usable: number, kerf: number, barCost: number): number {
+  const k = Math.max(0, kerf);
+  let total = 0;
+  let unplaceable = 0;
+  for (let c = 0; c < cuts.length; c++) {
+    const length = cuts[c].length;
+    if (Number.isFinite(length) && length > 0 && length <= usable + TOLERANCE) total += length + k;
+    else unplaceable++;
+  }
+  const bars = total > 0 ? Math.ceil(total / (usable + k + 2 * TOLERANCE) - 1e-6) : 0;
+  return bars * barCost + unplaceable * 1e9;
 }
 
 function round(v: number): number {
