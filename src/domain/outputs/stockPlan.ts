@@ -118,67 +118,6 @@ function byLengthDescending(a: StockCut, b: StockCut): number {
   return b.length - a.length || (a.id < b.id ? -1 : a.id > b.id ? 1 : 0);
 }
 
-/**
- * Each placeable cut's place in the packing order (`sortedCuts`), with cuts the order ties (same
- * length and id) sharing one number: sorting a bar by these numbers, keeping the order of equal
- * ones, gives what the stable sort by `byLengthDescending` gives, without comparing ids again.
- */
-function packingRanks(problem: PackingProblem): Map<StockCut, number> {
-  const sorted = sortedCuts(problem);
-  // The order ties two neighbours exactly when they have the same length and id (the lengths here are finite).
-  const rankAt = new Int32Array(sorted.length);
-  for (let i = 1; i < sorted.length; i++) {
-    const a = sorted[i - 1];
-    const b = sorted[i];
-    rankAt[i] = a.length === b.length && a.id === b.id ? rankAt[i - 1] : i;
-  }
-  // Set from the end, so a cut listed twice keeps its first place (one map write per cut).
-  const ranks = new Map<StockCut, number>();
-  for (let i = sorted.length - 1; i >= 0; i--) ranks.set(sorted[i], rankAt[i]);
-  return ranks;
-}
-
-/**
- * Sorts a bar's cuts in place, longest first (ties by id), keeping the order of equal ones as the
- * stable built-in sort would: by packing rank, or by the comparison for a cut without one. A bar
- * holds a handful of cuts; insertion sort makes no work copy.
- */
-function sortBarCuts(cuts: StockCut[], ranks: Map<StockCut, number>): StockCut[] {
-  const keys = new Array<number>(cuts.length);
-  for (let i = 0; i < cuts.length; i++) {
-    const rank = ranks.get(cuts[i]);
-    if (rank === undefined) return insertionSort(cuts, byLengthDescending);
-    keys[i] = rank;
-  }
-  for (let i = 1; i < cuts.length; i++) {
-    const cut = cuts[i];
-    const key = keys[i];
-    let j = i - 1;
-    while (j >= 0 && keys[j] > key) {
-      cuts[j + 1] = cuts[j];
-      keys[j + 1] = keys[j];
-      j--;
-    }
-    cuts[j + 1] = cut;
-    keys[j + 1] = key;
-  }
-  return cuts;
-}
-
-/** Stable in-place insertion sort (as the built-in sort orders, without its work copy). */
-function insertionSort<T>(list: T[], compare: (a: T, b: T) => number): T[] {
-  for (let i = 1; i < list.length; i++) {
-    const item = list[i];
-    let j = i - 1;
-    while (j >= 0 && compare(list[j], item) > 0) {
-      list[j + 1] = list[j];
-      j--;
-    }
-    list[j + 1] = item;
-  }
-  return list;
-}
-
 /** Removes `list[position]`, shifting the rest down (as `splice(position, 1)`, without the removed-items array it returns). */
 function removeAt(list: number[], position: number): void {
   for (let k = position + 1; k < list.length; k++) list[k - 1] = list[k];
@@ -193,10 +132,14 @@ function insertAt(list: number[], position: number, value: number): void {
   list[position] = value;
 }
 
+/**
+ * Bars from groups of cuts. Each group must already list its cuts as the stable sort by
+ * `byLengthDescending` would (longest first, ties by id, equal cuts in the group's order): every
+ * packing here fills its bars in packing order, and `patternsToGroups` lays its pattern bars out
+ * that way, so no bar is sorted here (that took a map from cut to rank, 8,000 entries a plan).
+ */
 function toStockBars(groups: StockCut[][], problem: PackingProblem, minReusableOffcut: number): StockBar[] {
-  const ranks = packingRanks(problem);
-  return groups.map((cuts, index) => {
-    const sorted = sortBarCuts(cuts.slice(), ranks);
+  return groups.map((sorted, index) => {
     const consumed = sorted.reduce((sum, cut) => sum + cut.length + problem.kerf, 0);
     const usedLength = Math.min(problem.usable, consumed);
     const offcut = Math.max(0, problem.usable - consumed);
@@ -390,11 +333,25 @@ function longestOf(cuts: readonly StockCut[]): number {
 /** Turns patterns into bars of real cuts; cuts the patterns leave over are packed by first fit decreasing. */
 function patternsToGroups(patterns: number[][], types: CuttingTypes, problem: PackingProblem, enoughBars = 0): StockCut[][] {
   const queues = types.cutsByType.map((cuts) => [...cuts]);
+  // Each bar takes the last `count` cuts of a length's queue (in packing order), and lists them in
+  // the order a stable sort by packing order gives the cuts as taken from the end: in queue order,
+  // except that a run of cuts the order ties (same length and id) stays last-taken first.
   const groups = patterns.map((pattern) => {
     const group: StockCut[] = [];
-    pattern.forEach((count, type) => {
-      for (let k = 0; k < count; k++) group.push(queues[type].pop()!);
-    });
+    for (let type = 0; type < pattern.length; type++) {
+      const count = pattern[type];
+      if (!(count > 0)) continue;
+      const queue = queues[type];
+      const from = queue.length - count;
+      let k = from;
+      while (k < queue.length) {
+        let end = k + 1;
+        while (end < queue.length && queue[end].length === queue[k].length && queue[end].id === queue[k].id) end++;
+        for (let t = end - 1; t >= k; t--) group.push(queue[t]);
+        k = end;
+      }
+      while (queue.length > from) queue.pop();
+    }
     return group;
   });
   const leftover = queues.flat();
