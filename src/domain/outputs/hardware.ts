@@ -5,7 +5,7 @@
  * Shared by the BOM, tools, mass and cost; one pass, no per-screw objects.
  */
 import type { BomCategory } from '../analysis/types';
-import { jointRecipe, type JointRecipeItem } from '../design/jointHardware';
+import { jointRecipe } from '../design/jointHardware';
 import { accessoryInfo, memberInfo, memberPoint, type AnalysisContext } from '../analysis/context';
 import { pointAlongProfile } from '../geometry/profileGeometry';
 import type { Vec3 } from '../geometry/vectors';
@@ -48,6 +48,19 @@ interface PartLike {
   price: number;
 }
 
+/**
+ * One part as a recipe lists it, resolved once: the line it adds to (found by the part, as the
+ * first use made it), the category its mass counts under and that category's sums (made on the
+ * first use with a mass, so the categories keep the order of their first mass).
+ */
+interface ResolvedItem {
+  line: HardwareLine;
+  category: BomCategory;
+  unitMass: number;
+  perConnector: number;
+  sum: Float64Array | null;
+}
+
 export function hardwareSummary(ctx: AnalysisContext): HardwareSummary {
   const lines = new Map<string, HardwareLine>();
   // Mass sums per category in typed arrays (kg, Σ kg·x, Σ kg·y, Σ kg·z, unplaced kg): adding to a
@@ -56,7 +69,8 @@ export function hardwareSummary(ctx: AnalysisContext): HardwareSummary {
   const cat = ctx.catalogue;
 
   const lineByPart = new Map<PartLike, HardwareLine>();
-  const add = (category: BomCategory, part: PartLike, unit: 'pcs' | 'm', quantity: number, sourceId: string, at: Vec3 | null) => {
+  /** The line for a part, made on its first use (one line per part, whatever the later category). */
+  const lineFor = (category: BomCategory, part: PartLike, unit: 'pcs' | 'm'): HardwareLine => {
     let line = lineByPart.get(part);
     if (!line) {
       const key = `${category}|${part.id}`;
@@ -67,15 +81,17 @@ export function hardwareSummary(ctx: AnalysisContext): HardwareSummary {
       }
       lineByPart.set(part, line);
     }
-    line.quantity += quantity;
-    if (line.sourceIds[line.sourceIds.length - 1] !== sourceId) line.sourceIds.push(sourceId);
-    const kg = quantity * part.unitMass;
-    if (!(kg > 0)) return;
+    return line;
+  };
+  const sumFor = (category: BomCategory): Float64Array => {
     let m = sums.get(category);
     if (!m) {
       m = new Float64Array(5);
       sums.set(category, m);
     }
+    return m;
+  };
+  const addMass = (m: Float64Array, kg: number, at: Vec3 | null) => {
     if (at) {
       m[0] += kg;
       m[1] += kg * at[0];
@@ -83,33 +99,64 @@ export function hardwareSummary(ctx: AnalysisContext): HardwareSummary {
       m[3] += kg * at[2];
     } else m[4] += kg;
   };
+  const add = (category: BomCategory, part: PartLike, unit: 'pcs' | 'm', quantity: number, sourceId: string, at: Vec3 | null) => {
+    const line = lineFor(category, part, unit);
+    line.quantity += quantity;
+    if (line.sourceIds[line.sourceIds.length - 1] !== sourceId) line.sourceIds.push(sourceId);
+    const kg = quantity * part.unitMass;
+    if (kg > 0) addMass(sumFor(category), kg, at);
+  };
 
   // Joints with the same connector, screw head, T-nut and host system use the same parts: resolve once.
-  // Keyed connector → screw head → T-nut → host system in nested maps: no key string per joint.
-  const recipes = new Map<unknown, Map<unknown, Map<unknown, Map<string, JointRecipeItem[]>>>>();
+  // Keyed connector → screw head → T-nut → host system in nested maps: no key string per joint; a
+  // joint like the one before it (the usual case) reuses its recipe without a look-up.
+  const recipes = new Map<unknown, Map<unknown, Map<unknown, Map<string, ResolvedItem[]>>>>();
   const joints = ctx.design.joints;
+  let lastConnector: unknown = undefined;
+  let lastHead: unknown = undefined;
+  let lastNut: unknown = undefined;
+  let lastSystem: string | undefined = undefined;
+  let recipe: ResolvedItem[] | undefined = undefined;
   for (let j = 0; j < joints.length; j++) {
     const joint = joints[j];
     const first = memberInfo(ctx, j, 0);
     const host = memberInfo(ctx, j, 1) ?? first;
     const hostSystem = host?.variant?.systemId ?? ctx.design.systemId;
-    let byHead = recipes.get(joint.connectorId);
-    if (!byHead) recipes.set(joint.connectorId, (byHead = new Map()));
-    let byNut = byHead.get(joint.fastenerHead);
-    if (!byNut) byHead.set(joint.fastenerHead, (byNut = new Map()));
-    let bySystem = byNut.get(joint.tNut);
-    if (!bySystem) byNut.set(joint.tNut, (bySystem = new Map()));
-    let recipe = bySystem.get(hostSystem);
-    if (!recipe) {
-      recipe = jointRecipe(cat.catalogue, joint, hostSystem);
-      bySystem.set(hostSystem, recipe);
+    if (recipe === undefined || joint.connectorId !== lastConnector || joint.fastenerHead !== lastHead || joint.tNut !== lastNut || hostSystem !== lastSystem) {
+      let byHead = recipes.get(joint.connectorId);
+      if (!byHead) recipes.set(joint.connectorId, (byHead = new Map()));
+      let byNut = byHead.get(joint.fastenerHead);
+      if (!byNut) byHead.set(joint.fastenerHead, (byNut = new Map()));
+      let bySystem = byNut.get(joint.tNut);
+      if (!bySystem) byNut.set(joint.tNut, (bySystem = new Map()));
+      recipe = bySystem.get(hostSystem);
+      if (!recipe) {
+        recipe = jointRecipe(cat.catalogue, joint, hostSystem).map((r) => ({ line: lineFor(r.category, r.part, 'pcs'), category: r.category, unitMass: r.part.unitMass, perConnector: r.perConnector, sum: null }));
+        bySystem.set(hostSystem, recipe);
+      }
+      lastConnector = joint.connectorId;
+      lastHead = joint.fastenerHead;
+      lastNut = joint.tNut;
+      lastSystem = hostSystem;
     }
     if (recipe.length === 0) continue;
     const at = first ? memberPoint(first, joint.members[0]) : null;
-    for (const r of recipe) add(r.category, r.part, 'pcs', r.perConnector * joint.quantity, joint.id, at);
+    const sourceId = joint.id;
+    for (let r = 0; r < recipe.length; r++) {
+      const item = recipe[r];
+      const line = item.line;
+      const quantity = item.perConnector * joint.quantity;
+      line.quantity += quantity;
+      const ids = line.sourceIds;
+      if (ids[ids.length - 1] !== sourceId) ids.push(sourceId);
+      const kg = quantity * item.unitMass;
+      if (kg > 0) addMass(item.sum ?? (item.sum = sumFor(item.category)), kg, at);
+    }
   }
 
   const accessories = ctx.design.accessories;
+  // The T-nut an accessory part mounts with, looked up once per part (the look-up key is a string).
+  const nutByPart = new Map<PartLike, PartLike | undefined>();
   for (let a = 0; a < accessories.length; a++) {
     const acc = accessories[a];
     const part = cat.accessories.get(acc.partId);
@@ -121,12 +168,17 @@ export function hardwareSummary(ctx: AnalysisContext): HardwareSummary {
     } else {
       add(category, part, 'pcs', acc.quantity, acc.id, at);
     }
-    for (const use of part.fasteners ?? []) {
-      const f = cat.fasteners.get(use.fastenerId);
-      if (f) add('fastener', f, 'pcs', use.quantity * acc.quantity, acc.id, at);
+    const fasteners = part.fasteners;
+    if (fasteners) {
+      for (let u = 0; u < fasteners.length; u++) {
+        const use = fasteners[u];
+        const f = cat.fasteners.get(use.fastenerId);
+        if (f) add('fastener', f, 'pcs', use.quantity * acc.quantity, acc.id, at);
+      }
     }
     if ((part.tNutCount ?? 0) > 0) {
-      const nut = cat.tNutsBySystemKind.get(`${part.systemIds[0]}|drop-in`);
+      let nut = nutByPart.get(part);
+      if (nut === undefined && !nutByPart.has(part)) nutByPart.set(part, (nut = cat.tNutsBySystemKind.get(`${part.systemIds[0]}|drop-in`)));
       if (nut) add('t-nut', nut, 'pcs', (part.tNutCount ?? 0) * acc.quantity, acc.id, at);
     }
   }
