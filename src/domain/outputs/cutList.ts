@@ -27,11 +27,39 @@ export function cutList(ctx: AnalysisContext): { items: CutListItem[]; groups: C
   const keyHeads: Nested<string> = new Map();
   const keyParts: Nested<string> = new Map();
   const threads = new Map<ProfileInfo['system'], string | undefined>();
-  for (const info of ctx.profiles) {
-    let thread = threads.get(info.system);
-    if (thread === undefined && !threads.has(info.system)) threads.set(info.system, (thread = tapThread(info)));
-    const ends = { start: endTreatment(info, 'start', thread, treatments), end: endTreatment(info, 'end', thread, treatments) };
-    const machining = info.profile.machining.length === 0 ? [] : machiningOperations(info, thread);
+  // The ends of a piece depend on its system's tap thread, the word for its start end (which
+  // fixes the word for the other) and the two end kinds: one table of shared, read-only `ends`
+  // per system and start word, indexed by the two kinds, so a piece costs one map look-up here.
+  const endsTables = new Map<ProfileInfo['system'], Map<string, (Ends | undefined)[]>>();
+  const otherEndWord = new Map<string, string>();
+  const tapDescriptions = new Map<string, Map<string, string>>();
+  let lastSystem: ProfileInfo['system'] | null = null;
+  let thread: string | undefined;
+  let tables: Map<string, (Ends | undefined)[]> = new Map();
+  const profiles = ctx.profiles;
+  for (let p = 0; p < profiles.length; p++) {
+    const info = profiles[p];
+    if (info.system !== lastSystem || lastSystem === null) {
+      thread = threads.get(info.system);
+      if (thread === undefined && !threads.has(info.system)) threads.set(info.system, (thread = tapThread(info)));
+      let known = endsTables.get(info.system);
+      if (!known) endsTables.set(info.system, (known = new Map()));
+      tables = known;
+      lastSystem = info.system;
+    }
+    const startWord = endWord(info, 'start');
+    let table = tables.get(startWord);
+    if (!table) tables.set(startWord, (table = []));
+    const startKind = endKind(info, 'start', info.startAccessories);
+    const endKindOf = endKind(info, 'end', info.endAccessories);
+    const slot = END_KIND_INDEX[startKind] * END_KIND_COUNT + END_KIND_INDEX[endKindOf];
+    let ends = table[slot];
+    if (!ends) {
+      // Made as before, from the shared end treatments, on the first piece of each kind.
+      ends = { start: endTreatment(info, 'start', thread, treatments), end: endTreatment(info, 'end', thread, treatments) };
+      table[slot] = ends;
+    }
+    const machining = info.profile.machining.length === 0 ? [] : machiningOperations(info, thread, startWord, otherEndWord, tapDescriptions);
     const { variantId, length } = info.profile;
     const head = cachedHead(keyHeads, variantId, length, ends.start.kind, ends.end.kind);
     let groupKey = head;
@@ -67,21 +95,46 @@ export function cutList(ctx: AnalysisContext): { items: CutListItem[]; groups: C
   return { items, groups: sortedGroups };
 }
 
-function machiningOperations(info: ProfileInfo, thread: string | undefined): CutMachiningOperation[] {
-  return info.profile.machining
-    .map((m): CutMachiningOperation => ({
-      id: m.id,
-      kind: m.kind,
-      fromEnd: m.fromEnd,
-      offset: m.offset,
-      face: m.face,
-      diameter: m.diameter ?? null,
-      description:
-        m.kind === 'end-tap'
-          ? `${MACHINING_NAMES[m.kind]}${thread ? ` ${thread}` : ''} in the ${endWord(info, m.fromEnd)} end`
-          : `${MACHINING_NAMES[m.kind]}${m.diameter ? ` Ø ${formatNumber(m.diameter)} mm` : ''} on face ${m.face}, ${formatNumber(m.offset)} mm from the ${endWord(info, m.fromEnd)} end`,
-    }))
-    .sort((a, b) => (a.fromEnd === b.fromEnd ? a.offset - b.offset : a.fromEnd === 'start' ? -1 : 1));
+type Ends = CutListItem['ends'];
+
+const END_KIND_INDEX: Record<EndTreatment['kind'], number> = { plain: 0, tap: 1, cap: 2, foot: 3, caster: 4 };
+const END_KIND_COUNT = 5;
+
+/**
+ * The piece's machining, from its start end. An end tap's description (the same for every piece
+ * with the same thread and end word: the legs of a frame) is made once; `startWord` is the word
+ * for the piece's start end and `otherEndWord` remembers the word for the other end.
+ */
+function machiningOperations(
+  info: ProfileInfo,
+  thread: string | undefined,
+  startWord: string,
+  otherEndWord: Map<string, string>,
+  tapDescriptions: Map<string, Map<string, string>>,
+): CutMachiningOperation[] {
+  const list = info.profile.machining;
+  const out = new Array<CutMachiningOperation>(list.length);
+  for (let k = 0; k < list.length; k++) {
+    const m = list[k];
+    let word = startWord;
+    if (m.fromEnd !== 'start') {
+      const known = otherEndWord.get(startWord);
+      if (known === undefined) otherEndWord.set(startWord, (word = endWord(info, m.fromEnd)));
+      else word = known;
+    }
+    let description: string;
+    if (m.kind === 'end-tap') {
+      let byWord = tapDescriptions.get(thread ?? '');
+      if (!byWord) tapDescriptions.set(thread ?? '', (byWord = new Map()));
+      const made = byWord.get(word);
+      if (made === undefined) byWord.set(word, (description = `${MACHINING_NAMES[m.kind]}${thread ? ` ${thread}` : ''} in the ${word} end`));
+      else description = made;
+    } else {
+      description = `${MACHINING_NAMES[m.kind]}${m.diameter ? ` Ø ${formatNumber(m.diameter)} mm` : ''} on face ${m.face}, ${formatNumber(m.offset)} mm from the ${word} end`;
+    }
+    out[k] = { id: m.id, kind: m.kind, fromEnd: m.fromEnd, offset: m.offset, face: m.face, diameter: m.diameter ?? null, description };
+  }
+  return out.length > 1 ? out.sort((a, b) => (a.fromEnd === b.fromEnd ? a.offset - b.offset : a.fromEnd === 'start' ? -1 : 1)) : out;
 }
 
 function tapThread(info: ProfileInfo): string | undefined {
