@@ -54,11 +54,23 @@ interface PartLike {
  * first use with a mass, so the categories keep the order of their first mass).
  */
 interface ResolvedItem {
-  line: HardwareLine;
+  target: JointLine;
   category: BomCategory;
   unitMass: number;
   perConnector: number;
   sum: Float64Array | null;
+}
+
+/**
+ * A line that joints add to, with room for its joints' source ids: at most one per joint whose
+ * recipe lists it (`size`, counted before any id is written), `filled` of them written so far. The
+ * list is made at that length once, not grown id by id (three lists of about 10,700 ids at 8,000
+ * profiles, copied several times over as they grew).
+ */
+interface JointLine {
+  line: HardwareLine;
+  size: number;
+  filled: number;
 }
 
 export function hardwareSummary(ctx: AnalysisContext): HardwareSummary {
@@ -109,50 +121,79 @@ export function hardwareSummary(ctx: AnalysisContext): HardwareSummary {
 
   // Joints with the same connector, screw head, T-nut and host system use the same parts: resolve once.
   // Keyed connector → screw head → T-nut → host system in nested maps: no key string per joint; a
-  // joint like the one before it (the usual case) reuses its recipe without a look-up.
-  const recipes = new Map<unknown, Map<unknown, Map<unknown, Map<string, ResolvedItem[]>>>>();
+  // joint like the one before it (the usual case) reuses its recipe without a look-up. First pass:
+  // each joint's recipe (`recipeOf`, an index into `recipeList`) and how many joints use it.
+  const recipes = new Map<unknown, Map<unknown, Map<unknown, Map<string, number>>>>();
+  const recipeList: ResolvedItem[][] = [];
+  const recipeUses: number[] = [];
+  const jointLines = new Map<HardwareLine, JointLine>();
+  const targetFor = (line: HardwareLine): JointLine => {
+    let target = jointLines.get(line);
+    if (!target) jointLines.set(line, (target = { line, size: 0, filled: 0 }));
+    return target;
+  };
   const joints = ctx.design.joints;
+  const recipeOf = new Int32Array(joints.length);
   let lastConnector: unknown = undefined;
   let lastHead: unknown = undefined;
   let lastNut: unknown = undefined;
   let lastSystem: string | undefined = undefined;
-  let recipe: ResolvedItem[] | undefined = undefined;
+  let recipe = -1;
   for (let j = 0; j < joints.length; j++) {
     const joint = joints[j];
-    const first = memberInfo(ctx, j, 0);
-    const host = memberInfo(ctx, j, 1) ?? first;
+    const host = memberInfo(ctx, j, 1) ?? memberInfo(ctx, j, 0);
     const hostSystem = host?.variant?.systemId ?? ctx.design.systemId;
-    if (recipe === undefined || joint.connectorId !== lastConnector || joint.fastenerHead !== lastHead || joint.tNut !== lastNut || hostSystem !== lastSystem) {
+    if (recipe < 0 || joint.connectorId !== lastConnector || joint.fastenerHead !== lastHead || joint.tNut !== lastNut || hostSystem !== lastSystem) {
       let byHead = recipes.get(joint.connectorId);
       if (!byHead) recipes.set(joint.connectorId, (byHead = new Map()));
       let byNut = byHead.get(joint.fastenerHead);
       if (!byNut) byHead.set(joint.fastenerHead, (byNut = new Map()));
       let bySystem = byNut.get(joint.tNut);
       if (!bySystem) byNut.set(joint.tNut, (bySystem = new Map()));
-      recipe = bySystem.get(hostSystem);
-      if (!recipe) {
-        recipe = jointRecipe(cat.catalogue, joint, hostSystem).map((r) => ({ line: lineFor(r.category, r.part, 'pcs'), category: r.category, unitMass: r.part.unitMass, perConnector: r.perConnector, sum: null }));
+      const known = bySystem.get(hostSystem);
+      if (known === undefined) {
+        // Lines made here, on the recipe's first joint: the order lines were always made in.
+        recipe = recipeList.length;
+        recipeList.push(
+          jointRecipe(cat.catalogue, joint, hostSystem).map((r) => ({ target: targetFor(lineFor(r.category, r.part, 'pcs')), category: r.category, unitMass: r.part.unitMass, perConnector: r.perConnector, sum: null })),
+        );
+        recipeUses.push(0);
         bySystem.set(hostSystem, recipe);
-      }
+      } else recipe = known;
       lastConnector = joint.connectorId;
       lastHead = joint.fastenerHead;
       lastNut = joint.tNut;
       lastSystem = hostSystem;
     }
-    if (recipe.length === 0) continue;
+    recipeOf[j] = recipe;
+    recipeUses[recipe]++;
+  }
+  for (let r = 0; r < recipeList.length; r++) for (const item of recipeList[r]) item.target.size += recipeUses[r];
+  for (const target of jointLines.values()) target.line.sourceIds = new Array<string>(target.size);
+
+  // Second pass: quantities, masses and source ids, joint by joint. A source id is written unless
+  // the line's last one is the same (a part listed twice in a recipe, or joints sharing an id).
+  for (let j = 0; j < joints.length; j++) {
+    const items = recipeList[recipeOf[j]];
+    if (items.length === 0) continue;
+    const joint = joints[j];
+    const first = memberInfo(ctx, j, 0);
     const at = first ? memberPoint(first, joint.members[0]) : null;
     const sourceId = joint.id;
-    for (let r = 0; r < recipe.length; r++) {
-      const item = recipe[r];
-      const line = item.line;
+    for (let r = 0; r < items.length; r++) {
+      const item = items[r];
+      const target = item.target;
+      const line = target.line;
       const quantity = item.perConnector * joint.quantity;
       line.quantity += quantity;
       const ids = line.sourceIds;
-      if (ids[ids.length - 1] !== sourceId) ids.push(sourceId);
+      if (target.filled === 0 || ids[target.filled - 1] !== sourceId) ids[target.filled++] = sourceId;
       const kg = quantity * item.unitMass;
       if (kg > 0) addMass(item.sum ?? (item.sum = sumFor(item.category)), kg, at);
     }
   }
+  // Fewer ids than room only where ids repeated.
+  for (const target of jointLines.values()) if (target.filled < target.size) target.line.sourceIds.length = target.filled;
 
   const accessories = ctx.design.accessories;
   // The T-nut an accessory part mounts with, looked up once per part (the look-up key is a string).
