@@ -15,9 +15,14 @@ export function billOfMaterials(ctx: AnalysisContext, hardware: HardwareSummary,
   const prices = ctx.catalogue.catalogue.prices;
 
   const profileLines = new Map<string, BomLine>();
-  for (const info of ctx.profiles) {
+  // Frames list many profiles of one variant in a row: the last line is reused without a look-up.
+  let lastId: string | undefined;
+  let lastLine: BomLine | undefined;
+  const profiles = ctx.profiles;
+  for (let p = 0; p < profiles.length; p++) {
+    const info = profiles[p];
     const id = info.profile.variantId;
-    let line = profileLines.get(id);
+    let line = id === lastId ? lastLine : profileLines.get(id);
     if (!line) {
       const v = info.variant;
       line = {
@@ -39,6 +44,8 @@ export function billOfMaterials(ctx: AnalysisContext, hardware: HardwareSummary,
     line.quantity += info.profile.length / 1000;
     line.pieces = (line.pieces ?? 0) + 1;
     line.partIds.push(info.profile.id);
+    lastId = id;
+    lastLine = line;
   }
 
   for (const h of hardware.lines) {
