@@ -18,7 +18,7 @@ const MACHINING_NAMES: Record<CutMachiningOperation['kind'], string> = {
 
 export function cutList(ctx: AnalysisContext): { items: CutListItem[]; groups: CutListGroup[] } {
   const tolerance = ctx.design.settings.cutTolerance;
-  const items: CutListItem[] = [];
+  const items = new Array<CutListItem>(ctx.profiles.length);
   const groups = new Map<string, CutListGroup>();
   // Frames repeat a few kinds of piece: end treatments (read-only, shared by the items and groups
   // that have them) and the group key's head are made once per kind, not once per profile.
@@ -59,12 +59,12 @@ export function cutList(ctx: AnalysisContext): { items: CutListItem[]; groups: C
       ends = { start: endTreatment(info, 'start', thread, treatments), end: endTreatment(info, 'end', thread, treatments) };
       table[slot] = ends;
     }
-    const machining = info.profile.machining.length === 0 ? [] : machiningOperations(info, thread, startWord, otherEndWord, tapDescriptions);
+    const machining = info.profile.machining.length === 0 ? NO_MACHINING : machiningOperations(info, thread, startWord, otherEndWord, tapDescriptions);
     const { variantId, length } = info.profile;
     const head = cachedHead(keyHeads, variantId, length, ends.start.kind, ends.end.kind);
     let groupKey = head;
     for (const m of machining) groupKey = cachedKeyPart(keyParts, groupKey, m);
-    items.push({
+    items[p] = {
       id: info.profile.id,
       label: info.profile.label ?? info.profile.id,
       variantId,
@@ -73,7 +73,7 @@ export function cutList(ctx: AnalysisContext): { items: CutListItem[]; groups: C
       ends,
       machining,
       groupKey,
-    });
+    };
     const group = groups.get(groupKey);
     if (group) {
       group.quantity += 1;
@@ -96,6 +96,9 @@ export function cutList(ctx: AnalysisContext): { items: CutListItem[]; groups: C
 }
 
 type Ends = CutListItem['ends'];
+
+/** Shared (never changed) machining list of the pieces without machining, most of a frame's. */
+const NO_MACHINING: CutMachiningOperation[] = [];
 
 const END_KIND_INDEX: Record<EndTreatment['kind'], number> = { plain: 0, tap: 1, cap: 2, foot: 3, caster: 4 };
 const END_KIND_COUNT = 5;
