@@ -30,12 +30,12 @@ export function cutList(ctx: AnalysisContext): { items: CutListItem[]; groups: C
   // The ends of a piece depend on its system's tap thread, the word for its start end (which
   // fixes the word for the other) and the two end kinds: one table of shared, read-only `ends`
   // per system and start word, indexed by the two kinds, so a piece costs one map look-up here.
-  const endsTables = new Map<ProfileInfo['system'], Map<string, (Ends | undefined)[]>>();
+  const endsTables = new Map<ProfileInfo['system'], Map<string, (EndsEntry | undefined)[]>>();
   const otherEndWord = new Map<string, string>();
   const tapDescriptions = new Map<string, Map<string, string>>();
   let lastSystem: ProfileInfo['system'] | null = null;
   let thread: string | undefined;
-  let tables: Map<string, (Ends | undefined)[]> = new Map();
+  let tables: Map<string, (EndsEntry | undefined)[]> = new Map();
   const profiles = ctx.profiles;
   for (let p = 0; p < profiles.length; p++) {
     const info = profiles[p];
@@ -50,18 +50,21 @@ export function cutList(ctx: AnalysisContext): { items: CutListItem[]; groups: C
     const startWord = endWord(info, 'start');
     let table = tables.get(startWord);
     if (!table) tables.set(startWord, (table = []));
-    const startKind = endKind(info, 'start', info.startAccessories);
-    const endKindOf = endKind(info, 'end', info.endAccessories);
-    const slot = END_KIND_INDEX[startKind] * END_KIND_COUNT + END_KIND_INDEX[endKindOf];
-    let ends = table[slot];
-    if (!ends) {
+    const slot = endKindIndex(info, 'start', info.startAccessories) * END_KINDS.length + endKindIndex(info, 'end', info.endAccessories);
+    let entry = table[slot];
+    if (!entry) {
       // Made as before, from the shared end treatments, on the first piece of each kind.
-      ends = { start: endTreatment(info, 'start', thread, treatments), end: endTreatment(info, 'end', thread, treatments) };
-      table[slot] = ends;
+      entry = { ends: { start: endTreatment(info, 'start', thread, treatments), end: endTreatment(info, 'end', thread, treatments) }, heads: new Map() };
+      table[slot] = entry;
     }
+    const ends = entry.ends;
     const machining = info.profile.machining.length === 0 ? NO_MACHINING : machiningOperations(info, thread, startWord, otherEndWord, tapDescriptions);
     const { variantId, length } = info.profile;
-    const head = cachedHead(keyHeads, variantId, length, ends.start.kind, ends.end.kind);
+    // The group key's head by variant and length under the piece's ends (two look-ups, not four).
+    let byLength = entry.heads.get(variantId);
+    if (!byLength) entry.heads.set(variantId, (byLength = new Map()));
+    let head = byLength.get(length);
+    if (head === undefined) byLength.set(length, (head = cachedHead(keyHeads, variantId, length, ends.start.kind, ends.end.kind)));
     let groupKey = head;
     for (const m of machining) groupKey = cachedKeyPart(keyParts, groupKey, m);
     items[p] = {
@@ -100,8 +103,14 @@ type Ends = CutListItem['ends'];
 /** Shared (never changed) machining list of the pieces without machining, most of a frame's. */
 const NO_MACHINING: CutMachiningOperation[] = [];
 
-const END_KIND_INDEX: Record<EndTreatment['kind'], number> = { plain: 0, tap: 1, cap: 2, foot: 3, caster: 4 };
-const END_KIND_COUNT = 5;
+/** Shared ends of one kind of piece, and its group keys' heads by variant and length. */
+interface EndsEntry {
+  ends: Ends;
+  heads: Map<string, Map<number, string>>;
+}
+
+/** The end kinds, numbered as `endKindIndex` gives them. */
+const END_KINDS: readonly EndTreatment['kind'][] = ['plain', 'tap', 'cap', 'foot', 'caster'];
 
 /**
  * The piece's machining, from its start end. An end tap's description (the same for every piece
@@ -202,13 +211,20 @@ function endTreatment(info: ProfileInfo, end: ProfileEnd, thread: string | undef
  * a plain cut. Loops rather than `find`/`some` with closures: this runs for every profile end.
  */
 function endKind(info: ProfileInfo, end: ProfileEnd, accessories: readonly { kind: string }[]): EndTreatment['kind'] {
-  for (const a of accessories) {
-    if (a.kind === 'caster') return 'caster';
-    if (a.kind === 'leveling-foot') return 'foot';
+  return END_KINDS[endKindIndex(info, end, accessories)];
+}
+
+/** `endKind` as its place in `END_KINDS` (a number, so the caller indexes a table without a keyed look-up). */
+function endKindIndex(info: ProfileInfo, end: ProfileEnd, accessories: readonly { kind: string }[]): number {
+  for (let k = 0; k < accessories.length; k++) {
+    const kind = accessories[k].kind;
+    if (kind === 'caster') return 4;
+    if (kind === 'leveling-foot') return 3;
   }
-  for (const m of info.profile.machining) if (m.kind === 'end-tap' && m.fromEnd === end) return 'tap';
-  for (const a of accessories) if (a.kind === 'end-cap') return 'cap';
-  return 'plain';
+  const machining = info.profile.machining;
+  for (let k = 0; k < machining.length; k++) if (machining[k].kind === 'end-tap' && machining[k].fromEnd === end) return 1;
+  for (let k = 0; k < accessories.length; k++) if (accessories[k].kind === 'end-cap') return 2;
+  return 0;
 }
 
 function describeEnd(kind: EndTreatment['kind'], word: string, thread: string | undefined): EndTreatment {
