@@ -338,4 +338,22 @@ describe('stock plans per profile system', () => {
     expect(v.costLowerBound!).toBeLessThanOrEqual(v.cost!);
     expect(v.costLowerBound!).toBeGreaterThan(0);
   });
+
+  it('still plans the shorter bar length when it can win: four 1,400 mm cuts in two 3 m bars (20) beat one 6 m bar (30)', () => {
+    // 6 m: 5,984 mm usable holds 4 × 1,400 + 3 × 3 = 5,609 mm, one bar at 30 (a 3 m bar cannot hold all four).
+    // 3 m: 2,984 mm usable holds two (2,803 mm), two bars at 10 = 20; the fewest bars there (⌈4 × 1,403 / 2,987⌉ = 2)
+    // at the cheapest price (10) is 20 < 30, so that plan is made and wins. Derived.
+    const v = planVariant('m40-40x40', 'metric-40', ['a', 'b', 'c', 'd'].map((id) => ({ id, length: 1400 })), {
+      bars: [
+        { length: 6000, cost: 30 },
+        { length: 3000, cost: 10 },
+      ],
+      kerf: 3,
+      trimStart: 5,
+      trimEnd: 5,
+      minReusableOffcut: 150,
+    });
+    expect(v.barStock!.map((b) => b.length)).toEqual([3000, 3000]);
+    expect(v.cost).toBe(20);
+  });
 });

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { boundedKnapsack, firstFitDecreasing, planStock, stockLowerBound, type StockCut, type StockPlan, type StockPlanInput } from '@/domain/outputs/stockPlan';
+import { boundedKnapsack, firstFitDecreasing, planStock, sortCutsForPacking, stockLowerBound, type StockCut, type StockPlan, type StockPlanInput } from '@/domain/outputs/stockPlan';
 
 function cutsOf(lengths: number[]): StockCut[] {
   return lengths.map((length, index) => ({ id: `c${index}`, length }));
@@ -229,5 +229,35 @@ describe('boundedKnapsack (the pricing step)', () => {
       ),
       { numRuns: 200 },
     );
+  });
+});
+
+describe('sortCutsForPacking', () => {
+  // The packing order is defined as the stable built-in sort, longest first and ties by id (the
+  // order's definition in stockPlan.ts); the reference below is that sort, so the two must agree
+  // cut for cut, including which of two equal cuts comes first.
+  const reference = (cuts: StockCut[]) => [...cuts].sort((a, b) => b.length - a.length || (a.id < b.id ? -1 : a.id > b.id ? 1 : 0));
+  const tagged = (cuts: StockCut[]) => cuts.map((cut) => (cut as StockCut & { tag: number }).tag);
+
+  it('gives the stable sort by length and id, for lists longest first or not (property)', () => {
+    const idPart = fc.constantFrom('a', 'b', 'A', '0', '-', '\0', 'é', 'ÿ', 'Ā', '中', '😀');
+    const id = fc.tuple(fc.constantFrom('', 'c', 'profile-with-a-long-shared-prefix-'), fc.array(idPart, { maxLength: 4 })).map(([head, tail]) => head + tail.join(''));
+    fc.assert(
+      fc.property(fc.array(fc.tuple(id, fc.constantFrom(600, 520, 320, 320.5)), { maxLength: 300 }), fc.boolean(), (spec, longestFirst) => {
+        const cuts = spec.map(([cutId, length], tag) => ({ id: cutId, length, tag }));
+        const input = longestFirst ? [...cuts].sort((a, b) => b.length - a.length) : cuts;
+        expect(tagged(sortCutsForPacking(input))).toEqual(tagged(reference(input)));
+      }),
+      { numRuns: 300 },
+    );
+  });
+
+  it('sorts thousands of cuts of one length by id as the stable sort does (generated frame ids)', () => {
+    // Legs as the bench's generated frames name them ("c12-L3", four per cell), cells out of order,
+    // with every 50th id repeated.
+    const cuts: StockCut[] = [];
+    for (let k = 0; k < 2800; k++) cuts.push({ id: `c${(k * 263) % 700}-L${1 + Math.floor(k / 700)}`, length: 600, label: String(k) });
+    for (let k = 0; k < 2800; k += 50) cuts.push({ id: cuts[k].id, length: 600, label: `again ${k}` });
+    expect(sortCutsForPacking(cuts).map((cut) => cut.label)).toEqual(reference(cuts).map((cut) => cut.label));
   });
 });

@@ -15,9 +15,14 @@ export function billOfMaterials(ctx: AnalysisContext, hardware: HardwareSummary,
   const prices = ctx.catalogue.catalogue.prices;
 
   const profileLines = new Map<string, BomLine>();
-  for (const info of ctx.profiles) {
+  // Frames list many profiles of one variant in a row: the last line is reused without a look-up.
+  let lastId: string | undefined;
+  let lastLine: BomLine | undefined;
+  const profiles = ctx.profiles;
+  for (let p = 0; p < profiles.length; p++) {
+    const info = profiles[p];
     const id = info.profile.variantId;
-    let line = profileLines.get(id);
+    let line = id === lastId ? lastLine : profileLines.get(id);
     if (!line) {
       const v = info.variant;
       line = {
@@ -39,6 +44,8 @@ export function billOfMaterials(ctx: AnalysisContext, hardware: HardwareSummary,
     line.quantity += info.profile.length / 1000;
     line.pieces = (line.pieces ?? 0) + 1;
     line.partIds.push(info.profile.id);
+    lastId = id;
+    lastLine = line;
   }
 
   for (const h of hardware.lines) {
@@ -56,12 +63,19 @@ export function billOfMaterials(ctx: AnalysisContext, hardware: HardwareSummary,
     });
   }
 
+  // Panels by material, thickness, size, notched corners and cut-out count, looked up level by
+  // level (the same grouping as a key string of the six, without a new string per panel). Their
+  // lines come after the profile and hardware lines, in the order first seen.
+  const panelLines: BomLine[] = [];
+  const byMaterial: PanelKeys = new Map();
   for (const s of sheets) {
     const p = s.info.panel;
     const w = round1(s.info.sheetWidth);
     const hgt = round1(s.info.sheetHeight);
-    const key = `panel|${p.materialId}|${p.thickness}|${w}|${hgt}|${s.notch.corners}|${p.cutouts.length}`;
-    let line = lines.get(key);
+    const last = level(level(level(level(byMaterial, p.materialId), p.thickness), w), hgt);
+    let byCutouts = last.get(s.notch.corners) as Map<number, BomLine> | undefined;
+    if (!byCutouts) last.set(s.notch.corners, (byCutouts = new Map()));
+    let line = byCutouts.get(p.cutouts.length);
     if (!line) {
       const name = s.info.material?.name ?? 'Sheet';
       line = {
@@ -76,13 +90,15 @@ export function billOfMaterials(ctx: AnalysisContext, hardware: HardwareSummary,
         lineMass: 0,
         partIds: [],
       };
-      lines.set(key, line);
+      byCutouts.set(p.cutouts.length, line);
+      panelLines.push(line);
     }
     line.quantity += 1;
     line.partIds.push(p.id);
   }
 
   const out = [...lines.values()];
+  for (const line of panelLines) out.push(line);
   for (const line of out) {
     line.quantity = line.unit === 'pcs' ? line.quantity : round3(line.quantity);
     line.unitMass = round4(line.unitMass);
@@ -92,6 +108,16 @@ export function billOfMaterials(ctx: AnalysisContext, hardware: HardwareSummary,
   return out.sort(
     (a, b) => CATEGORY_ORDER.indexOf(a.category) - CATEGORY_ORDER.indexOf(b.category) || (a.code < b.code ? -1 : a.code > b.code ? 1 : 0),
   );
+}
+
+/** Panel lines under material, thickness, width, height, notched corners, cut-out count. */
+type PanelKeys = Map<string | number, PanelKeys | Map<number, BomLine>>;
+
+/** The map under `key`, made on first use. */
+function level(node: PanelKeys, key: string | number): PanelKeys {
+  let next = node.get(key) as PanelKeys | undefined;
+  if (!next) node.set(key, (next = new Map()));
+  return next;
 }
 
 function round1(v: number): number {

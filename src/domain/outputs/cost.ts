@@ -47,8 +47,25 @@ export function costSummary(ctx: AnalysisContext, bom: BomLine[], sheets: PanelS
       linePrice: round2(ctx.profiles.length * prices.perCut),
     });
   }
+  // Counted in runs of one kind (a frame's legs each have an end tap), added to the map per run:
+  // the kinds keep the order they first appear in.
   const machiningCounts = new Map<string, number>();
-  for (const p of ctx.profiles) for (const m of p.profile.machining) machiningCounts.set(m.kind, (machiningCounts.get(m.kind) ?? 0) + 1);
+  let runKind: string | undefined;
+  let runCount = 0;
+  const profiles = ctx.profiles;
+  for (let p = 0; p < profiles.length; p++) {
+    const machining = profiles[p].profile.machining;
+    for (let k = 0; k < machining.length; k++) {
+      const kind = machining[k].kind;
+      if (kind === runKind) runCount++;
+      else {
+        if (runKind !== undefined) machiningCounts.set(runKind, (machiningCounts.get(runKind) ?? 0) + runCount);
+        runKind = kind;
+        runCount = 1;
+      }
+    }
+  }
+  if (runKind !== undefined) machiningCounts.set(runKind, (machiningCounts.get(runKind) ?? 0) + runCount);
   for (const [kind, count] of [...machiningCounts.entries()].sort()) {
     const unitPrice = prices.perMachining[kind as keyof typeof prices.perMachining] ?? 0;
     lines.push({

@@ -18,7 +18,7 @@ const MACHINING_NAMES: Record<CutMachiningOperation['kind'], string> = {
 
 export function cutList(ctx: AnalysisContext): { items: CutListItem[]; groups: CutListGroup[] } {
   const tolerance = ctx.design.settings.cutTolerance;
-  const items: CutListItem[] = [];
+  const items = new Array<CutListItem>(ctx.profiles.length);
   const groups = new Map<string, CutListGroup>();
   // Frames repeat a few kinds of piece: end treatments (read-only, shared by the items and groups
   // that have them) and the group key's head are made once per kind, not once per profile.
@@ -27,16 +27,47 @@ export function cutList(ctx: AnalysisContext): { items: CutListItem[]; groups: C
   const keyHeads: Nested<string> = new Map();
   const keyParts: Nested<string> = new Map();
   const threads = new Map<ProfileInfo['system'], string | undefined>();
-  for (const info of ctx.profiles) {
-    let thread = threads.get(info.system);
-    if (thread === undefined && !threads.has(info.system)) threads.set(info.system, (thread = tapThread(info)));
-    const ends = { start: endTreatment(info, 'start', thread, treatments), end: endTreatment(info, 'end', thread, treatments) };
-    const machining = info.profile.machining.length === 0 ? [] : machiningOperations(info, thread);
+  // The ends of a piece depend on its system's tap thread, the word for its start end (which
+  // fixes the word for the other) and the two end kinds: one table of shared, read-only `ends`
+  // per system and start word, indexed by the two kinds, so a piece costs one map look-up here.
+  const endsTables = new Map<ProfileInfo['system'], Map<string, (EndsEntry | undefined)[]>>();
+  const otherEndWord = new Map<string, string>();
+  const tapDescriptions = new Map<string, Map<string, string>>();
+  let lastSystem: ProfileInfo['system'] | null = null;
+  let thread: string | undefined;
+  let tables: Map<string, (EndsEntry | undefined)[]> = new Map();
+  const profiles = ctx.profiles;
+  for (let p = 0; p < profiles.length; p++) {
+    const info = profiles[p];
+    if (info.system !== lastSystem || lastSystem === null) {
+      thread = threads.get(info.system);
+      if (thread === undefined && !threads.has(info.system)) threads.set(info.system, (thread = tapThread(info)));
+      let known = endsTables.get(info.system);
+      if (!known) endsTables.set(info.system, (known = new Map()));
+      tables = known;
+      lastSystem = info.system;
+    }
+    const startWord = endWord(info, 'start');
+    let table = tables.get(startWord);
+    if (!table) tables.set(startWord, (table = []));
+    const slot = endKindIndex(info, 'start', info.startAccessories) * END_KINDS.length + endKindIndex(info, 'end', info.endAccessories);
+    let entry = table[slot];
+    if (!entry) {
+      // Made as before, from the shared end treatments, on the first piece of each kind.
+      entry = { ends: { start: endTreatment(info, 'start', thread, treatments), end: endTreatment(info, 'end', thread, treatments) }, heads: new Map() };
+      table[slot] = entry;
+    }
+    const ends = entry.ends;
+    const machining = info.profile.machining.length === 0 ? NO_MACHINING : machiningOperations(info, thread, startWord, otherEndWord, tapDescriptions);
     const { variantId, length } = info.profile;
-    const head = cachedHead(keyHeads, variantId, length, ends.start.kind, ends.end.kind);
+    // The group key's head by variant and length under the piece's ends (two look-ups, not four).
+    let byLength = entry.heads.get(variantId);
+    if (!byLength) entry.heads.set(variantId, (byLength = new Map()));
+    let head = byLength.get(length);
+    if (head === undefined) byLength.set(length, (head = cachedHead(keyHeads, variantId, length, ends.start.kind, ends.end.kind)));
     let groupKey = head;
     for (const m of machining) groupKey = cachedKeyPart(keyParts, groupKey, m);
-    items.push({
+    items[p] = {
       id: info.profile.id,
       label: info.profile.label ?? info.profile.id,
       variantId,
@@ -45,7 +76,7 @@ export function cutList(ctx: AnalysisContext): { items: CutListItem[]; groups: C
       ends,
       machining,
       groupKey,
-    });
+    };
     const group = groups.get(groupKey);
     if (group) {
       group.quantity += 1;
@@ -67,21 +98,55 @@ export function cutList(ctx: AnalysisContext): { items: CutListItem[]; groups: C
   return { items, groups: sortedGroups };
 }
 
-function machiningOperations(info: ProfileInfo, thread: string | undefined): CutMachiningOperation[] {
-  return info.profile.machining
-    .map((m): CutMachiningOperation => ({
-      id: m.id,
-      kind: m.kind,
-      fromEnd: m.fromEnd,
-      offset: m.offset,
-      face: m.face,
-      diameter: m.diameter ?? null,
-      description:
-        m.kind === 'end-tap'
-          ? `${MACHINING_NAMES[m.kind]}${thread ? ` ${thread}` : ''} in the ${endWord(info, m.fromEnd)} end`
-          : `${MACHINING_NAMES[m.kind]}${m.diameter ? ` Ø ${formatNumber(m.diameter)} mm` : ''} on face ${m.face}, ${formatNumber(m.offset)} mm from the ${endWord(info, m.fromEnd)} end`,
-    }))
-    .sort((a, b) => (a.fromEnd === b.fromEnd ? a.offset - b.offset : a.fromEnd === 'start' ? -1 : 1));
+type Ends = CutListItem['ends'];
+
+/** Shared (never changed) machining list of the pieces without machining, most of a frame's. */
+const NO_MACHINING: CutMachiningOperation[] = [];
+
+/** Shared ends of one kind of piece, and its group keys' heads by variant and length. */
+interface EndsEntry {
+  ends: Ends;
+  heads: Map<string, Map<number, string>>;
+}
+
+/** The end kinds, numbered as `endKindIndex` gives them. */
+const END_KINDS: readonly EndTreatment['kind'][] = ['plain', 'tap', 'cap', 'foot', 'caster'];
+
+/**
+ * The piece's machining, from its start end. An end tap's description (the same for every piece
+ * with the same thread and end word: the legs of a frame) is made once; `startWord` is the word
+ * for the piece's start end and `otherEndWord` remembers the word for the other end.
+ */
+function machiningOperations(
+  info: ProfileInfo,
+  thread: string | undefined,
+  startWord: string,
+  otherEndWord: Map<string, string>,
+  tapDescriptions: Map<string, Map<string, string>>,
+): CutMachiningOperation[] {
+  const list = info.profile.machining;
+  const out = new Array<CutMachiningOperation>(list.length);
+  for (let k = 0; k < list.length; k++) {
+    const m = list[k];
+    let word = startWord;
+    if (m.fromEnd !== 'start') {
+      const known = otherEndWord.get(startWord);
+      if (known === undefined) otherEndWord.set(startWord, (word = endWord(info, m.fromEnd)));
+      else word = known;
+    }
+    let description: string;
+    if (m.kind === 'end-tap') {
+      let byWord = tapDescriptions.get(thread ?? '');
+      if (!byWord) tapDescriptions.set(thread ?? '', (byWord = new Map()));
+      const made = byWord.get(word);
+      if (made === undefined) byWord.set(word, (description = `${MACHINING_NAMES[m.kind]}${thread ? ` ${thread}` : ''} in the ${word} end`));
+      else description = made;
+    } else {
+      description = `${MACHINING_NAMES[m.kind]}${m.diameter ? ` Ø ${formatNumber(m.diameter)} mm` : ''} on face ${m.face}, ${formatNumber(m.offset)} mm from the ${word} end`;
+    }
+    out[k] = { id: m.id, kind: m.kind, fromEnd: m.fromEnd, offset: m.offset, face: m.face, diameter: m.diameter ?? null, description };
+  }
+  return out.length > 1 ? out.sort((a, b) => (a.fromEnd === b.fromEnd ? a.offset - b.offset : a.fromEnd === 'start' ? -1 : 1)) : out;
 }
 
 function tapThread(info: ProfileInfo): string | undefined {
@@ -146,13 +211,20 @@ function endTreatment(info: ProfileInfo, end: ProfileEnd, thread: string | undef
  * a plain cut. Loops rather than `find`/`some` with closures: this runs for every profile end.
  */
 function endKind(info: ProfileInfo, end: ProfileEnd, accessories: readonly { kind: string }[]): EndTreatment['kind'] {
-  for (const a of accessories) {
-    if (a.kind === 'caster') return 'caster';
-    if (a.kind === 'leveling-foot') return 'foot';
+  return END_KINDS[endKindIndex(info, end, accessories)];
+}
+
+/** `endKind` as its place in `END_KINDS` (a number, so the caller indexes a table without a keyed look-up). */
+function endKindIndex(info: ProfileInfo, end: ProfileEnd, accessories: readonly { kind: string }[]): number {
+  for (let k = 0; k < accessories.length; k++) {
+    const kind = accessories[k].kind;
+    if (kind === 'caster') return 4;
+    if (kind === 'leveling-foot') return 3;
   }
-  for (const m of info.profile.machining) if (m.kind === 'end-tap' && m.fromEnd === end) return 'tap';
-  for (const a of accessories) if (a.kind === 'end-cap') return 'cap';
-  return 'plain';
+  const machining = info.profile.machining;
+  for (let k = 0; k < machining.length; k++) if (machining[k].kind === 'end-tap' && machining[k].fromEnd === end) return 1;
+  for (let k = 0; k < accessories.length; k++) if (accessories[k].kind === 'end-cap') return 2;
+  return 0;
 }
 
 function describeEnd(kind: EndTreatment['kind'], word: string, thread: string | undefined): EndTreatment {

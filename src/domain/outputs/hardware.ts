@@ -5,7 +5,7 @@
  * Shared by the BOM, tools, mass and cost; one pass, no per-screw objects.
  */
 import type { BomCategory } from '../analysis/types';
-import { jointRecipe, type JointRecipeItem } from '../design/jointHardware';
+import { jointRecipe } from '../design/jointHardware';
 import { accessoryInfo, memberInfo, memberPoint, type AnalysisContext } from '../analysis/context';
 import { pointAlongProfile } from '../geometry/profileGeometry';
 import type { Vec3 } from '../geometry/vectors';
@@ -48,6 +48,31 @@ interface PartLike {
   price: number;
 }
 
+/**
+ * One part as a recipe lists it, resolved once: the line it adds to (found by the part, as the
+ * first use made it), the category its mass counts under and that category's sums (made on the
+ * first use with a mass, so the categories keep the order of their first mass).
+ */
+interface ResolvedItem {
+  target: JointLine;
+  category: BomCategory;
+  unitMass: number;
+  perConnector: number;
+  sum: Float64Array | null;
+}
+
+/**
+ * A line that joints add to, with room for its joints' source ids: at most one per joint whose
+ * recipe lists it (`size`, counted before any id is written), `filled` of them written so far. The
+ * list is made at that length once, not grown id by id (three lists of about 10,700 ids at 8,000
+ * profiles, copied several times over as they grew).
+ */
+interface JointLine {
+  line: HardwareLine;
+  size: number;
+  filled: number;
+}
+
 export function hardwareSummary(ctx: AnalysisContext): HardwareSummary {
   const lines = new Map<string, HardwareLine>();
   // Mass sums per category in typed arrays (kg, Σ kg·x, Σ kg·y, Σ kg·z, unplaced kg): adding to a
@@ -56,7 +81,8 @@ export function hardwareSummary(ctx: AnalysisContext): HardwareSummary {
   const cat = ctx.catalogue;
 
   const lineByPart = new Map<PartLike, HardwareLine>();
-  const add = (category: BomCategory, part: PartLike, unit: 'pcs' | 'm', quantity: number, sourceId: string, at: Vec3 | null) => {
+  /** The line for a part, made on its first use (one line per part, whatever the later category). */
+  const lineFor = (category: BomCategory, part: PartLike, unit: 'pcs' | 'm'): HardwareLine => {
     let line = lineByPart.get(part);
     if (!line) {
       const key = `${category}|${part.id}`;
@@ -67,15 +93,17 @@ export function hardwareSummary(ctx: AnalysisContext): HardwareSummary {
       }
       lineByPart.set(part, line);
     }
-    line.quantity += quantity;
-    if (line.sourceIds[line.sourceIds.length - 1] !== sourceId) line.sourceIds.push(sourceId);
-    const kg = quantity * part.unitMass;
-    if (!(kg > 0)) return;
+    return line;
+  };
+  const sumFor = (category: BomCategory): Float64Array => {
     let m = sums.get(category);
     if (!m) {
       m = new Float64Array(5);
       sums.set(category, m);
     }
+    return m;
+  };
+  const addMass = (m: Float64Array, kg: number, at: Vec3 | null) => {
     if (at) {
       m[0] += kg;
       m[1] += kg * at[0];
@@ -83,33 +111,93 @@ export function hardwareSummary(ctx: AnalysisContext): HardwareSummary {
       m[3] += kg * at[2];
     } else m[4] += kg;
   };
+  const add = (category: BomCategory, part: PartLike, unit: 'pcs' | 'm', quantity: number, sourceId: string, at: Vec3 | null) => {
+    const line = lineFor(category, part, unit);
+    line.quantity += quantity;
+    if (line.sourceIds[line.sourceIds.length - 1] !== sourceId) line.sourceIds.push(sourceId);
+    const kg = quantity * part.unitMass;
+    if (kg > 0) addMass(sumFor(category), kg, at);
+  };
 
   // Joints with the same connector, screw head, T-nut and host system use the same parts: resolve once.
-  // Keyed connector → screw head → T-nut → host system in nested maps: no key string per joint.
-  const recipes = new Map<unknown, Map<unknown, Map<unknown, Map<string, JointRecipeItem[]>>>>();
+  // Keyed connector → screw head → T-nut → host system in nested maps: no key string per joint; a
+  // joint like the one before it (the usual case) reuses its recipe without a look-up. First pass:
+  // each joint's recipe (`recipeOf`, an index into `recipeList`) and how many joints use it.
+  const recipes = new Map<unknown, Map<unknown, Map<unknown, Map<string, number>>>>();
+  const recipeList: ResolvedItem[][] = [];
+  const recipeUses: number[] = [];
+  const jointLines = new Map<HardwareLine, JointLine>();
+  const targetFor = (line: HardwareLine): JointLine => {
+    let target = jointLines.get(line);
+    if (!target) jointLines.set(line, (target = { line, size: 0, filled: 0 }));
+    return target;
+  };
   const joints = ctx.design.joints;
+  const recipeOf = new Int32Array(joints.length);
+  let lastConnector: unknown = undefined;
+  let lastHead: unknown = undefined;
+  let lastNut: unknown = undefined;
+  let lastSystem: string | undefined = undefined;
+  let recipe = -1;
   for (let j = 0; j < joints.length; j++) {
     const joint = joints[j];
-    const first = memberInfo(ctx, j, 0);
-    const host = memberInfo(ctx, j, 1) ?? first;
+    const host = memberInfo(ctx, j, 1) ?? memberInfo(ctx, j, 0);
     const hostSystem = host?.variant?.systemId ?? ctx.design.systemId;
-    let byHead = recipes.get(joint.connectorId);
-    if (!byHead) recipes.set(joint.connectorId, (byHead = new Map()));
-    let byNut = byHead.get(joint.fastenerHead);
-    if (!byNut) byHead.set(joint.fastenerHead, (byNut = new Map()));
-    let bySystem = byNut.get(joint.tNut);
-    if (!bySystem) byNut.set(joint.tNut, (bySystem = new Map()));
-    let recipe = bySystem.get(hostSystem);
-    if (!recipe) {
-      recipe = jointRecipe(cat.catalogue, joint, hostSystem);
-      bySystem.set(hostSystem, recipe);
+    if (recipe < 0 || joint.connectorId !== lastConnector || joint.fastenerHead !== lastHead || joint.tNut !== lastNut || hostSystem !== lastSystem) {
+      let byHead = recipes.get(joint.connectorId);
+      if (!byHead) recipes.set(joint.connectorId, (byHead = new Map()));
+      let byNut = byHead.get(joint.fastenerHead);
+      if (!byNut) byHead.set(joint.fastenerHead, (byNut = new Map()));
+      let bySystem = byNut.get(joint.tNut);
+      if (!bySystem) byNut.set(joint.tNut, (bySystem = new Map()));
+      const known = bySystem.get(hostSystem);
+      if (known === undefined) {
+        // Lines made here, on the recipe's first joint: the order lines were always made in.
+        recipe = recipeList.length;
+        recipeList.push(
+          jointRecipe(cat.catalogue, joint, hostSystem).map((r) => ({ target: targetFor(lineFor(r.category, r.part, 'pcs')), category: r.category, unitMass: r.part.unitMass, perConnector: r.perConnector, sum: null })),
+        );
+        recipeUses.push(0);
+        bySystem.set(hostSystem, recipe);
+      } else recipe = known;
+      lastConnector = joint.connectorId;
+      lastHead = joint.fastenerHead;
+      lastNut = joint.tNut;
+      lastSystem = hostSystem;
     }
-    if (recipe.length === 0) continue;
-    const at = first ? memberPoint(first, joint.members[0]) : null;
-    for (const r of recipe) add(r.category, r.part, 'pcs', r.perConnector * joint.quantity, joint.id, at);
+    recipeOf[j] = recipe;
+    recipeUses[recipe]++;
   }
+  for (let r = 0; r < recipeList.length; r++) for (const item of recipeList[r]) item.target.size += recipeUses[r];
+  for (const target of jointLines.values()) target.line.sourceIds = new Array<string>(target.size);
+
+  // Second pass: quantities, masses and source ids, joint by joint. A source id is written unless
+  // the line's last one is the same (a part listed twice in a recipe, or joints sharing an id).
+  for (let j = 0; j < joints.length; j++) {
+    const items = recipeList[recipeOf[j]];
+    if (items.length === 0) continue;
+    const joint = joints[j];
+    const first = memberInfo(ctx, j, 0);
+    const at = first ? memberPoint(first, joint.members[0]) : null;
+    const sourceId = joint.id;
+    for (let r = 0; r < items.length; r++) {
+      const item = items[r];
+      const target = item.target;
+      const line = target.line;
+      const quantity = item.perConnector * joint.quantity;
+      line.quantity += quantity;
+      const ids = line.sourceIds;
+      if (target.filled === 0 || ids[target.filled - 1] !== sourceId) ids[target.filled++] = sourceId;
+      const kg = quantity * item.unitMass;
+      if (kg > 0) addMass(item.sum ?? (item.sum = sumFor(item.category)), kg, at);
+    }
+  }
+  // Fewer ids than room only where ids repeated.
+  for (const target of jointLines.values()) if (target.filled < target.size) target.line.sourceIds.length = target.filled;
 
   const accessories = ctx.design.accessories;
+  // The T-nut an accessory part mounts with, looked up once per part (the look-up key is a string).
+  const nutByPart = new Map<PartLike, PartLike | undefined>();
   for (let a = 0; a < accessories.length; a++) {
     const acc = accessories[a];
     const part = cat.accessories.get(acc.partId);
@@ -121,12 +209,17 @@ export function hardwareSummary(ctx: AnalysisContext): HardwareSummary {
     } else {
       add(category, part, 'pcs', acc.quantity, acc.id, at);
     }
-    for (const use of part.fasteners ?? []) {
-      const f = cat.fasteners.get(use.fastenerId);
-      if (f) add('fastener', f, 'pcs', use.quantity * acc.quantity, acc.id, at);
+    const fasteners = part.fasteners;
+    if (fasteners) {
+      for (let u = 0; u < fasteners.length; u++) {
+        const use = fasteners[u];
+        const f = cat.fasteners.get(use.fastenerId);
+        if (f) add('fastener', f, 'pcs', use.quantity * acc.quantity, acc.id, at);
+      }
     }
     if ((part.tNutCount ?? 0) > 0) {
-      const nut = cat.tNutsBySystemKind.get(`${part.systemIds[0]}|drop-in`);
+      let nut = nutByPart.get(part);
+      if (nut === undefined && !nutByPart.has(part)) nutByPart.set(part, (nut = cat.tNutsBySystemKind.get(`${part.systemIds[0]}|drop-in`)));
       if (nut) add('t-nut', nut, 'pcs', (part.tNutCount ?? 0) * acc.quantity, acc.id, at);
     }
   }

@@ -63,6 +63,8 @@ export interface OffcutUse {
 
 /** Cuts placed in offcuts on hand (best fit, longest cut first), and the cuts still to place. */
 export function useOffcuts(cuts: StockCut[], offcuts: number[], kerf: number): { used: OffcutUse[]; rest: StockCut[] } {
+  // No offcuts on hand (the usual case): every cut is left, longest first.
+  if (offcuts.length === 0) return { used: [], rest: longestFirst(cuts) };
   const bins = offcuts.map((length) => ({ length, space: length + kerf, cuts: [] as StockCut[] }));
   const rest: StockCut[] = [];
   // Index loops: an iterator per cut was most of what this allocated at 8,000 profiles.
@@ -91,22 +93,40 @@ export function useOffcuts(cuts: StockCut[], offcuts: number[], kerf: number): {
  * length is not a finite number, where that comparison is not an order).
  */
 function longestFirst(cuts: readonly StockCut[]): StockCut[] {
-  const buckets = new Map<number, StockCut[]>();
+  // Each cut's length slot (lengths in order of first appearance) and the count per slot; a frame
+  // repeats a few lengths, so the last slot is tried before the map.
+  const slotByLength = new Map<number, number>();
+  const lengths: number[] = [];
+  const counts: number[] = [];
+  const slotOf = new Int32Array(cuts.length);
+  let lastLength = Number.NaN;
+  let lastSlot = -1;
   for (let c = 0; c < cuts.length; c++) {
-    const cut = cuts[c];
-    if (!Number.isFinite(cut.length)) return [...cuts].sort((a, b) => b.length - a.length);
-    const bucket = buckets.get(cut.length);
-    if (bucket) bucket.push(cut);
-    else buckets.set(cut.length, [cut]);
+    const length = cuts[c].length;
+    if (!Number.isFinite(length)) return [...cuts].sort((a, b) => b.length - a.length);
+    let slot = length === lastLength ? lastSlot : slotByLength.get(length);
+    if (slot === undefined) {
+      slot = lengths.length;
+      slotByLength.set(length, slot);
+      lengths.push(length);
+      counts.push(0);
+    }
+    counts[slot]++;
+    slotOf[c] = slot;
+    lastLength = length;
+    lastSlot = slot;
   }
-  const lengths = [...buckets.keys()].sort((a, b) => b - a);
-  // Filled at its final length, by index (no iterator or growth per cut).
-  const sorted = new Array<StockCut>(cuts.length);
+  // Slots longest first (a stable sort of distinct lengths), then each slot's first place in the list.
+  const order = lengths.map((_, slot) => slot).sort((a, b) => lengths[b] - lengths[a]);
+  const next = new Int32Array(lengths.length);
   let at = 0;
-  for (const length of lengths) {
-    const bucket = buckets.get(length)!;
-    for (let c = 0; c < bucket.length; c++) sorted[at++] = bucket[c];
+  for (const slot of order) {
+    next[slot] = at;
+    at += counts[slot];
   }
+  // Filled at its final length, by index (no bucket lists, no iterator or growth per cut).
+  const sorted = new Array<StockCut>(cuts.length);
+  for (let c = 0; c < cuts.length; c++) sorted[next[slotOf[c]]++] = cuts[c];
   return sorted;
 }
 
@@ -117,12 +137,20 @@ function barHolds(bar: StockBar, usable: number, kerf: number): boolean {
 
 export function stockPlans(ctx: AnalysisContext): VariantStockPlan[] {
   const byVariant = new Map<string, StockCut[]>();
-  for (const info of ctx.profiles) {
-    const list = byVariant.get(info.profile.variantId) ?? [];
+  // Frames list many profiles of one variant in a row: the last list is reused without a look-up.
+  let lastVariant: string | undefined;
+  let list: StockCut[] = [];
+  const profiles = ctx.profiles;
+  for (let p = 0; p < profiles.length; p++) {
     // Written out rather than spread: a spread object is built by a slow generic copy, 8,000 times.
-    const { id, length, label } = info.profile;
+    const { id, length, label, variantId } = profiles[p].profile;
+    if (variantId !== lastVariant || lastVariant === undefined) {
+      const known = byVariant.get(variantId);
+      if (known) list = known;
+      else byVariant.set(variantId, (list = []));
+      lastVariant = variantId;
+    }
     list.push(label ? { id, length, label } : { id, length });
-    byVariant.set(info.profile.variantId, list);
   }
   const prices = ctx.catalogue.catalogue.prices.profilePerMetre;
   return [...byVariant.entries()]
@@ -144,8 +172,16 @@ export function planVariant(variantId: string, systemId: string, cuts: StockCut[
   // One sort of the cuts for every bar length tried (the order needs finite lengths).
   const sortedCuts = rest.every((cut) => Number.isFinite(cut.length)) ? sortCutsForPacking(rest) : undefined;
   let best: { plan: ReturnType<typeof planStock>; bars: { length: number; cost: number }[]; cost: number } | null = null;
+  // Every bar is bought at a length no dearer than the plan's own, so no bar costs less than the
+  // cheapest length on offer: a plan for another bar length costs at least its fewest possible bars
+  // at that price (plus its unplaceable cuts). When that bound already loses to the best plan, the
+  // plan could never be chosen and is not made.
+  // (Only with prices that are numbers of at least 0, where more bars never cost less.)
+  let cheapestBar = Infinity;
+  for (const o of options) cheapestBar = o.cost >= 0 && cheapestBar >= 0 ? Math.min(cheapestBar, o.cost) : Number.NaN;
   for (const option of options) {
     if (option.length - trim <= 0) continue;
+    if (best && cheapestBar >= 0 && planCostFloor(rest, option.length - trim, settings.kerf, cheapestBar) > best.cost + COST_MARGIN) continue;
     const plan = planStock({ cuts: rest, stockLength: option.length, kerf: settings.kerf, endTrim: trim, minReusableOffcut: settings.minReusableOffcut, sortedCuts });
     // Each bar bought in the cheapest length that still holds its cuts.
     const bars = plan.bars.map((bar) => {
@@ -163,7 +199,8 @@ export function planVariant(variantId: string, systemId: string, cuts: StockCut[
   const adjusted = plan.bars.map((bar, i) => {
     const usable = (bars[i]?.length ?? options[0].length) - trim;
     const offcut = Math.max(0, round(usable - bar.usedLength));
-    return { ...bar, offcut, reusable: offcut >= settings.minReusableOffcut && offcut > 0 };
+    // Written out (the fields in the order a spread of the bar gives), not spread per bar.
+    return { index: bar.index, cuts: bar.cuts, usedLength: bar.usedLength, offcut, reusable: offcut >= settings.minReusableOffcut && offcut > 0 };
   });
   const need = rest.reduce((s, c) => s + c.length + settings.kerf, 0);
   const cheapestPerMm = Math.min(...options.filter((o) => o.length - trim > 0).map((o) => o.cost / (o.length - trim + settings.kerf)));
@@ -177,6 +214,28 @@ export function planVariant(variantId: string, systemId: string, cuts: StockCut[
     cost: round(bars.reduce((s, b) => s + b.cost, 0)),
     costLowerBound: round(Number.isFinite(cheapestPerMm) ? need * cheapestPerMm : 0),
   };
+}
+
+/** Slack when a cost bound is compared with a summed cost (the sums add thousands of prices). */
+const COST_MARGIN = 1e-3;
+
+/**
+ * No plan of `cuts` into bars of `usable` mm costs less than this: the fewest bars that can hold the
+ * cuts that fit (each cut takes its length plus a kerf of the usable length plus one kerf, as in
+ * `planStock`'s lower bound, with the packing's length tolerance allowed per bar) at `barCost`
+ * each, plus the penalty per cut too long for the bar.
+ */
+function planCostFloor(cuts: readonly StockCut[], usable: number, kerf: number, barCost: number): number {
+  const k = Math.max(0, kerf);
+  let total = 0;
+  let unplaceable = 0;
+  for (let c = 0; c < cuts.length; c++) {
+    const length = cuts[c].length;
+    if (Number.isFinite(length) && length > 0 && length <= usable + TOLERANCE) total += length + k;
+    else unplaceable++;
+  }
+  const bars = total > 0 ? Math.ceil(total / (usable + k + 2 * TOLERANCE) - 1e-6) : 0;
+  return bars * barCost + unplaceable * 1e9;
 }
 
 function round(v: number): number {

@@ -5,7 +5,7 @@
  */
 import type { ToolItem } from '../analysis/types';
 import { threadFor, type ScrewSize } from '../catalogue/fastenerStandards';
-import type { AnalysisContext } from '../analysis/context';
+import type { AnalysisContext, ProfileInfo } from '../analysis/context';
 import { formatNumber } from '../analysis/describe';
 import type { HardwareSummary } from './hardware';
 
@@ -39,15 +39,28 @@ export function toolList(ctx: AnalysisContext, hardware: HardwareSummary): ToolI
   // Drills and taps for shop machining.
   const drills = new Map<number, Set<string>>();
   const taps = new Map<string, { drill: number | null; count: number }>();
-  for (const info of ctx.profiles) {
-    for (const m of info.profile.machining) {
+  // The tap entry of the last system seen: every end tap of a system counts on the same entry, so
+  // the thread is looked up (a new object) and the entry found once per run of one system.
+  let tapSystem: ProfileInfo['system'] | null = null;
+  let tapEntry: { drill: number | null; count: number } | undefined;
+  const profiles = ctx.profiles;
+  for (let p = 0; p < profiles.length; p++) {
+    const info = profiles[p];
+    const machining = info.profile.machining;
+    for (let k = 0; k < machining.length; k++) {
+      const m = machining[k];
       if (m.kind === 'end-tap') {
-        const size = info.system?.endTapSize as ScrewSize | undefined;
-        if (!size) continue;
-        const designation = threadFor(size).designation;
-        const entry = taps.get(designation) ?? { drill: info.system?.centreBoreDiameter ?? null, count: 0 };
-        entry.count += 1;
-        taps.set(designation, entry);
+        if (info.system !== tapSystem || tapSystem === null) {
+          tapSystem = info.system;
+          const size = info.system?.endTapSize as ScrewSize | undefined;
+          tapEntry = undefined;
+          if (size) {
+            const designation = threadFor(size).designation;
+            tapEntry = taps.get(designation);
+            if (!tapEntry) taps.set(designation, (tapEntry = { drill: info.system?.centreBoreDiameter ?? null, count: 0 }));
+          }
+        }
+        if (tapEntry) tapEntry.count += 1;
         continue;
       }
       const diameter = m.diameter ?? defaultDiameter(ctx, m.jointId, m.kind);
