@@ -33,11 +33,14 @@ interface JointCheckCache {
   unknownScrews: Map<Connector, number>;
   /** System id → T-nut kind → whether the catalogue has that T-nut. */
   hasTNut: Map<string, Map<string, boolean>>;
+  /** The connector id looked up last and its connector: joints come in runs with one connector. */
+  lastConnectorId: string | undefined;
+  lastConnector: Connector | undefined;
 }
 
 export function jointFindings(ctx: AnalysisContext): Finding[] {
   const findings: Finding[] = [];
-  const cache: JointCheckCache = { unknownScrews: new Map(), hasTNut: new Map() };
+  const cache: JointCheckCache = { unknownScrews: new Map(), hasTNut: new Map(), lastConnectorId: undefined, lastConnector: undefined };
   const joints = ctx.design.joints;
   const infos: ProfileInfo[] = [];
   for (let j = 0; j < joints.length; j++) checkJoint(ctx, j, infos, findings, cache);
@@ -68,7 +71,11 @@ function checkJoint(ctx: AnalysisContext, jointIndex: number, infos: ProfileInfo
     });
     return;
   }
-  const connector = ctx.catalogue.connectors.get(joint.connectorId);
+  if (joint.connectorId !== cache.lastConnectorId) {
+    cache.lastConnectorId = joint.connectorId;
+    cache.lastConnector = ctx.catalogue.connectors.get(joint.connectorId);
+  }
+  const connector = cache.lastConnector;
   if (!connector) {
     out.push({
       id: findingId(CHECK, 'unknown-connector', [joint.id]),
@@ -203,10 +210,7 @@ function checkCounts(ctx: AnalysisContext, joint: Joint, connector: Connector, i
     });
   }
   let unknownScrews = cache.unknownScrews.get(connector);
-  if (unknownScrews === undefined) {
-    unknownScrews = connector.fasteners.filter((f) => !ctx.catalogue.fasteners.has(f.fastenerId)).length;
-    cache.unknownScrews.set(connector, unknownScrews);
-  }
+  if (unknownScrews === undefined) cache.unknownScrews.set(connector, (unknownScrews = unknownScrewCount(ctx, connector)));
   if (unknownScrews > 0) {
     out.push({
       id: findingId(CHECK, 'unknown-fastener', [joint.id]),
@@ -228,6 +232,17 @@ function checkCounts(ctx: AnalysisContext, joint: Joint, connector: Connector, i
       });
     }
   }
+}
+
+/**
+ * Screws a connector lists that the catalogue lacks. A function of its own: a closure over `ctx`
+ * inside `checkCounts` made the engine allocate a context for `ctx` on every call (once per joint),
+ * even though the closure itself runs once per connector.
+ */
+function unknownScrewCount(ctx: AnalysisContext, connector: Connector): number {
+  let count = 0;
+  for (const f of connector.fasteners) if (!ctx.catalogue.fasteners.has(f.fastenerId)) count++;
+  return count;
 }
 
 /** Whether the catalogue has this T-nut for the system; one answer per system and kind, no key string per joint. */
@@ -255,9 +270,7 @@ function checkProfileEnds(ctx: AnalysisContext, out: Finding[]): void {
         checkThreadedEnd(info, end, accessories, out);
         continue;
       }
-      const point = end === 'start' ? info.startPoint : info.endPoint;
-      // The first unjoined neighbour is enough (and stays cheap when many profiles share the point).
-      const other = firstProfileAtPoint(ctx, point, CONTACT_TOLERANCE_MM, info.index, (candidate) => !areJoined(ctx, info.profile.id, candidate.profile.id));
+      const other = unjoinedNeighbourAt(ctx, info, end);
       if (other) {
         out.push({
           id: findingId(CHECK, 'touching-unjoined', [info.profile.id, end, other.profile.id]),
@@ -279,6 +292,16 @@ function checkProfileEnds(ctx: AnalysisContext, out: Finding[]): void {
       });
     }
   }
+}
+
+/**
+ * The first profile touching this end that no joint holds to it (the first is enough, and stays
+ * cheap when many profiles share the point). Its own function: the closure over `info` inside the
+ * loop of `checkProfileEnds` made a context per profile, used or not.
+ */
+function unjoinedNeighbourAt(ctx: AnalysisContext, info: ProfileInfo, end: ProfileEnd): ProfileInfo | undefined {
+  const point = end === 'start' ? info.startPoint : info.endPoint;
+  return firstProfileAtPoint(ctx, point, CONTACT_TOLERANCE_MM, info.index, (candidate) => !areJoined(ctx, info.profile.id, candidate.profile.id));
 }
 
 /** Whether an end has a cap, foot or caster (a loop, not `some` with a closure, for every profile end). */
@@ -332,11 +355,20 @@ function checkSlotClaims(ctx: AnalysisContext, out: Finding[]): void {
   const faceCount = ctx.profiles.length * 4;
   const firstClaim = new Int32Array(faceCount).fill(-1);
   const lastClaim = new Int32Array(faceCount);
-  const facesInOrder: number[] = [];
+  // At most one face per claim: a typed list of that length rather than a list grown by push.
+  const facesInOrder = new Int32Array(joints.length);
+  let faceTotal = 0;
+  // Joints come in runs with one connector: the last one looked up is kept.
+  let lastConnectorId: string | undefined;
+  let lastConnector: Connector | undefined;
   for (let j = 0; j < joints.length; j++) {
     const joint = joints[j];
     if (!SLOT_CONNECTOR_KINDS.has(joint.kind) || joint.members.length !== 2) continue;
-    const connector = ctx.catalogue.connectors.get(joint.connectorId);
+    if (joint.connectorId !== lastConnectorId) {
+      lastConnectorId = joint.connectorId;
+      lastConnector = ctx.catalogue.connectors.get(joint.connectorId);
+    }
+    const connector = lastConnector;
     const joined = memberInfo(ctx, j, 0);
     const met = memberInfo(ctx, j, 1);
     if (!connector || !joined || !met) continue;
@@ -365,24 +397,26 @@ function checkSlotClaims(ctx: AnalysisContext, out: Finding[]): void {
     claims.next[k] = -1;
     if (firstClaim[key] < 0) {
       firstClaim[key] = k;
-      facesInOrder.push(key);
+      facesInOrder[faceTotal++] = key;
     } else claims.next[lastClaim[key]] = k;
     lastClaim[key] = k;
   }
   const list: number[] = [];
-  for (const key of facesInOrder) {
+  for (let f = 0; f < faceTotal; f++) {
+    const key = facesInOrder[f];
     if (claims.next[firstClaim[key]] < 0) continue;
     while (list.length > 0) list.pop();
     for (let k = firstClaim[key]; k >= 0; k = claims.next[k]) list.push(k);
     sortByLo(list, claims.lo);
-    const metId = ctx.profiles[key >> 2].profile.id;
-    const faceText = String(key & 3);
     let reach = list[0];
     for (let i = 1; i < list.length; i++) {
       const c = list[i];
-      const reachJoint = joints[claims.joint[reach]];
-      const cJoint = joints[claims.joint[c]];
       if (claims.lo[c] < claims.hi[reach] - 0.5) {
+        // Ids and names only for a face whose claims overlap (most faces have none).
+        const metId = ctx.profiles[key >> 2].profile.id;
+        const faceText = String(key & 3);
+        const reachJoint = joints[claims.joint[reach]];
+        const cJoint = joints[claims.joint[c]];
         const both = [reachJoint.id, cJoint.id].sort();
         const bothJoints = reachJoint.id < cJoint.id ? [reachJoint, cJoint] : [cJoint, reachJoint];
         out.push({
