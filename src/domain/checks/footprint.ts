@@ -82,19 +82,102 @@ export function convexHull(points: P2[]): P2[] {
   return lower.concat(upper);
 }
 
+/** Whether an end has a foot or caster (a loop, not `some` with a closure, for every low profile end). */
+function hasFootOrCaster(accessories: readonly { kind: string }[]): boolean {
+  for (let k = 0; k < accessories.length; k++) {
+    const kind = accessories[k].kind;
+    if (kind === 'leveling-foot' || kind === 'caster') return true;
+  }
+  return false;
+}
+
+/** Plan points (x, z), mm, in two growing lists of numbers: no pair list per point. */
+interface PlanPoints {
+  x: number[];
+  z: number[];
+}
+
+/**
+ * `floorContact` as plan points in two number lists (thousands of feet in a large frame): the
+ * same points in the same order.
+ */
+function floorContactXZ(ctx: AnalysisContext): { points: PlanPoints; kind: 'feet' | 'profiles' } {
+  const { floor } = frameLevels(ctx);
+  const grid = ctx.profileGrid;
+  const feet: PlanPoints = { x: [], z: [] };
+  for (let i = 0; i < ctx.profiles.length; i++) {
+    const p = ctx.profiles[i];
+    const reach = Math.max(p.width, p.height);
+    if (grid.minY(p.index) > floor + FLOOR_TOLERANCE_MM + reach) continue;
+    for (let e = 0; e < 2; e++) {
+      const point = e === 0 ? p.startPoint : p.endPoint;
+      if (point[1] > floor + FLOOR_TOLERANCE_MM + reach / 2) continue;
+      if (hasFootOrCaster(e === 0 ? p.startAccessories : p.endAccessories)) {
+        feet.x.push(point[0]);
+        feet.z.push(point[2]);
+      }
+    }
+  }
+  if (feet.x.length >= 3) return { points: feet, kind: 'feet' };
+  const points: PlanPoints = { x: [], z: [] };
+  for (let i = 0; i < ctx.profiles.length; i++) {
+    const p = ctx.profiles[i];
+    if (grid.minY(p.index) > floor + FLOOR_TOLERANCE_MM) continue;
+    const b = p.box;
+    points.x.push(b.minX, b.maxX, b.maxX, b.minX);
+    points.z.push(b.minZ, b.minZ, b.maxZ, b.maxZ);
+  }
+  return { points, kind: 'profiles' };
+}
+
+/**
+ * `convexHull` of plan points in two lists: the points are ordered by index (no copy of each
+ * point), and only the hull's corners become pairs. The same corners in the same order.
+ */
+function convexHullXZ(points: PlanPoints): P2[] {
+  const { x, z } = points;
+  const order: number[] = [];
+  for (let k = 0; k < x.length; k++) order.push(k);
+  order.sort((a, b) => x[a] - x[b] || z[a] - z[b]);
+  if (order.length <= 2) return order.map((k) => [x[k], z[k]] as P2);
+  const lower: number[] = [];
+  for (let k = 0; k < order.length; k++) {
+    const p = order[k];
+    while (lower.length >= 2 && crossAt(x, z, lower[lower.length - 2], lower[lower.length - 1], p) <= 0) lower.pop();
+    lower.push(p);
+  }
+  const upper: number[] = [];
+  for (let k = order.length - 1; k >= 0; k--) {
+    const p = order[k];
+    while (upper.length >= 2 && crossAt(x, z, upper[upper.length - 2], upper[upper.length - 1], p) <= 0) upper.pop();
+    upper.push(p);
+  }
+  upper.pop();
+  lower.pop();
+  const hull: P2[] = [];
+  for (const k of lower) hull.push([x[k], z[k]]);
+  for (const k of upper) hull.push([x[k], z[k]]);
+  return hull;
+}
+
+/** `cross` of `convexHull` for points o, a, b given by index. */
+function crossAt(x: readonly number[], z: readonly number[], o: number, a: number, b: number): number {
+  return (x[a] - x[o]) * (z[b] - z[o]) - (z[a] - z[o]) * (x[b] - x[o]);
+}
+
 /**
  * Signed distance (mm) from the centre of mass, projected on the floor, to the nearest footprint
  * edge: positive inside, negative outside. Null when nothing stands on the floor.
  */
 export function footprintLeverArm(ctx: AnalysisContext, centre: Vec3): { distance: number; edge: string; footprint: 'feet' | 'profiles' } | null {
   // The footprint is the same for the empty frame and every load case: found once per analysis.
-  let footprint = ctx.memo.get('footprint') as { contact: ReturnType<typeof floorContact>; hull: P2[] } | undefined;
+  let footprint = ctx.memo.get('footprint') as { kind: 'feet' | 'profiles'; hull: P2[] } | undefined;
   if (!footprint) {
-    const contact = floorContact(ctx);
-    footprint = { contact, hull: convexHull(contact.points) };
+    const contact = floorContactXZ(ctx);
+    footprint = { kind: contact.kind, hull: convexHullXZ(contact.points) };
     ctx.memo.set('footprint', footprint);
   }
-  const { contact, hull } = footprint;
+  const hull = footprint.hull;
   if (hull.length < 3) return null;
   const c: P2 = [centre[0], centre[2]];
   let best = Infinity;
@@ -113,7 +196,7 @@ export function footprintLeverArm(ctx: AnalysisContext, centre: Vec3): { distanc
       bestEdge = edgeName(ez / len, -ex / len);
     }
   }
-  return { distance: best, edge: bestEdge, footprint: contact.kind };
+  return { distance: best, edge: bestEdge, footprint: footprint.kind };
 }
 
 /** Names an edge by its outward normal (x, z): +x right, −x left, −z front, +z back (the design format's front is −Z). */
