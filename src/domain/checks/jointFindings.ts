@@ -9,7 +9,8 @@ import type { Joint, Machining, ProfileEnd } from '../design/schema';
 import type { Connector, ConnectorMachining } from '../catalogue/types';
 import { sectionHalfExtentAlong } from '../geometry/profileGeometry';
 import { dot } from '../geometry/vectors';
-import { CONTACT_TOLERANCE_MM, accessoriesAt, areJoined, jointCountAt, memberEnd, memberInfo, memberPoint, type AnalysisContext, type ProfileInfo } from '../analysis/context';
+import { CONTACT_TOLERANCE_MM, accessoriesAt, areJoined, jointCountAt, memberEnd, memberPoint, type AnalysisContext, type ProfileInfo } from '../analysis/context';
+import type { UniformGrid } from '../geometry/spatialGrid';
 import { capitalise, countOf, endPhrase, findingId, jointName, mm, profileName } from '../analysis/describe';
 import { distancePointToProfile, firstProfileAtPoint, pointOffFace, projectAlong } from './geometryQueries';
 import { addEndCapFix, addMachiningFix } from './fixes';
@@ -27,8 +28,19 @@ const COVER_PROBE_MM = 1;
 const END_CLOSERS = new Set(['end-cap', 'leveling-foot', 'caster']);
 const SLOT_CONNECTOR_KINDS = new Set(['corner-bracket', 'gusset-plate', 'concealed-connector']);
 
-/** Per-analysis answers that depend only on the catalogue part, so each is worked out once. */
+/**
+ * What the per-joint checks read from the context, taken from it once, and per-analysis answers
+ * that depend only on the catalogue part, so each is worked out once. The context object keeps
+ * its properties in a dictionary (a hash look-up on every read); this record keeps them in fixed
+ * slots, which matters for reads made once per joint.
+ */
 interface JointCheckCache {
+  joints: readonly Joint[];
+  profiles: readonly ProfileInfo[];
+  /** `AnalysisContext.jointMemberStart` and `jointMemberProfile`. */
+  memberStart: Int32Array;
+  memberProfile: Int32Array;
+  grid: UniformGrid;
   /** Screws a connector lists that the catalogue lacks. */
   unknownScrews: Map<Connector, number>;
   /** System id → T-nut kind → whether the catalogue has that T-nut. */
@@ -40,24 +52,34 @@ interface JointCheckCache {
 
 export function jointFindings(ctx: AnalysisContext): Finding[] {
   const findings: Finding[] = [];
-  const cache: JointCheckCache = { unknownScrews: new Map(), hasTNut: new Map(), lastConnectorId: undefined, lastConnector: undefined };
   const joints = ctx.design.joints;
+  const cache: JointCheckCache = {
+    joints,
+    profiles: ctx.profiles,
+    memberStart: ctx.jointMemberStart,
+    memberProfile: ctx.jointMemberProfile,
+    grid: ctx.profileGrid,
+    unknownScrews: new Map(),
+    hasTNut: new Map(),
+    lastConnectorId: undefined,
+    lastConnector: undefined,
+  };
   const infos: ProfileInfo[] = [];
   for (let j = 0; j < joints.length; j++) checkJoint(ctx, j, infos, findings, cache);
   checkProfileEnds(ctx, findings);
-  checkSlotClaims(ctx, findings);
+  checkSlotClaims(ctx, findings, cache);
   checkAccessHolesUncovered(ctx, findings);
   return findings;
 }
 
 /** `infos`: a scratch list, refilled with the joint's member profiles (the checks below read it and keep none of it). */
 function checkJoint(ctx: AnalysisContext, jointIndex: number, infos: ProfileInfo[], out: Finding[], cache: JointCheckCache): void {
-  const joint = ctx.design.joints[jointIndex];
+  const joint = cache.joints[jointIndex];
   // Emptied by pop(): setting `length` takes a slow path in the engine, once per joint.
   while (infos.length > 0) infos.pop();
   let missing: string[] | null = null;
   for (let k = 0; k < joint.members.length; k++) {
-    const info = memberInfo(ctx, jointIndex, k);
+    const info = memberOf(cache, jointIndex, k);
     if (info) infos.push(info);
     else (missing ??= []).push(joint.members[k].profileId);
   }
@@ -107,36 +129,48 @@ function checkJoint(ctx: AnalysisContext, jointIndex: number, infos: ProfileInfo
       });
     }
   }
-  checkMembersMeet(ctx, joint, connector, infos, out);
+  checkMembersMeet(ctx, joint, connector, infos, out, cache.grid);
   checkMachining(joint, connector, infos, out);
   checkCounts(ctx, joint, connector, infos, out, cache);
+}
+
+/** `memberInfo` read from the check's copies of the context's member tables. */
+function memberOf(cache: JointCheckCache, jointIndex: number, k: number): ProfileInfo | undefined {
+  const at = cache.memberStart[jointIndex] + k;
+  if (k < 0 || at >= cache.memberStart[jointIndex + 1]) return undefined;
+  const i = cache.memberProfile[at];
+  return i < 0 ? undefined : cache.profiles[i];
 }
 
 function memberIdsOf(joint: Joint): string[] {
   return joint.members.map((m) => m.profileId);
 }
 
-function checkMembersMeet(ctx: AnalysisContext, joint: Joint, connector: Connector, infos: ProfileInfo[], out: Finding[]): void {
+function checkMembersMeet(ctx: AnalysisContext, joint: Joint, connector: Connector, infos: ProfileInfo[], out: Finding[], grid: UniformGrid): void {
   if (joint.kind === 'hinge' || infos.length < 2) return;
-  const p0 = memberPoint(infos[0], joint.members[0]);
-  let gap: number;
-  if (joint.kind === 'corner-cube') {
-    // The cube sits between the ends: each end lies within one section size of the others.
-    const reach = Math.max(...infos.map((i) => Math.max(i.width, i.height)));
-    gap = Math.max(...infos.slice(1).map((info, k) => distancePointToProfile(ctx, memberPoint(info, joint.members[k + 1]), infos[0].index))) - reach;
-  } else {
-    gap = distancePointToProfile(ctx, p0, infos[1].index);
-  }
-  if (gap > MEMBERS_MEET_TOLERANCE_MM) {
-    out.push({
-      id: findingId(CHECK, 'members-apart', [joint.id]),
-      check: CHECK,
-      severity: 'error',
-      partIds: [joint.id, ...infos.map((i) => i.profile.id)],
-      message: `The ${connector.name} joins ${infos.map((i) => profileName(i)).join(' and ')}, but they are ${mm(gap)} apart. Move the profiles together or remove the joint.`,
-      data: { gapMm: round(gap) },
-    });
-  }
+  const gap = joint.kind === 'corner-cube' ? cornerCubeGap(ctx, joint, infos) : grid.distanceToPoint(infos[1].index, memberPoint(infos[0], joint.members[0]));
+  if (gap > MEMBERS_MEET_TOLERANCE_MM) membersApart(joint, connector, infos, gap, out);
+}
+
+/** The cube sits between the ends: each end lies within one section size of the others. */
+function cornerCubeGap(ctx: AnalysisContext, joint: Joint, infos: ProfileInfo[]): number {
+  const reach = Math.max(...infos.map((i) => Math.max(i.width, i.height)));
+  return Math.max(...infos.slice(1).map((info, k) => distancePointToProfile(ctx, memberPoint(info, joint.members[k + 1]), infos[0].index))) - reach;
+}
+
+/**
+ * The members-apart finding. Closures live here and in `cornerCubeGap`, not in
+ * `checkMembersMeet`: there they would make a context per joint once any joint needed them.
+ */
+function membersApart(joint: Joint, connector: Connector, infos: ProfileInfo[], gap: number, out: Finding[]): void {
+  out.push({
+    id: findingId(CHECK, 'members-apart', [joint.id]),
+    check: CHECK,
+    severity: 'error',
+    partIds: [joint.id, ...infos.map((i) => i.profile.id)],
+    message: `The ${connector.name} joins ${infos.map((i) => profileName(i)).join(' and ')}, but they are ${mm(gap)} apart. Move the profiles together or remove the joint.`,
+    data: { gapMm: round(gap) },
+  });
 }
 
 function checkMachining(joint: Joint, connector: Connector, infos: ProfileInfo[], out: Finding[]): void {
@@ -259,8 +293,9 @@ const ENDS: readonly ProfileEnd[] = ['start', 'end'];
 
 function checkProfileEnds(ctx: AnalysisContext, out: Finding[]): void {
   // Index loops: these run for every profile end, and iterators here were allocated per profile.
-  for (let i = 0; i < ctx.profiles.length; i++) {
-    const info = ctx.profiles[i];
+  const profiles = ctx.profiles;
+  for (let i = 0; i < profiles.length; i++) {
+    const info = profiles[i];
     for (let e = 0; e < ENDS.length; e++) {
       const end = ENDS[e];
       if (jointCountAt(info, end) > 0) continue;
@@ -341,8 +376,9 @@ interface SlotClaims {
   count: number;
 }
 
-function checkSlotClaims(ctx: AnalysisContext, out: Finding[]): void {
-  const joints = ctx.design.joints;
+function checkSlotClaims(ctx: AnalysisContext, out: Finding[], cache: JointCheckCache): void {
+  const joints = cache.joints;
+  const connectors = ctx.catalogue.connectors;
   const claims: SlotClaims = {
     joint: new Int32Array(joints.length),
     lo: new Float64Array(joints.length),
@@ -352,7 +388,7 @@ function checkSlotClaims(ctx: AnalysisContext, out: Finding[]): void {
     count: 0,
   };
   // Per slot face: its first and last claim (−1: none), and the faces in the order first claimed.
-  const faceCount = ctx.profiles.length * 4;
+  const faceCount = cache.profiles.length * 4;
   const firstClaim = new Int32Array(faceCount).fill(-1);
   const lastClaim = new Int32Array(faceCount);
   // At most one face per claim: a typed list of that length rather than a list grown by push.
@@ -366,11 +402,11 @@ function checkSlotClaims(ctx: AnalysisContext, out: Finding[]): void {
     if (!SLOT_CONNECTOR_KINDS.has(joint.kind) || joint.members.length !== 2) continue;
     if (joint.connectorId !== lastConnectorId) {
       lastConnectorId = joint.connectorId;
-      lastConnector = ctx.catalogue.connectors.get(joint.connectorId);
+      lastConnector = connectors.get(joint.connectorId);
     }
     const connector = lastConnector;
-    const joined = memberInfo(ctx, j, 0);
-    const met = memberInfo(ctx, j, 1);
+    const joined = memberOf(cache, j, 0);
+    const met = memberOf(cache, j, 1);
     if (!connector || !joined || !met) continue;
     const end = memberEnd(joint.members[0], joined);
     if (!end) continue;
@@ -450,8 +486,9 @@ function sortByLo(list: number[], lo: Float64Array): void {
 }
 
 function checkAccessHolesUncovered(ctx: AnalysisContext, out: Finding[]): void {
-  for (let i = 0; i < ctx.profiles.length; i++) {
-    const info = ctx.profiles[i];
+  const profiles = ctx.profiles;
+  for (let i = 0; i < profiles.length; i++) {
+    const info = profiles[i];
     const machining = info.profile.machining;
     for (let k = 0; k < machining.length; k++) {
       const m = machining[k];
