@@ -8,7 +8,7 @@ import { panelAxes } from '../geometry/panelGeometry';
 import { sectionHalfExtentAlongAxis } from '../geometry/profileGeometry';
 import { dominantAxis } from '../geometry/vectors';
 import type { AnalysisContext, PanelInfo } from '../analysis/context';
-import { panelCornerNotches } from '../analysis/panelNotches';
+import { allPanelCornerNotches } from '../analysis/panelNotches';
 import { sheetThicknessTolerance } from '../catalogue/materials';
 import { capitalise, countOf, findingId, formatNumber, mm, panelName } from '../analysis/describe';
 import { addGasketFix, setPanelThicknessFix } from './fixes';
@@ -41,6 +41,9 @@ export function panelFitFindings(ctx: AnalysisContext): Finding[] {
   const out: Finding[] = [];
   const notches: { info: PanelInfo; notch: CornerNotches }[] = [];
   const opening = new Float64Array(3);
+  // Read from the context once (its properties sit in a dictionary: a hash look-up per read).
+  const notchesByPanel = allPanelCornerNotches(ctx);
+  const clearance = ctx.design.settings.panelClearance;
   for (const info of ctx.panels) {
     const { panel } = info;
     if (!info.material) {
@@ -64,9 +67,9 @@ export function panelFitFindings(ctx: AnalysisContext): Finding[] {
       continue;
     }
     checkThickness(ctx, info, out);
-    checkThermal(ctx, info, out);
+    checkThermal(clearance, info, out);
     checkOpening(info, out, opening);
-    const notch = panelCornerNotches(ctx, info);
+    const notch = notchesByPanel[info.index];
     if (notch.corners > 0) notches.push({ info, notch });
   }
   // The findings list shows the first MAX_FINDINGS_PER_CHECK of this check, errors and warnings
@@ -167,7 +170,7 @@ function insteadText(fits: number | undefined): string {
  * ΔL = |α_panel − α_frame|·L·ΔT, against the play left in the slots (the clearance plus the slot
  * depth beyond the engagement, both sides).
  */
-function checkThermal(ctx: AnalysisContext, info: PanelInfo, out: Finding[]): void {
+function checkThermal(panelClearance: number, info: PanelInfo, out: Finding[]): void {
   const material = info.material;
   if (!material) return;
   let room = Infinity;
@@ -178,7 +181,7 @@ function checkThermal(ctx: AnalysisContext, info: PanelInfo, out: Finding[]): vo
     room = Math.min(room, b.system.slotDepth - b.system.slotEngagement);
   }
   if (systems === 0) return;
-  const play = ctx.design.settings.panelClearance + 2 * Math.max(0, room);
+  const play = panelClearance + 2 * Math.max(0, room);
   const length = Math.max(info.sheetWidth, info.sheetHeight);
   const growth = Math.abs(material.thermalExpansion - FRAME_EXPANSION) * length * PANEL_TEMPERATURE_SWING_K;
   if (growth <= play) return;
