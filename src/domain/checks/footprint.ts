@@ -22,7 +22,8 @@ export function frameLevels(ctx: AnalysisContext): { floor: number; top: number 
     let floor = Infinity;
     let top = -Infinity;
     const grid = ctx.profileGrid;
-    for (let i = 0; i < ctx.profiles.length; i++) {
+    const count = ctx.profiles.length;
+    for (let i = 0; i < count; i++) {
       floor = Math.min(floor, grid.minY(i));
       top = Math.max(top, grid.maxY(i));
     }
@@ -105,8 +106,10 @@ function floorContactXZ(ctx: AnalysisContext): { points: PlanPoints; kind: 'feet
   const { floor } = frameLevels(ctx);
   const grid = ctx.profileGrid;
   const feet: PlanPoints = { x: [], z: [] };
-  for (let i = 0; i < ctx.profiles.length; i++) {
-    const p = ctx.profiles[i];
+  // Read from the context once: its properties sit in a dictionary (a hash look-up per read).
+  const profiles = ctx.profiles;
+  for (let i = 0; i < profiles.length; i++) {
+    const p = profiles[i];
     const reach = Math.max(p.width, p.height);
     if (grid.minY(p.index) > floor + FLOOR_TOLERANCE_MM + reach) continue;
     for (let e = 0; e < 2; e++) {
@@ -120,8 +123,8 @@ function floorContactXZ(ctx: AnalysisContext): { points: PlanPoints; kind: 'feet
   }
   if (feet.x.length >= 3) return { points: feet, kind: 'feet' };
   const points: PlanPoints = { x: [], z: [] };
-  for (let i = 0; i < ctx.profiles.length; i++) {
-    const p = ctx.profiles[i];
+  for (let i = 0; i < profiles.length; i++) {
+    const p = profiles[i];
     if (grid.minY(p.index) > floor + FLOOR_TOLERANCE_MM) continue;
     const b = p.box;
     points.x.push(b.minX, b.maxX, b.maxX, b.minX);
