@@ -48,6 +48,13 @@ interface JointCheckCache {
   /** The connector id looked up last and its connector: joints come in runs with one connector. */
   lastConnectorId: string | undefined;
   lastConnector: Connector | undefined;
+  /** The connector whose unknown screws were counted last, and the count. */
+  screwsConnector: Connector | undefined;
+  screwsUnknown: number;
+  /** The last T-nut question (system, kind) and its answer. */
+  tNutSystemId: string | undefined;
+  tNutKind: string | undefined;
+  tNutKnown: boolean;
 }
 
 export function jointFindings(ctx: AnalysisContext): Finding[] {
@@ -63,6 +70,11 @@ export function jointFindings(ctx: AnalysisContext): Finding[] {
     hasTNut: new Map(),
     lastConnectorId: undefined,
     lastConnector: undefined,
+    screwsConnector: undefined,
+    screwsUnknown: 0,
+    tNutSystemId: undefined,
+    tNutKind: undefined,
+    tNutKnown: false,
   };
   const infos: ProfileInfo[] = [];
   for (let j = 0; j < joints.length; j++) checkJoint(ctx, j, infos, findings, cache);
@@ -243,8 +255,14 @@ function checkCounts(ctx: AnalysisContext, joint: Joint, connector: Connector, i
       message: `${capitalise(jointName(ctx, joint))} lists ${joint.quantity} ${connector.name}s; a profile has only four faces. Check the quantity.`,
     });
   }
-  let unknownScrews = cache.unknownScrews.get(connector);
-  if (unknownScrews === undefined) cache.unknownScrews.set(connector, (unknownScrews = unknownScrewCount(ctx, connector)));
+  // Joints come in runs with one connector: the last answer is kept beside the map.
+  if (connector !== cache.screwsConnector) {
+    let count = cache.unknownScrews.get(connector);
+    if (count === undefined) cache.unknownScrews.set(connector, (count = unknownScrewCount(ctx, connector)));
+    cache.screwsConnector = connector;
+    cache.screwsUnknown = count;
+  }
+  const unknownScrews = cache.screwsUnknown;
   if (unknownScrews > 0) {
     out.push({
       id: findingId(CHECK, 'unknown-fastener', [joint.id]),
@@ -281,6 +299,15 @@ function unknownScrewCount(ctx: AnalysisContext, connector: Connector): number {
 
 /** Whether the catalogue has this T-nut for the system; one answer per system and kind, no key string per joint. */
 function hasTNut(ctx: AnalysisContext, cache: JointCheckCache, systemId: string, kind: string): boolean {
+  // The last question asked is kept: joints come in runs with one system and T-nut kind.
+  if (systemId === cache.tNutSystemId && kind === cache.tNutKind) return cache.tNutKnown;
+  cache.tNutSystemId = systemId;
+  cache.tNutKind = kind;
+  cache.tNutKnown = hasTNutInCatalogue(ctx, cache, systemId, kind);
+  return cache.tNutKnown;
+}
+
+function hasTNutInCatalogue(ctx: AnalysisContext, cache: JointCheckCache, systemId: string, kind: string): boolean {
   let bySystem = cache.hasTNut.get(systemId);
   if (!bySystem) cache.hasTNut.set(systemId, (bySystem = new Map()));
   let known = bySystem.get(kind);
