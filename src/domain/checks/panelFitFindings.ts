@@ -7,7 +7,8 @@ import type { Finding } from '../analysis/types';
 import { panelAxes } from '../geometry/panelGeometry';
 import { sectionHalfExtentAlongAxis } from '../geometry/profileGeometry';
 import { dominantAxis } from '../geometry/vectors';
-import type { AnalysisContext, PanelInfo } from '../analysis/context';
+import type { AnalysisContext, PanelInfo, ProfileInfo } from '../analysis/context';
+import type { SectionAxes } from '../geometry/profileGeometry';
 import { allPanelCornerNotches } from '../analysis/panelNotches';
 import { sheetThicknessTolerance } from '../catalogue/materials';
 import { capitalise, countOf, findingId, formatNumber, mm, panelName } from '../analysis/describe';
@@ -40,7 +41,7 @@ function notchNote(info: PanelInfo, notch: CornerNotches): Finding {
 export function panelFitFindings(ctx: AnalysisContext): Finding[] {
   const out: Finding[] = [];
   const notches: { info: PanelInfo; notch: CornerNotches }[] = [];
-  const opening = new Float64Array(3);
+  const opening = openingScratch();
   // Read from the context once (its properties sit in a dictionary: a hash look-up per read).
   const notchesByPanel = allPanelCornerNotches(ctx);
   const clearance = ctx.design.settings.panelClearance;
@@ -197,12 +198,43 @@ function checkThermal(panelClearance: number, info: PanelInfo, out: Finding[]): 
 
 /** Clear opening between the inner faces of the bounding profiles, and whether the panel is in their slot plane. */
 export function frameOpening(info: PanelInfo): { width: number; height: number; offPlane: number } | null {
-  const into = new Float64Array(3);
-  return frameOpeningInto(info, into) ? { width: into[0], height: into[1], offPlane: into[2] } : null;
+  const into = openingScratch();
+  return frameOpeningInto(info, into) ? { width: into.opening[0], height: into.opening[1], offPlane: into.opening[2] } : null;
 }
 
-/** `frameOpening` written into `into` (width, height, off-plane distance); false where it is null. */
-function frameOpeningInto(info: PanelInfo, into: Float64Array): boolean {
+/**
+ * Scratch for `frameOpeningInto`, shared by every panel of one check: the opening (width,
+ * height, off-plane distance) and the dominant axis of the last two profile orientations seen.
+ * Profiles of one analysis context with exactly the same direction and roll share one
+ * `SectionAxes` object (the context's orientation cache compares the numbers exactly), so that
+ * object keys the answer, and a frame's profiles need not have their own directions read.
+ */
+interface OpeningScratch {
+  opening: Float64Array;
+  axesA: SectionAxes | undefined;
+  alongA: 0 | 1 | 2;
+  axesB: SectionAxes | undefined;
+  alongB: 0 | 1 | 2;
+}
+
+function openingScratch(): OpeningScratch {
+  return { opening: new Float64Array(3), axesA: undefined, alongA: 0, axesB: undefined, alongB: 0 };
+}
+
+/** `dominantAxis` of the profile's direction, from the scratch when its orientation was seen last or before. */
+function dominantAxisOf(b: ProfileInfo, s: OpeningScratch): 0 | 1 | 2 {
+  if (b.axes === s.axesA) return s.alongA;
+  if (b.axes === s.axesB) return s.alongB;
+  const along = dominantAxis(b.profile.direction);
+  s.axesB = s.axesA;
+  s.alongB = s.alongA;
+  s.axesA = b.axes;
+  s.alongA = along;
+  return along;
+}
+
+/** `frameOpening` written into `scratch.opening` (width, height, off-plane distance); false where it is null. */
+function frameOpeningInto(info: PanelInfo, scratch: OpeningScratch): boolean {
   const { n, w, h } = panelAxes(info.panel.rect.normal);
   const c = info.panel.rect.center;
   // Low and high edge along the width (0) and height (1), in locals: no pair list per panel.
@@ -214,7 +246,7 @@ function frameOpeningInto(info: PanelInfo, into: Float64Array): boolean {
   const bounding = info.bounding;
   for (let i = 0; i < bounding.length; i++) {
     const b = bounding[i];
-    const along = dominantAxis(b.profile.direction);
+    const along = dominantAxisOf(b, scratch);
     if (along === n) return false;
     // A profile running along the width axis bounds the height, and the other way round.
     const across = along === w ? h : w;
@@ -228,6 +260,7 @@ function frameOpeningInto(info: PanelInfo, into: Float64Array): boolean {
     offPlane = Math.max(offPlane, Math.abs(b.startPoint[n] - c[n]));
   }
   if (!Number.isFinite(low0 + high0 + low1 + high1)) return false;
+  const into = scratch.opening;
   into[0] = high0 - low0;
   into[1] = high1 - low1;
   into[2] = offPlane;
@@ -235,9 +268,10 @@ function frameOpeningInto(info: PanelInfo, into: Float64Array): boolean {
 }
 
 /** `opening`: scratch for the frame opening, shared by every panel of one check. */
-function checkOpening(info: PanelInfo, out: Finding[], opening: Float64Array): void {
+function checkOpening(info: PanelInfo, out: Finding[], scratch: OpeningScratch): void {
   const { panel } = info;
-  if (!frameOpeningInto(info, opening)) {
+  const opening = scratch.opening;
+  if (!frameOpeningInto(info, scratch)) {
     out.push({
       id: findingId(CHECK, 'frame-not-rectangle', [panel.id]),
       check: CHECK,
