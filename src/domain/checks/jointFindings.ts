@@ -7,8 +7,8 @@
 import type { Finding } from '../analysis/types';
 import type { Joint, Machining, ProfileEnd } from '../design/schema';
 import type { Connector, ConnectorMachining } from '../catalogue/types';
-import { sectionHalfExtentAlong } from '../geometry/profileGeometry';
-import { dot } from '../geometry/vectors';
+import type { SectionAxes } from '../geometry/profileGeometry';
+import { dot, type ReadonlyVec3 } from '../geometry/vectors';
 import { CONTACT_TOLERANCE_MM, accessoriesAt, areJoined, jointCountAt, memberEnd, memberPoint, type AnalysisContext, type ProfileInfo } from '../analysis/context';
 import type { UniformGrid } from '../geometry/spatialGrid';
 import { capitalise, countOf, endPhrase, findingId, jointName, mm, profileName } from '../analysis/describe';
@@ -24,6 +24,9 @@ const MEMBERS_MEET_TOLERANCE_MM = 1;
 const MAX_CONNECTORS_PER_JOINT = 4;
 /** Lift (mm) of the probe point off a face when asking whether something covers a hole. */
 const COVER_PROBE_MM = 1;
+
+/** Orientation pairs the slot-claim check keeps answers for (a frame has a few). */
+const PAIRS_KEPT = 8;
 
 const END_CLOSERS = new Set(['end-cap', 'leveling-foot', 'caster']);
 const SLOT_CONNECTOR_KINDS = new Set(['corner-bracket', 'gusset-plate', 'concealed-connector']);
@@ -424,6 +427,18 @@ function checkSlotClaims(ctx: AnalysisContext, out: Finding[], cache: JointCheck
   // Joints come in runs with one connector: the last one looked up is kept.
   let lastConnectorId: string | undefined;
   let lastConnector: Connector | undefined;
+  // What depends only on the orientations of the met and the joined profile, per pair of them:
+  // profiles of one analysis context with exactly the same direction and roll share one
+  // SectionAxes object (the context's orientation cache compares the numbers exactly), so a pair of
+  // those objects keys the answer, and the profiles' own directions (scattered in memory) need not
+  // be read per joint. Per pair: the dot products of the met profile's u and v with the joined
+  // direction, the absolute dot products of the joined profile's u and v with the met direction,
+  // and the met direction itself. A frame has a few such pairs; past PAIRS_KEPT they are worked
+  // out per joint.
+  const pairMet: SectionAxes[] = [];
+  const pairJoined: SectionAxes[] = [];
+  const pairDots = new Float64Array(4 * PAIRS_KEPT);
+  const pairMetDirection: ReadonlyVec3[] = [];
   for (let j = 0; j < joints.length; j++) {
     const joint = joints[j];
     if (!SLOT_CONNECTOR_KINDS.has(joint.kind) || joint.members.length !== 2) continue;
@@ -440,16 +455,49 @@ function checkSlotClaims(ctx: AnalysisContext, out: Finding[], cache: JointCheck
     // The joined profile leaves the met profile along its own axis, away from the joined end. The
     // face it meets is the one facing that way (as `faceFacing`, without a vector per joint:
     // negating the direction negates each dot product exactly).
-    const d = joined.profile.direction;
+    let pair = 0;
+    while (pair < pairMet.length && (pairMet[pair] !== met.axes || pairJoined[pair] !== joined.axes)) pair++;
+    let metU: number;
+    let metV: number;
+    let joinedU: number;
+    let joinedV: number;
+    let metDirection: ReadonlyVec3;
+    if (pair < pairMet.length) {
+      metU = pairDots[4 * pair];
+      metV = pairDots[4 * pair + 1];
+      joinedU = pairDots[4 * pair + 2];
+      joinedV = pairDots[4 * pair + 3];
+      metDirection = pairMetDirection[pair];
+    } else {
+      const d = joined.profile.direction;
+      metDirection = met.profile.direction;
+      metU = dot(met.axes.u, d);
+      metV = dot(met.axes.v, d);
+      joinedU = Math.abs(dot(joined.axes.u, metDirection));
+      joinedV = Math.abs(dot(joined.axes.v, metDirection));
+      if (pair < PAIRS_KEPT) {
+        pairMet.push(met.axes);
+        pairJoined.push(joined.axes);
+        pairMetDirection.push(metDirection);
+        pairDots[4 * pair] = metU;
+        pairDots[4 * pair + 1] = metV;
+        pairDots[4 * pair + 2] = joinedU;
+        pairDots[4 * pair + 3] = joinedV;
+      }
+    }
     const sign = end === 'start' ? 1 : -1;
-    const cu = sign * dot(met.axes.u, d);
-    const cv = sign * dot(met.axes.v, d);
+    const cu = sign * metU;
+    const cv = sign * metV;
     const face = Math.abs(cu) >= Math.abs(cv) ? (cu >= 0 ? 0 : 2) : cv >= 0 ? 1 : 3;
     const cosine = face === 0 ? cu : face === 2 ? -cu : face === 1 ? cv : -cv;
     if (cosine < 0.7) continue;
-    const centre = projectAlong(met, memberPoint(joined, joint.members[0]));
+    // As `projectAlong` and `sectionHalfExtentAlong`, with the pair's numbers.
+    const p = memberPoint(joined, joint.members[0]);
+    const s0 = met.startPoint;
+    const along = (p[0] - s0[0]) * metDirection[0] + (p[1] - s0[1]) * metDirection[1] + (p[2] - s0[2]) * metDirection[2];
+    const centre = Math.min(Math.max(along, 0), met.profile.length);
     const exact = joint.kind === 'concealed-connector';
-    const footprint = sectionHalfExtentAlong(joined.axes, joined.width, joined.height, met.profile.direction);
+    const footprint = (joinedU * joined.width) / 2 + (joinedV * joined.height) / 2;
     const half = exact ? connector.occupiedSlotLength / 2 : footprint + connector.occupiedSlotLength;
     const key = met.index * 4 + face;
     const k = claims.count++;
