@@ -343,6 +343,41 @@ interface LegColumn {
   sectionModulus: number;
 }
 
+/** The leg column of a section and length from `columns`, worked out on first use. */
+function legColumn(
+  columns: Map<object, Map<number, LegColumn>>,
+  props: NonNullable<ProfileInfo['variant']>['sectionProperties'],
+  length: number,
+  K: number,
+  f0: number,
+  E: number,
+  racking: RackingResult,
+  legCount: number,
+): LegColumn {
+  let byLength = columns.get(props);
+  if (!byLength) columns.set(props, (byLength = new Map()));
+  let column = byLength.get(length);
+  if (column) return column;
+  const I = Math.min(props.ix, props.iy);
+  const cap = columnCapacity({ area: props.area, secondMoment: I, proofStrength: f0, elasticModulus: E, effectiveLength: K * length });
+  // Side loads on an unbraced frame: each leg takes an equal share as shear, bending it from its top joint.
+  const mx = racking.bracedX ? 0 : (racking.sideLoadX / legCount) * length;
+  const mz = racking.bracedZ ? 0 : (racking.sideLoadZ / legCount) * length;
+  const moment = Math.hypot(mx, mz);
+  column = {
+    cap,
+    criticalLoad: round(cap.criticalLoad),
+    squashLoad: round(cap.squashLoad),
+    chi: Math.round(cap.chi * 10000) / 10000,
+    bucklingLoad: round(cap.bucklingLoad),
+    moment,
+    bendingMoment: Math.round(moment),
+    sectionModulus: Math.min(props.sx, props.sy),
+  };
+  byLength.set(length, column);
+  return column;
+}
+
 function legChecks(ctx: AnalysisContext, legs: ProfileInfo[], loads: { force: number; x: number; z: number }[], racking: RackingResult, E: number, f0: number): LegResult[] {
   if (legs.length === 0) return [];
   // Plan positions in typed lists: no object per leg.
@@ -364,33 +399,20 @@ function legChecks(ctx: AnalysisContext, legs: ProfileInfo[], loads: { force: nu
   // Feet and casters repeat a few catalogue parts: the last rating looked up is kept.
   let lastPartId: string | undefined;
   let lastRating: number | null = null;
+  // Legs come in runs of one section and length: the last column is kept beside the maps.
+  let lastProps: object | undefined;
+  let lastLength = NaN;
+  let lastColumn: LegColumn | undefined;
   for (let i = 0; i < legs.length; i++) {
     const leg = legs[i];
     const props = leg.variant?.sectionProperties;
     if (!props) continue;
-    let byLength = columns.get(props);
-    if (!byLength) columns.set(props, (byLength = new Map()));
     const length = leg.profile.length;
-    let column = byLength.get(length);
-    if (!column) {
-      const I = Math.min(props.ix, props.iy);
-      const cap = columnCapacity({ area: props.area, secondMoment: I, proofStrength: f0, elasticModulus: E, effectiveLength: K * length });
-      // Side loads on an unbraced frame: each leg takes an equal share as shear, bending it from its top joint.
-      const mx = racking.bracedX ? 0 : (racking.sideLoadX / legs.length) * length;
-      const mz = racking.bracedZ ? 0 : (racking.sideLoadZ / legs.length) * length;
-      const moment = Math.hypot(mx, mz);
-      column = {
-        cap,
-        criticalLoad: round(cap.criticalLoad),
-        squashLoad: round(cap.squashLoad),
-        chi: Math.round(cap.chi * 10000) / 10000,
-        bucklingLoad: round(cap.bucklingLoad),
-        moment,
-        bendingMoment: Math.round(moment),
-        sectionModulus: Math.min(props.sx, props.sy),
-      };
-      byLength.set(length, column);
-    }
+    let column = props === lastProps && length === lastLength ? lastColumn : undefined;
+    if (!column) column = legColumn(columns, props, length, K, f0, E, racking, legs.length);
+    lastProps = props;
+    lastLength = length;
+    lastColumn = column;
     const cap = column.cap;
     const load = shares[i];
     const combined = axialBendingUtilisation({ axialLoad: load, bucklingLoad: cap.bucklingLoad, moment: column.moment, sectionModulus: column.sectionModulus, proofStrength: f0, safetyFactor: sf });

@@ -57,13 +57,18 @@ export function shareLegLoadsAt(xs: Float64Array, zs: Float64Array, loads: reado
   let cz = 0;
   let sxx = 0;
   let szz = 0;
+  // Each leg's offset from the centroid, worked out once for every load.
+  const dx = new Float64Array(n);
+  const dz = new Float64Array(n);
   if (!rect) {
     for (let i = 0; i < n; i++) cx += xs[i];
     cx /= n;
     for (let i = 0; i < n; i++) cz += zs[i];
     cz /= n;
-    for (let i = 0; i < n; i++) sxx += (xs[i] - cx) ** 2;
-    for (let i = 0; i < n; i++) szz += (zs[i] - cz) ** 2;
+    for (let i = 0; i < n; i++) dx[i] = xs[i] - cx;
+    for (let i = 0; i < n; i++) dz[i] = zs[i] - cz;
+    for (let i = 0; i < n; i++) sxx += dx[i] ** 2;
+    for (let i = 0; i < n; i++) szz += dz[i] ** 2;
   }
   const shares = new Float64Array(n);
   for (const load of loads) {
@@ -81,10 +86,13 @@ export function shareLegLoadsAt(xs: Float64Array, zs: Float64Array, loads: reado
       continue;
     }
     let total = 0;
+    const ax = load.x - cx;
+    const az = load.z - cz;
+    const even = 1 / n;
     for (let i = 0; i < n; i++) {
-      let r = 1 / n;
-      if (sxx > 0) r += ((load.x - cx) * (xs[i] - cx)) / sxx;
-      if (szz > 0) r += ((load.z - cz) * (zs[i] - cz)) / szz;
+      let r = even;
+      if (sxx > 0) r += (ax * dx[i]) / sxx;
+      if (szz > 0) r += (az * dz[i]) / szz;
       shares[i] = Math.max(0, r);
       total += shares[i];
     }
