@@ -139,6 +139,8 @@ function floorContactXZ(ctx: AnalysisContext): { points: PlanPoints; kind: 'feet
  */
 function convexHullXZ(points: PlanPoints): P2[] {
   const { x, z } = points;
+  const columns = x.length > 2 && plainNumbers(x) && plainNumbers(z) ? columnEnds(x, z) : null;
+  if (columns && columns.x.length >= 3) return chain(columns.x, columns.z);
   const order: number[] = [];
   for (let k = 0; k < x.length; k++) order.push(k);
   order.sort((a, b) => x[a] - x[b] || z[a] - z[b]);
@@ -152,6 +154,76 @@ function convexHullXZ(points: PlanPoints): P2[] {
   const upper: number[] = [];
   for (let k = order.length - 1; k >= 0; k--) {
     const p = order[k];
+    while (upper.length >= 2 && crossAt(x, z, upper[upper.length - 2], upper[upper.length - 1], p) <= 0) upper.pop();
+    upper.push(p);
+  }
+  upper.pop();
+  lower.pop();
+  const hull: P2[] = [];
+  for (const k of lower) hull.push([x[k], z[k]]);
+  for (const k of upper) hull.push([x[k], z[k]]);
+  return hull;
+}
+
+/** Whether every number is finite and none is −0 (the fast hull below assumes both). */
+function plainNumbers(values: readonly number[]): boolean {
+  for (let k = 0; k < values.length; k++) {
+    const v = values[k];
+    if (!Number.isFinite(v) || (v === 0 && 1 / v < 0)) return false;
+  }
+  return true;
+}
+
+/**
+ * The points that can be hull corners, in the hull's sort order (x, then z): per distinct x, the
+ * lowest and the highest z. The monotone chain drops the rest anyway (a point between two of the
+ * same x is popped with a cross product of exactly 0 as soon as the next one arrives, and pops
+ * nothing before: its cross product with the point below it is positive), and duplicates likewise,
+ * so it finds the same corners. Feet of a large frame stand in a few rows: thousands of points,
+ * a hundred or so candidates, and a plain numeric sort instead of one with a comparator.
+ */
+function columnEnds(x: readonly number[], z: readonly number[]): PlanPoints {
+  const n = x.length;
+  const sorted = Float64Array.from(x).sort();
+  const ux = new Float64Array(n);
+  let m = 0;
+  for (let k = 0; k < n; k++) if (k === 0 || sorted[k] !== sorted[k - 1]) ux[m++] = sorted[k];
+  const low = new Float64Array(m).fill(Infinity);
+  const high = new Float64Array(m).fill(-Infinity);
+  for (let k = 0; k < n; k++) {
+    // The column of x[k]: a binary search in the distinct values.
+    let a = 0;
+    let b = m - 1;
+    while (a < b) {
+      const mid = (a + b) >> 1;
+      if (ux[mid] < x[k]) a = mid + 1;
+      else b = mid;
+    }
+    if (z[k] < low[a]) low[a] = z[k];
+    if (z[k] > high[a]) high[a] = z[k];
+  }
+  const out: PlanPoints = { x: [], z: [] };
+  for (let c = 0; c < m; c++) {
+    out.x.push(ux[c]);
+    out.z.push(low[c]);
+    if (high[c] > low[c]) {
+      out.x.push(ux[c]);
+      out.z.push(high[c]);
+    }
+  }
+  return out;
+}
+
+/** The monotone chain of `convexHull` over points already in its sort order. */
+function chain(x: readonly number[], z: readonly number[]): P2[] {
+  const n = x.length;
+  const lower: number[] = [];
+  for (let p = 0; p < n; p++) {
+    while (lower.length >= 2 && crossAt(x, z, lower[lower.length - 2], lower[lower.length - 1], p) <= 0) lower.pop();
+    lower.push(p);
+  }
+  const upper: number[] = [];
+  for (let p = n - 1; p >= 0; p--) {
     while (upper.length >= 2 && crossAt(x, z, upper[upper.length - 2], upper[upper.length - 1], p) <= 0) upper.pop();
     upper.push(p);
   }
