@@ -81,9 +81,12 @@ export function jointFindings(ctx: AnalysisContext): Finding[] {
   };
   const infos: ProfileInfo[] = [];
   for (let j = 0; j < joints.length; j++) checkJoint(ctx, j, infos, findings, cache);
-  checkProfileEnds(ctx, findings);
+  // Access holes are checked in the profile-ends pass (both read each profile's machining) and
+  // listed after the slot claims, where they have always been.
+  const accessFindings: Finding[] = [];
+  checkProfileEnds(ctx, findings, accessFindings);
   checkSlotClaims(ctx, findings, cache);
-  checkAccessHolesUncovered(ctx, findings);
+  for (let k = 0; k < accessFindings.length; k++) findings.push(accessFindings[k]);
   return findings;
 }
 
@@ -321,11 +324,13 @@ function hasTNutInCatalogue(ctx: AnalysisContext, cache: JointCheckCache, system
 /** Both ends, in the order the checks visit them (one list, not one per profile). */
 const ENDS: readonly ProfileEnd[] = ['start', 'end'];
 
-function checkProfileEnds(ctx: AnalysisContext, out: Finding[]): void {
+/** Profile ends, and (into `accessOut`) each profile's access holes while its machining is at hand. */
+function checkProfileEnds(ctx: AnalysisContext, out: Finding[], accessOut: Finding[]): void {
   // Index loops: these run for every profile end, and iterators here were allocated per profile.
   const profiles = ctx.profiles;
   for (let i = 0; i < profiles.length; i++) {
     const info = profiles[i];
+    checkAccessHolesUncovered(ctx, info, accessOut);
     for (let e = 0; e < ENDS.length; e++) {
       const end = ENDS[e];
       if (jointCountAt(info, end) > 0) continue;
@@ -377,7 +382,8 @@ function hasEndCloser(accessories: readonly { kind: string }[]): boolean {
 
 /** Feet and casters thread into the centre bore: the end must be tapped. `accessories`: those at the end. */
 function checkThreadedEnd(info: ProfileInfo, end: ProfileEnd, accessories: readonly { id: string; kind: string }[], out: Finding[]): void {
-  const threaded = accessories.find((a) => a.kind === 'leveling-foot' || a.kind === 'caster');
+  let threaded: { id: string; kind: string } | undefined;
+  for (let k = 0; k < accessories.length && !threaded; k++) if (accessories[k].kind === 'leveling-foot' || accessories[k].kind === 'caster') threaded = accessories[k];
   if (!threaded) return;
   for (const m of info.profile.machining) if (m.kind === 'end-tap' && m.fromEnd === end) return;
   const word = threaded.kind === 'caster' ? 'caster' : 'leveling foot';
@@ -560,25 +566,21 @@ function sortByLo(list: number[], lo: Float64Array): void {
   }
 }
 
-function checkAccessHolesUncovered(ctx: AnalysisContext, out: Finding[]): void {
-  const profiles = ctx.profiles;
-  for (let i = 0; i < profiles.length; i++) {
-    const info = profiles[i];
-    const machining = info.profile.machining;
-    for (let k = 0; k < machining.length; k++) {
-      const m = machining[k];
-      if (m.kind !== 'access-counterbore' && m.kind !== 'access-hole') continue;
-      const probe = pointOffFace(info, m.face, machiningAlong(info, m), COVER_PROBE_MM);
-      const other = firstProfileAtPoint(ctx, probe, 0, info.index, () => true);
-      if (!other) continue;
-      out.push({
-        id: findingId(CHECK, 'access-covered', [info.profile.id, m.id]),
-        check: CHECK,
-        severity: 'error',
-        partIds: [info.profile.id, other.profile.id],
-        message: `The ${MACHINING_WORDS[m.kind]} on face ${m.face} of ${profileName(info, info.profile.id)} is covered by ${profileName(other, other.profile.id)}, so the hex key cannot reach the screw. Put the hole on a free face.`,
-      });
-    }
+function checkAccessHolesUncovered(ctx: AnalysisContext, info: ProfileInfo, out: Finding[]): void {
+  const machining = info.profile.machining;
+  for (let k = 0; k < machining.length; k++) {
+    const m = machining[k];
+    if (m.kind !== 'access-counterbore' && m.kind !== 'access-hole') continue;
+    const probe = pointOffFace(info, m.face, machiningAlong(info, m), COVER_PROBE_MM);
+    const other = firstProfileAtPoint(ctx, probe, 0, info.index, () => true);
+    if (!other) continue;
+    out.push({
+      id: findingId(CHECK, 'access-covered', [info.profile.id, m.id]),
+      check: CHECK,
+      severity: 'error',
+      partIds: [info.profile.id, other.profile.id],
+      message: `The ${MACHINING_WORDS[m.kind]} on face ${m.face} of ${profileName(info, info.profile.id)} is covered by ${profileName(other, other.profile.id)}, so the hex key cannot reach the screw. Put the hole on a free face.`,
+    });
   }
 }
 
