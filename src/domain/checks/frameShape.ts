@@ -37,7 +37,9 @@ export function panelSupports(ctx: AnalysisContext, panel: PanelInfo): ProfileIn
 export function findLegs(ctx: AnalysisContext): ProfileInfo[] {
   const { floor } = frameLevels(ctx);
   const legs: ProfileInfo[] = [];
-  for (const p of ctx.profiles) {
+  const profiles = ctx.profiles;
+  for (let i = 0; i < profiles.length; i++) {
+    const p = profiles[i];
     if (Math.abs(p.profile.direction[1]) < VERTICAL) continue;
     const bottom = Math.min(p.startPoint[1], p.endPoint[1]);
     if (bottom - floor <= FLOOR_TOLERANCE_MM + Math.max(p.width, p.height) / 2) legs.push(p);
@@ -52,23 +54,29 @@ export function findLegs(ctx: AnalysisContext): ProfileInfo[] {
 export function frameBracing(ctx: AnalysisContext): { x: boolean; z: boolean } {
   let x = false;
   let z = false;
-  for (const p of ctx.profiles) {
-    const d = p.profile.direction;
+  const profiles = ctx.profiles;
+  for (let i = 0; i < profiles.length; i++) {
+    const d = profiles[i].profile.direction;
     // Counted, not filtered into a list: one array per profile adds up at 8,000 profiles.
     const offAxis = (Math.abs(d[0]) > DIAGONAL ? 1 : 0) + (Math.abs(d[1]) > DIAGONAL ? 1 : 0) + (Math.abs(d[2]) > DIAGONAL ? 1 : 0) >= 2;
     if (!offAxis || Math.abs(d[1]) <= DIAGONAL) continue;
     if (Math.abs(d[0]) > DIAGONAL) x = true;
     if (Math.abs(d[2]) > DIAGONAL) z = true;
   }
-  for (const joint of ctx.design.joints) {
+  // Index loops: this runs once per analysis, often before the engine optimises it, and an
+  // unoptimised for…of makes a result object per joint.
+  const joints = ctx.design.joints;
+  for (let j = 0; j < joints.length; j++) {
+    const joint = joints[j];
     if (joint.kind !== 'gusset-plate') continue;
     const axes = joint.members.map((m) => ctx.profileById.get(m.profileId)).filter((i): i is ProfileInfo => !!i).map((i) => dominantAxis(i.profile.direction));
     if (!axes.includes(1)) continue;
     if (axes.includes(0)) x = true;
     if (axes.includes(2)) z = true;
   }
-  for (const panel of ctx.panels) {
-    const n = panel.panel.rect.normal;
+  const panels = ctx.panels;
+  for (let k = 0; k < panels.length; k++) {
+    const n = panels[k].panel.rect.normal;
     if (n === 'z') x = true;
     if (n === 'x') z = true;
   }

@@ -7,9 +7,10 @@
 import type { Finding } from '../analysis/types';
 import type { Joint, Machining, ProfileEnd } from '../design/schema';
 import type { Connector, ConnectorMachining } from '../catalogue/types';
-import { sectionHalfExtentAlong } from '../geometry/profileGeometry';
-import { dot } from '../geometry/vectors';
-import { CONTACT_TOLERANCE_MM, accessoriesAt, areJoined, jointCountAt, memberEnd, memberInfo, memberPoint, type AnalysisContext, type ProfileInfo } from '../analysis/context';
+import type { SectionAxes } from '../geometry/profileGeometry';
+import { dot, type ReadonlyVec3 } from '../geometry/vectors';
+import { CONTACT_TOLERANCE_MM, accessoriesAt, areJoined, jointCountAt, memberEnd, memberPoint, type AnalysisContext, type ProfileInfo } from '../analysis/context';
+import type { UniformGrid } from '../geometry/spatialGrid';
 import { capitalise, countOf, endPhrase, findingId, jointName, mm, profileName } from '../analysis/describe';
 import { distancePointToProfile, firstProfileAtPoint, pointOffFace, projectAlong } from './geometryQueries';
 import { addEndCapFix, addMachiningFix } from './fixes';
@@ -24,37 +25,79 @@ const MAX_CONNECTORS_PER_JOINT = 4;
 /** Lift (mm) of the probe point off a face when asking whether something covers a hole. */
 const COVER_PROBE_MM = 1;
 
+/** Orientation pairs the slot-claim check keeps answers for (a frame has a few). */
+const PAIRS_KEPT = 8;
+
 const END_CLOSERS = new Set(['end-cap', 'leveling-foot', 'caster']);
 const SLOT_CONNECTOR_KINDS = new Set(['corner-bracket', 'gusset-plate', 'concealed-connector']);
 
-/** Per-analysis answers that depend only on the catalogue part, so each is worked out once. */
+/**
+ * What the per-joint checks read from the context, taken from it once, and per-analysis answers
+ * that depend only on the catalogue part, so each is worked out once. The context object keeps
+ * its properties in a dictionary (a hash look-up on every read); this record keeps them in fixed
+ * slots, which matters for reads made once per joint.
+ */
 interface JointCheckCache {
+  joints: readonly Joint[];
+  profiles: readonly ProfileInfo[];
+  /** `AnalysisContext.jointMemberStart` and `jointMemberProfile`. */
+  memberStart: Int32Array;
+  memberProfile: Int32Array;
+  grid: UniformGrid;
   /** Screws a connector lists that the catalogue lacks. */
   unknownScrews: Map<Connector, number>;
   /** System id → T-nut kind → whether the catalogue has that T-nut. */
   hasTNut: Map<string, Map<string, boolean>>;
+  /** The connector id looked up last and its connector: joints come in runs with one connector. */
+  lastConnectorId: string | undefined;
+  lastConnector: Connector | undefined;
+  /** The connector whose unknown screws were counted last, and the count. */
+  screwsConnector: Connector | undefined;
+  screwsUnknown: number;
+  /** The last T-nut question (system, kind) and its answer. */
+  tNutSystemId: string | undefined;
+  tNutKind: string | undefined;
+  tNutKnown: boolean;
 }
 
 export function jointFindings(ctx: AnalysisContext): Finding[] {
   const findings: Finding[] = [];
-  const cache: JointCheckCache = { unknownScrews: new Map(), hasTNut: new Map() };
   const joints = ctx.design.joints;
+  const cache: JointCheckCache = {
+    joints,
+    profiles: ctx.profiles,
+    memberStart: ctx.jointMemberStart,
+    memberProfile: ctx.jointMemberProfile,
+    grid: ctx.profileGrid,
+    unknownScrews: new Map(),
+    hasTNut: new Map(),
+    lastConnectorId: undefined,
+    lastConnector: undefined,
+    screwsConnector: undefined,
+    screwsUnknown: 0,
+    tNutSystemId: undefined,
+    tNutKind: undefined,
+    tNutKnown: false,
+  };
   const infos: ProfileInfo[] = [];
   for (let j = 0; j < joints.length; j++) checkJoint(ctx, j, infos, findings, cache);
-  checkProfileEnds(ctx, findings);
-  checkSlotClaims(ctx, findings);
-  checkAccessHolesUncovered(ctx, findings);
+  // Access holes are checked in the profile-ends pass (both read each profile's machining) and
+  // listed after the slot claims, where they have always been.
+  const accessFindings: Finding[] = [];
+  checkProfileEnds(ctx, findings, accessFindings);
+  checkSlotClaims(ctx, findings, cache);
+  for (let k = 0; k < accessFindings.length; k++) findings.push(accessFindings[k]);
   return findings;
 }
 
 /** `infos`: a scratch list, refilled with the joint's member profiles (the checks below read it and keep none of it). */
 function checkJoint(ctx: AnalysisContext, jointIndex: number, infos: ProfileInfo[], out: Finding[], cache: JointCheckCache): void {
-  const joint = ctx.design.joints[jointIndex];
+  const joint = cache.joints[jointIndex];
   // Emptied by pop(): setting `length` takes a slow path in the engine, once per joint.
   while (infos.length > 0) infos.pop();
   let missing: string[] | null = null;
   for (let k = 0; k < joint.members.length; k++) {
-    const info = memberInfo(ctx, jointIndex, k);
+    const info = memberOf(cache, jointIndex, k);
     if (info) infos.push(info);
     else (missing ??= []).push(joint.members[k].profileId);
   }
@@ -68,7 +111,11 @@ function checkJoint(ctx: AnalysisContext, jointIndex: number, infos: ProfileInfo
     });
     return;
   }
-  const connector = ctx.catalogue.connectors.get(joint.connectorId);
+  if (joint.connectorId !== cache.lastConnectorId) {
+    cache.lastConnectorId = joint.connectorId;
+    cache.lastConnector = ctx.catalogue.connectors.get(joint.connectorId);
+  }
+  const connector = cache.lastConnector;
   if (!connector) {
     out.push({
       id: findingId(CHECK, 'unknown-connector', [joint.id]),
@@ -100,36 +147,48 @@ function checkJoint(ctx: AnalysisContext, jointIndex: number, infos: ProfileInfo
       });
     }
   }
-  checkMembersMeet(ctx, joint, connector, infos, out);
+  checkMembersMeet(ctx, joint, connector, infos, out, cache.grid);
   checkMachining(joint, connector, infos, out);
   checkCounts(ctx, joint, connector, infos, out, cache);
+}
+
+/** `memberInfo` read from the check's copies of the context's member tables. */
+function memberOf(cache: JointCheckCache, jointIndex: number, k: number): ProfileInfo | undefined {
+  const at = cache.memberStart[jointIndex] + k;
+  if (k < 0 || at >= cache.memberStart[jointIndex + 1]) return undefined;
+  const i = cache.memberProfile[at];
+  return i < 0 ? undefined : cache.profiles[i];
 }
 
 function memberIdsOf(joint: Joint): string[] {
   return joint.members.map((m) => m.profileId);
 }
 
-function checkMembersMeet(ctx: AnalysisContext, joint: Joint, connector: Connector, infos: ProfileInfo[], out: Finding[]): void {
+function checkMembersMeet(ctx: AnalysisContext, joint: Joint, connector: Connector, infos: ProfileInfo[], out: Finding[], grid: UniformGrid): void {
   if (joint.kind === 'hinge' || infos.length < 2) return;
-  const p0 = memberPoint(infos[0], joint.members[0]);
-  let gap: number;
-  if (joint.kind === 'corner-cube') {
-    // The cube sits between the ends: each end lies within one section size of the others.
-    const reach = Math.max(...infos.map((i) => Math.max(i.width, i.height)));
-    gap = Math.max(...infos.slice(1).map((info, k) => distancePointToProfile(ctx, memberPoint(info, joint.members[k + 1]), infos[0].index))) - reach;
-  } else {
-    gap = distancePointToProfile(ctx, p0, infos[1].index);
-  }
-  if (gap > MEMBERS_MEET_TOLERANCE_MM) {
-    out.push({
-      id: findingId(CHECK, 'members-apart', [joint.id]),
-      check: CHECK,
-      severity: 'error',
-      partIds: [joint.id, ...infos.map((i) => i.profile.id)],
-      message: `The ${connector.name} joins ${infos.map((i) => profileName(i)).join(' and ')}, but they are ${mm(gap)} apart. Move the profiles together or remove the joint.`,
-      data: { gapMm: round(gap) },
-    });
-  }
+  const gap = joint.kind === 'corner-cube' ? cornerCubeGap(ctx, joint, infos) : grid.distanceToPoint(infos[1].index, memberPoint(infos[0], joint.members[0]));
+  if (gap > MEMBERS_MEET_TOLERANCE_MM) membersApart(joint, connector, infos, gap, out);
+}
+
+/** The cube sits between the ends: each end lies within one section size of the others. */
+function cornerCubeGap(ctx: AnalysisContext, joint: Joint, infos: ProfileInfo[]): number {
+  const reach = Math.max(...infos.map((i) => Math.max(i.width, i.height)));
+  return Math.max(...infos.slice(1).map((info, k) => distancePointToProfile(ctx, memberPoint(info, joint.members[k + 1]), infos[0].index))) - reach;
+}
+
+/**
+ * The members-apart finding. Closures live here and in `cornerCubeGap`, not in
+ * `checkMembersMeet`: there they would make a context per joint once any joint needed them.
+ */
+function membersApart(joint: Joint, connector: Connector, infos: ProfileInfo[], gap: number, out: Finding[]): void {
+  out.push({
+    id: findingId(CHECK, 'members-apart', [joint.id]),
+    check: CHECK,
+    severity: 'error',
+    partIds: [joint.id, ...infos.map((i) => i.profile.id)],
+    message: `The ${connector.name} joins ${infos.map((i) => profileName(i)).join(' and ')}, but they are ${mm(gap)} apart. Move the profiles together or remove the joint.`,
+    data: { gapMm: round(gap) },
+  });
 }
 
 function checkMachining(joint: Joint, connector: Connector, infos: ProfileInfo[], out: Finding[]): void {
@@ -202,11 +261,14 @@ function checkCounts(ctx: AnalysisContext, joint: Joint, connector: Connector, i
       message: `${capitalise(jointName(ctx, joint))} lists ${joint.quantity} ${connector.name}s; a profile has only four faces. Check the quantity.`,
     });
   }
-  let unknownScrews = cache.unknownScrews.get(connector);
-  if (unknownScrews === undefined) {
-    unknownScrews = connector.fasteners.filter((f) => !ctx.catalogue.fasteners.has(f.fastenerId)).length;
-    cache.unknownScrews.set(connector, unknownScrews);
+  // Joints come in runs with one connector: the last answer is kept beside the map.
+  if (connector !== cache.screwsConnector) {
+    let count = cache.unknownScrews.get(connector);
+    if (count === undefined) cache.unknownScrews.set(connector, (count = unknownScrewCount(ctx, connector)));
+    cache.screwsConnector = connector;
+    cache.screwsUnknown = count;
   }
+  const unknownScrews = cache.screwsUnknown;
   if (unknownScrews > 0) {
     out.push({
       id: findingId(CHECK, 'unknown-fastener', [joint.id]),
@@ -230,8 +292,28 @@ function checkCounts(ctx: AnalysisContext, joint: Joint, connector: Connector, i
   }
 }
 
+/**
+ * Screws a connector lists that the catalogue lacks. A function of its own: a closure over `ctx`
+ * inside `checkCounts` made the engine allocate a context for `ctx` on every call (once per joint),
+ * even though the closure itself runs once per connector.
+ */
+function unknownScrewCount(ctx: AnalysisContext, connector: Connector): number {
+  let count = 0;
+  for (const f of connector.fasteners) if (!ctx.catalogue.fasteners.has(f.fastenerId)) count++;
+  return count;
+}
+
 /** Whether the catalogue has this T-nut for the system; one answer per system and kind, no key string per joint. */
 function hasTNut(ctx: AnalysisContext, cache: JointCheckCache, systemId: string, kind: string): boolean {
+  // The last question asked is kept: joints come in runs with one system and T-nut kind.
+  if (systemId === cache.tNutSystemId && kind === cache.tNutKind) return cache.tNutKnown;
+  cache.tNutSystemId = systemId;
+  cache.tNutKind = kind;
+  cache.tNutKnown = hasTNutInCatalogue(ctx, cache, systemId, kind);
+  return cache.tNutKnown;
+}
+
+function hasTNutInCatalogue(ctx: AnalysisContext, cache: JointCheckCache, systemId: string, kind: string): boolean {
   let bySystem = cache.hasTNut.get(systemId);
   if (!bySystem) cache.hasTNut.set(systemId, (bySystem = new Map()));
   let known = bySystem.get(kind);
@@ -242,10 +324,13 @@ function hasTNut(ctx: AnalysisContext, cache: JointCheckCache, systemId: string,
 /** Both ends, in the order the checks visit them (one list, not one per profile). */
 const ENDS: readonly ProfileEnd[] = ['start', 'end'];
 
-function checkProfileEnds(ctx: AnalysisContext, out: Finding[]): void {
+/** Profile ends, and (into `accessOut`) each profile's access holes while its machining is at hand. */
+function checkProfileEnds(ctx: AnalysisContext, out: Finding[], accessOut: Finding[]): void {
   // Index loops: these run for every profile end, and iterators here were allocated per profile.
-  for (let i = 0; i < ctx.profiles.length; i++) {
-    const info = ctx.profiles[i];
+  const profiles = ctx.profiles;
+  for (let i = 0; i < profiles.length; i++) {
+    const info = profiles[i];
+    checkAccessHolesUncovered(ctx, info, accessOut);
     for (let e = 0; e < ENDS.length; e++) {
       const end = ENDS[e];
       if (jointCountAt(info, end) > 0) continue;
@@ -255,9 +340,7 @@ function checkProfileEnds(ctx: AnalysisContext, out: Finding[]): void {
         checkThreadedEnd(info, end, accessories, out);
         continue;
       }
-      const point = end === 'start' ? info.startPoint : info.endPoint;
-      // The first unjoined neighbour is enough (and stays cheap when many profiles share the point).
-      const other = firstProfileAtPoint(ctx, point, CONTACT_TOLERANCE_MM, info.index, (candidate) => !areJoined(ctx, info.profile.id, candidate.profile.id));
+      const other = unjoinedNeighbourAt(ctx, info, end);
       if (other) {
         out.push({
           id: findingId(CHECK, 'touching-unjoined', [info.profile.id, end, other.profile.id]),
@@ -281,6 +364,16 @@ function checkProfileEnds(ctx: AnalysisContext, out: Finding[]): void {
   }
 }
 
+/**
+ * The first profile touching this end that no joint holds to it (the first is enough, and stays
+ * cheap when many profiles share the point). Its own function: the closure over `info` inside the
+ * loop of `checkProfileEnds` made a context per profile, used or not.
+ */
+function unjoinedNeighbourAt(ctx: AnalysisContext, info: ProfileInfo, end: ProfileEnd): ProfileInfo | undefined {
+  const point = end === 'start' ? info.startPoint : info.endPoint;
+  return firstProfileAtPoint(ctx, point, CONTACT_TOLERANCE_MM, info.index, (candidate) => !areJoined(ctx, info.profile.id, candidate.profile.id));
+}
+
 /** Whether an end has a cap, foot or caster (a loop, not `some` with a closure, for every profile end). */
 function hasEndCloser(accessories: readonly { kind: string }[]): boolean {
   for (const a of accessories) if (END_CLOSERS.has(a.kind)) return true;
@@ -289,7 +382,8 @@ function hasEndCloser(accessories: readonly { kind: string }[]): boolean {
 
 /** Feet and casters thread into the centre bore: the end must be tapped. `accessories`: those at the end. */
 function checkThreadedEnd(info: ProfileInfo, end: ProfileEnd, accessories: readonly { id: string; kind: string }[], out: Finding[]): void {
-  const threaded = accessories.find((a) => a.kind === 'leveling-foot' || a.kind === 'caster');
+  let threaded: { id: string; kind: string } | undefined;
+  for (let k = 0; k < accessories.length && !threaded; k++) if (accessories[k].kind === 'leveling-foot' || accessories[k].kind === 'caster') threaded = accessories[k];
   if (!threaded) return;
   for (const m of info.profile.machining) if (m.kind === 'end-tap' && m.fromEnd === end) return;
   const word = threaded.kind === 'caster' ? 'caster' : 'leveling foot';
@@ -318,8 +412,9 @@ interface SlotClaims {
   count: number;
 }
 
-function checkSlotClaims(ctx: AnalysisContext, out: Finding[]): void {
-  const joints = ctx.design.joints;
+function checkSlotClaims(ctx: AnalysisContext, out: Finding[], cache: JointCheckCache): void {
+  const joints = cache.joints;
+  const connectors = ctx.catalogue.connectors;
   const claims: SlotClaims = {
     joint: new Int32Array(joints.length),
     lo: new Float64Array(joints.length),
@@ -329,32 +424,86 @@ function checkSlotClaims(ctx: AnalysisContext, out: Finding[]): void {
     count: 0,
   };
   // Per slot face: its first and last claim (−1: none), and the faces in the order first claimed.
-  const faceCount = ctx.profiles.length * 4;
+  const faceCount = cache.profiles.length * 4;
   const firstClaim = new Int32Array(faceCount).fill(-1);
   const lastClaim = new Int32Array(faceCount);
-  const facesInOrder: number[] = [];
+  // At most one face per claim: a typed list of that length rather than a list grown by push.
+  const facesInOrder = new Int32Array(joints.length);
+  let faceTotal = 0;
+  // Joints come in runs with one connector: the last one looked up is kept.
+  let lastConnectorId: string | undefined;
+  let lastConnector: Connector | undefined;
+  // What depends only on the orientations of the met and the joined profile, per pair of them:
+  // profiles of one analysis context with exactly the same direction and roll share one
+  // SectionAxes object (the context's orientation cache compares the numbers exactly), so a pair of
+  // those objects keys the answer, and the profiles' own directions (scattered in memory) need not
+  // be read per joint. Per pair: the dot products of the met profile's u and v with the joined
+  // direction, the absolute dot products of the joined profile's u and v with the met direction,
+  // and the met direction itself. A frame has a few such pairs; past PAIRS_KEPT they are worked
+  // out per joint.
+  const pairMet: SectionAxes[] = [];
+  const pairJoined: SectionAxes[] = [];
+  const pairDots = new Float64Array(4 * PAIRS_KEPT);
+  const pairMetDirection: ReadonlyVec3[] = [];
   for (let j = 0; j < joints.length; j++) {
     const joint = joints[j];
     if (!SLOT_CONNECTOR_KINDS.has(joint.kind) || joint.members.length !== 2) continue;
-    const connector = ctx.catalogue.connectors.get(joint.connectorId);
-    const joined = memberInfo(ctx, j, 0);
-    const met = memberInfo(ctx, j, 1);
+    if (joint.connectorId !== lastConnectorId) {
+      lastConnectorId = joint.connectorId;
+      lastConnector = connectors.get(joint.connectorId);
+    }
+    const connector = lastConnector;
+    const joined = memberOf(cache, j, 0);
+    const met = memberOf(cache, j, 1);
     if (!connector || !joined || !met) continue;
     const end = memberEnd(joint.members[0], joined);
     if (!end) continue;
     // The joined profile leaves the met profile along its own axis, away from the joined end. The
     // face it meets is the one facing that way (as `faceFacing`, without a vector per joint:
     // negating the direction negates each dot product exactly).
-    const d = joined.profile.direction;
+    let pair = 0;
+    while (pair < pairMet.length && (pairMet[pair] !== met.axes || pairJoined[pair] !== joined.axes)) pair++;
+    let metU: number;
+    let metV: number;
+    let joinedU: number;
+    let joinedV: number;
+    let metDirection: ReadonlyVec3;
+    if (pair < pairMet.length) {
+      metU = pairDots[4 * pair];
+      metV = pairDots[4 * pair + 1];
+      joinedU = pairDots[4 * pair + 2];
+      joinedV = pairDots[4 * pair + 3];
+      metDirection = pairMetDirection[pair];
+    } else {
+      const d = joined.profile.direction;
+      metDirection = met.profile.direction;
+      metU = dot(met.axes.u, d);
+      metV = dot(met.axes.v, d);
+      joinedU = Math.abs(dot(joined.axes.u, metDirection));
+      joinedV = Math.abs(dot(joined.axes.v, metDirection));
+      if (pair < PAIRS_KEPT) {
+        pairMet.push(met.axes);
+        pairJoined.push(joined.axes);
+        pairMetDirection.push(metDirection);
+        pairDots[4 * pair] = metU;
+        pairDots[4 * pair + 1] = metV;
+        pairDots[4 * pair + 2] = joinedU;
+        pairDots[4 * pair + 3] = joinedV;
+      }
+    }
     const sign = end === 'start' ? 1 : -1;
-    const cu = sign * dot(met.axes.u, d);
-    const cv = sign * dot(met.axes.v, d);
+    const cu = sign * metU;
+    const cv = sign * metV;
     const face = Math.abs(cu) >= Math.abs(cv) ? (cu >= 0 ? 0 : 2) : cv >= 0 ? 1 : 3;
     const cosine = face === 0 ? cu : face === 2 ? -cu : face === 1 ? cv : -cv;
     if (cosine < 0.7) continue;
-    const centre = projectAlong(met, memberPoint(joined, joint.members[0]));
+    // As `projectAlong` and `sectionHalfExtentAlong`, with the pair's numbers.
+    const p = memberPoint(joined, joint.members[0]);
+    const s0 = met.startPoint;
+    const along = (p[0] - s0[0]) * metDirection[0] + (p[1] - s0[1]) * metDirection[1] + (p[2] - s0[2]) * metDirection[2];
+    const centre = Math.min(Math.max(along, 0), met.profile.length);
     const exact = joint.kind === 'concealed-connector';
-    const footprint = sectionHalfExtentAlong(joined.axes, joined.width, joined.height, met.profile.direction);
+    const footprint = (joinedU * joined.width) / 2 + (joinedV * joined.height) / 2;
     const half = exact ? connector.occupiedSlotLength / 2 : footprint + connector.occupiedSlotLength;
     const key = met.index * 4 + face;
     const k = claims.count++;
@@ -365,24 +514,26 @@ function checkSlotClaims(ctx: AnalysisContext, out: Finding[]): void {
     claims.next[k] = -1;
     if (firstClaim[key] < 0) {
       firstClaim[key] = k;
-      facesInOrder.push(key);
+      facesInOrder[faceTotal++] = key;
     } else claims.next[lastClaim[key]] = k;
     lastClaim[key] = k;
   }
   const list: number[] = [];
-  for (const key of facesInOrder) {
+  for (let f = 0; f < faceTotal; f++) {
+    const key = facesInOrder[f];
     if (claims.next[firstClaim[key]] < 0) continue;
     while (list.length > 0) list.pop();
     for (let k = firstClaim[key]; k >= 0; k = claims.next[k]) list.push(k);
     sortByLo(list, claims.lo);
-    const metId = ctx.profiles[key >> 2].profile.id;
-    const faceText = String(key & 3);
     let reach = list[0];
     for (let i = 1; i < list.length; i++) {
       const c = list[i];
-      const reachJoint = joints[claims.joint[reach]];
-      const cJoint = joints[claims.joint[c]];
       if (claims.lo[c] < claims.hi[reach] - 0.5) {
+        // Ids and names only for a face whose claims overlap (most faces have none).
+        const metId = ctx.profiles[key >> 2].profile.id;
+        const faceText = String(key & 3);
+        const reachJoint = joints[claims.joint[reach]];
+        const cJoint = joints[claims.joint[c]];
         const both = [reachJoint.id, cJoint.id].sort();
         const bothJoints = reachJoint.id < cJoint.id ? [reachJoint, cJoint] : [cJoint, reachJoint];
         out.push({
@@ -415,24 +566,21 @@ function sortByLo(list: number[], lo: Float64Array): void {
   }
 }
 
-function checkAccessHolesUncovered(ctx: AnalysisContext, out: Finding[]): void {
-  for (let i = 0; i < ctx.profiles.length; i++) {
-    const info = ctx.profiles[i];
-    const machining = info.profile.machining;
-    for (let k = 0; k < machining.length; k++) {
-      const m = machining[k];
-      if (m.kind !== 'access-counterbore' && m.kind !== 'access-hole') continue;
-      const probe = pointOffFace(info, m.face, machiningAlong(info, m), COVER_PROBE_MM);
-      const other = firstProfileAtPoint(ctx, probe, 0, info.index, () => true);
-      if (!other) continue;
-      out.push({
-        id: findingId(CHECK, 'access-covered', [info.profile.id, m.id]),
-        check: CHECK,
-        severity: 'error',
-        partIds: [info.profile.id, other.profile.id],
-        message: `The ${MACHINING_WORDS[m.kind]} on face ${m.face} of ${profileName(info, info.profile.id)} is covered by ${profileName(other, other.profile.id)}, so the hex key cannot reach the screw. Put the hole on a free face.`,
-      });
-    }
+function checkAccessHolesUncovered(ctx: AnalysisContext, info: ProfileInfo, out: Finding[]): void {
+  const machining = info.profile.machining;
+  for (let k = 0; k < machining.length; k++) {
+    const m = machining[k];
+    if (m.kind !== 'access-counterbore' && m.kind !== 'access-hole') continue;
+    const probe = pointOffFace(info, m.face, machiningAlong(info, m), COVER_PROBE_MM);
+    const other = firstProfileAtPoint(ctx, probe, 0, info.index, () => true);
+    if (!other) continue;
+    out.push({
+      id: findingId(CHECK, 'access-covered', [info.profile.id, m.id]),
+      check: CHECK,
+      severity: 'error',
+      partIds: [info.profile.id, other.profile.id],
+      message: `The ${MACHINING_WORDS[m.kind]} on face ${m.face} of ${profileName(info, info.profile.id)} is covered by ${profileName(other, other.profile.id)}, so the hex key cannot reach the screw. Put the hole on a free face.`,
+    });
   }
 }
 

@@ -81,7 +81,10 @@ function loadCaseFindings(ctx: AnalysisContext, r: StructureResult, out: Finding
       data: { reactionN: j.reaction, allowableN: j.allowable, capacityN: j.capacity },
     });
   }
-  for (const leg of r.legs) {
+  // An index loop: this runs once per load case, often before the engine optimises it, and an
+  // unoptimised for…of makes a result object per leg (thousands at 8,000 profiles).
+  for (let i = 0; i < r.legs.length; i++) {
+    const leg = r.legs[i];
     if (leg.combinedUtilisation > 1) {
       const bending = leg.bendingMoment > 0 ? ` together with about ${formatNumber(leg.bendingMoment / 1000, 1)} N·m bending from the side load` : '';
       out.push({

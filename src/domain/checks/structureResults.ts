@@ -25,7 +25,7 @@ import { dot, type Vec3 } from '../geometry/vectors';
 import { axialBendingUtilisation, columnCapacity } from '../structure/aluminiumColumns';
 import { beamResponse, type BeamCase } from '../structure/beams';
 import { EFFECTIVE_LENGTH_FACTORS, type EndCondition } from '../structure/columns';
-import { shareLegLoads } from '../structure/legLoads';
+import { shareLegLoadsAt } from '../structure/legLoads';
 import { oneWayStripDeflection, simplySupportedPlateDeflection } from '../structure/plates';
 import { PUSH_TEST_MIN_HEIGHT_MM, STABILITY_PUSH_FORCE_N } from '../structure/stability';
 import { tipOverForce } from '../structure/tipOver';
@@ -331,65 +331,146 @@ function clampAlong(info: ProfileInfo, t: number): number {
   return Math.min(Math.max(t, 0), info.profile.length);
 }
 
+/** Per leg section and length: the column capacity, rounded for the results, and the side-load bending (N·mm). */
+interface LegColumn {
+  cap: ReturnType<typeof columnCapacity>;
+  criticalLoad: number;
+  squashLoad: number;
+  chi: number;
+  bucklingLoad: number;
+  moment: number;
+  bendingMoment: number;
+  sectionModulus: number;
+}
+
+/** The leg column of a section and length from `columns`, worked out on first use. */
+function legColumn(
+  columns: Map<object, Map<number, LegColumn>>,
+  props: NonNullable<ProfileInfo['variant']>['sectionProperties'],
+  length: number,
+  K: number,
+  f0: number,
+  E: number,
+  racking: RackingResult,
+  legCount: number,
+): LegColumn {
+  let byLength = columns.get(props);
+  if (!byLength) columns.set(props, (byLength = new Map()));
+  let column = byLength.get(length);
+  if (column) return column;
+  const I = Math.min(props.ix, props.iy);
+  const cap = columnCapacity({ area: props.area, secondMoment: I, proofStrength: f0, elasticModulus: E, effectiveLength: K * length });
+  // Side loads on an unbraced frame: each leg takes an equal share as shear, bending it from its top joint.
+  const mx = racking.bracedX ? 0 : (racking.sideLoadX / legCount) * length;
+  const mz = racking.bracedZ ? 0 : (racking.sideLoadZ / legCount) * length;
+  const moment = Math.hypot(mx, mz);
+  column = {
+    cap,
+    criticalLoad: round(cap.criticalLoad),
+    squashLoad: round(cap.squashLoad),
+    chi: Math.round(cap.chi * 10000) / 10000,
+    bucklingLoad: round(cap.bucklingLoad),
+    moment,
+    bendingMoment: Math.round(moment),
+    sectionModulus: Math.min(props.sx, props.sy),
+  };
+  byLength.set(length, column);
+  return column;
+}
+
 function legChecks(ctx: AnalysisContext, legs: ProfileInfo[], loads: { force: number; x: number; z: number }[], racking: RackingResult, E: number, f0: number): LegResult[] {
   if (legs.length === 0) return [];
-  const shares = shareLegLoads(
-    legs.map((l) => ({ id: l.profile.id, x: l.startPoint[0], z: l.startPoint[2] })),
-    loads,
-  );
+  // Plan positions in typed lists: no object per leg.
+  const xs = new Float64Array(legs.length);
+  const zs = new Float64Array(legs.length);
+  for (let i = 0; i < legs.length; i++) {
+    xs[i] = legs[i].startPoint[0];
+    zs[i] = legs[i].startPoint[2];
+  }
+  const shares = shareLegLoadsAt(xs, zs, loads);
   const braced = racking.bracedX && racking.bracedZ;
   const endCondition = braced ? BRACED_LEG_END_CONDITION : UNBRACED_LEG_END_CONDITION;
   const K = EFFECTIVE_LENGTH_FACTORS[endCondition].recommended;
   const sf = ctx.design.settings.safetyFactor;
   const results: LegResult[] = [];
-  // Legs repeat a few sections and lengths: one column capacity per section and length.
-  const capacities = new Map<object, Map<number, ReturnType<typeof columnCapacity>>>();
+  // Legs repeat a few sections and lengths: one column capacity, rounded figure and side-load
+  // bending per section and length (the results share them).
+  const columns = new Map<object, Map<number, LegColumn>>();
+  // Feet and casters repeat a few catalogue parts: the last rating looked up is kept.
+  let lastPartId: string | undefined;
+  let lastRating: number | null = null;
+  // Legs come in runs of one section and length: the last column is kept beside the maps.
+  let lastProps: object | undefined;
+  let lastLength = NaN;
+  let lastColumn: LegColumn | undefined;
   for (let i = 0; i < legs.length; i++) {
     const leg = legs[i];
     const props = leg.variant?.sectionProperties;
     if (!props) continue;
-    let byLength = capacities.get(props);
-    if (!byLength) capacities.set(props, (byLength = new Map()));
-    let cap = byLength.get(leg.profile.length);
-    if (!cap) {
-      const I = Math.min(props.ix, props.iy);
-      cap = columnCapacity({ area: props.area, secondMoment: I, proofStrength: f0, elasticModulus: E, effectiveLength: K * leg.profile.length });
-      byLength.set(leg.profile.length, cap);
-    }
+    const length = leg.profile.length;
+    let column = props === lastProps && length === lastLength ? lastColumn : undefined;
+    if (!column) column = legColumn(columns, props, length, K, f0, E, racking, legs.length);
+    lastProps = props;
+    lastLength = length;
+    lastColumn = column;
+    const cap = column.cap;
     const load = shares[i];
-    // Side loads on an unbraced frame: each leg takes an equal share as shear, bending it from its top joint.
-    const mx = racking.bracedX ? 0 : (racking.sideLoadX / legs.length) * leg.profile.length;
-    const mz = racking.bracedZ ? 0 : (racking.sideLoadZ / legs.length) * leg.profile.length;
-    const moment = Math.hypot(mx, mz);
-    const combined = axialBendingUtilisation({ axialLoad: load, bucklingLoad: cap.bucklingLoad, moment, sectionModulus: Math.min(props.sx, props.sy), proofStrength: f0, safetyFactor: sf });
+    const combined = axialBendingUtilisation({ axialLoad: load, bucklingLoad: cap.bucklingLoad, moment: column.moment, sectionModulus: column.sectionModulus, proofStrength: f0, safetyFactor: sf });
     const utilisation = load / (cap.bucklingLoad / sf);
     const bottomEnd = leg.startPoint[1] <= leg.endPoint[1] ? leg.startAccessories : leg.endAccessories;
     let foot: (typeof bottomEnd)[number] | undefined;
-    for (const a of bottomEnd) {
+    for (let k = 0; k < bottomEnd.length; k++) {
+      const a = bottomEnd[k];
       if (a.kind === 'leveling-foot' || a.kind === 'caster') {
         foot = a;
         break;
       }
     }
-    const rating = foot ? (ctx.catalogue.accessories.get(foot.partId)?.demoLoadRating ?? null) : null;
-    // Written in the order the results have always had: the support, when there is one, before `ok`.
-    const result: Omit<LegResult, 'support' | 'ok'> & Partial<Pick<LegResult, 'support' | 'ok'>> = {
-      profileId: leg.profile.id,
-      length: leg.profile.length,
-      endCondition,
-      effectiveLengthFactor: K,
-      load: round(load),
-      criticalLoad: round(cap.criticalLoad),
-      squashLoad: round(cap.squashLoad),
-      chi: Math.round(cap.chi * 10000) / 10000,
-      bucklingLoad: round(cap.bucklingLoad),
-      utilisation: Math.round(utilisation * 10000) / 10000,
-      bendingMoment: Math.round(moment),
-      combinedUtilisation: Math.round(combined * 10000) / 10000,
-    };
-    if (foot) result.support = { accessoryId: foot.id, rating };
-    result.ok = combined <= 1 && (rating === null || load <= rating);
-    results.push(result as LegResult);
+    let rating: number | null = null;
+    if (foot) {
+      if (foot.partId !== lastPartId) {
+        lastPartId = foot.partId;
+        lastRating = ctx.catalogue.accessories.get(foot.partId)?.demoLoadRating ?? null;
+      }
+      rating = lastRating;
+    }
+    const ok = combined <= 1 && (rating === null || load <= rating);
+    // One literal per shape, written whole (the support, when there is one, before `ok`, in the
+    // order the results have always had): no properties added to a result after it is made.
+    results.push(
+      foot
+        ? {
+            profileId: leg.profile.id,
+            length,
+            endCondition,
+            effectiveLengthFactor: K,
+            load: round(load),
+            criticalLoad: column.criticalLoad,
+            squashLoad: column.squashLoad,
+            chi: column.chi,
+            bucklingLoad: column.bucklingLoad,
+            utilisation: Math.round(utilisation * 10000) / 10000,
+            bendingMoment: column.bendingMoment,
+            combinedUtilisation: Math.round(combined * 10000) / 10000,
+            support: { accessoryId: foot.id, rating },
+            ok,
+          }
+        : {
+            profileId: leg.profile.id,
+            length,
+            endCondition,
+            effectiveLengthFactor: K,
+            load: round(load),
+            criticalLoad: column.criticalLoad,
+            squashLoad: column.squashLoad,
+            chi: column.chi,
+            bucklingLoad: column.bucklingLoad,
+            utilisation: Math.round(utilisation * 10000) / 10000,
+            bendingMoment: column.bendingMoment,
+            combinedUtilisation: Math.round(combined * 10000) / 10000,
+            ok,
+          },
+    );
   }
   return results;
 }

@@ -56,11 +56,26 @@ export function cornerNotchTally(): CornerNotchTally {
  * length (mm). For callers that walk the design's joints without a `CornerJoint` per joint.
  */
 export function tallyCornerJoint(tally: CornerNotchTally, jointId: string, occupiedSlotLength: number | undefined): void {
-  // A frame has a handful of corner joints, so a list search stands in for a set.
-  if (occupiedSlotLength === undefined || occupiedSlotLength <= 0 || tally.jointIds.includes(jointId)) return;
+  if (occupiedSlotLength === undefined || occupiedSlotLength <= 0 || isCounted(tally.jointIds, jointId)) return;
   tally.jointIds.push(jointId);
   // The notch clears the connector's length in the slot beyond the engagement depth.
   tally.size = Math.max(tally.size, Math.round(occupiedSlotLength * 10) / 10);
+}
+
+/**
+ * Whether `ids` holds `id`. A frame has a handful of corner joints, so a list search stands in for
+ * a set; ids are compared by length and last character before whole. Ids made by joining strings
+ * (a generated frame's) are compared piece by piece, which made this test most of the tally's
+ * time, and most pairs of a frame's joint ids differ in length or in their last character.
+ */
+function isCounted(ids: readonly string[], id: string): boolean {
+  const n = id.length;
+  const last = n > 0 ? id.charCodeAt(n - 1) : 0;
+  for (let k = 0; k < ids.length; k++) {
+    const other = ids[k];
+    if (other.length === n && (n === 0 || other.charCodeAt(n - 1) === last) && other === id) return true;
+  }
+  return false;
 }
 
 /** The notch a tally calls for; joint ids in code-unit order (as `Array.prototype.sort` puts strings). */
