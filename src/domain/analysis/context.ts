@@ -154,6 +154,17 @@ export function areJoined(ctx: AnalysisContext, a: string, b: string): boolean {
   return false;
 }
 
+/** Joints by id, built on first use (few analyses need it). */
+export function jointByIdOf(ctx: AnalysisContext): Map<string, Joint> {
+  let byId = ctx.memo.get('jointById') as Map<string, Joint> | undefined;
+  if (!byId) {
+    byId = new Map();
+    for (const joint of ctx.design.joints) byId.set(joint.id, joint);
+    ctx.memo.set('jointById', byId);
+  }
+  return byId;
+}
+
 /** Every id in the document (profiles, joints, panels, accessories, sub-assemblies), built on first use. */
 export function allDesignIds(ctx: AnalysisContext): Set<string> {
   let ids = ctx.memo.get('allIds') as Set<string> | undefined;
@@ -205,14 +216,17 @@ export interface AnalysisContext {
   profileJointIndex: Int32Array;
   /** Per accessory (`design.accessories[a]`): the index of its profile, or −1 (none, or not in the design). */
   accessoryProfile: Int32Array;
-  /** Joints by id, built on first use (few analyses need it). */
-  readonly jointById: Map<string, Joint>;
   /** Spatial index over `profiles[i].box`. */
   profileGrid: UniformGrid;
   /** Memo for results several checks and outputs share, keyed by name and part id. */
   memo: Map<string, unknown>;
 }
 
+/**
+ * Builds the context. It is one object literal of plain data fields: an accessor in the literal
+ * makes the engine keep the object's properties in a hash table, so every `ctx.x` read in every
+ * check would be a look-up (memoised extras such as `jointByIdOf` go through `memo`).
+ */
 export function buildAnalysisContext(design: DesignDocument, catalogue: CatalogueIndex): AnalysisContext {
   // Made at its final length (a list grown by push is copied each time it fills).
   const profiles = new Array<ProfileInfo>(design.profiles.length);
@@ -249,7 +263,6 @@ export function buildAnalysisContext(design: DesignDocument, catalogue: Catalogu
     panelById.set(info.panel.id, info);
   }
 
-  let jointById: Map<string, Joint> | undefined;
   return {
     design,
     catalogue,
@@ -258,13 +271,6 @@ export function buildAnalysisContext(design: DesignDocument, catalogue: Catalogu
     profileById,
     panels,
     panelById,
-    get jointById(): Map<string, Joint> {
-      if (!jointById) {
-        jointById = new Map();
-        for (const joint of design.joints) jointById.set(joint.id, joint);
-      }
-      return jointById;
-    },
     jointMemberStart: jointMembers.start,
     jointMemberProfile: jointMembers.profile,
     profileJointStart: jointMembers.profileJointStart,

@@ -6,6 +6,7 @@
 import type { ToolItem } from '../analysis/types';
 import { threadFor, type ScrewSize } from '../catalogue/fastenerStandards';
 import type { AnalysisContext, ProfileInfo } from '../analysis/context';
+import { jointByIdOf } from '../analysis/context';
 import { formatNumber } from '../analysis/describe';
 import type { HardwareSummary } from './hardware';
 
@@ -116,7 +117,7 @@ export function toolList(ctx: AnalysisContext, hardware: HardwareSummary): ToolI
 
 function defaultDiameter(ctx: AnalysisContext, jointId: string | undefined, kind: string): number | null {
   if (!jointId) return null;
-  const joint = ctx.jointById.get(jointId);
+  const joint = jointByIdOf(ctx).get(jointId);
   const connector = joint ? ctx.catalogue.connectors.get(joint.connectorId) : undefined;
   return connector?.machining.find((m) => m.kind === kind)?.diameter ?? null;
 }
