@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { analyzeDesign } from '@/domain/analysis/analyze';
+import { analyzeDesign, createAnalysisContext } from '@/domain/analysis/analyze';
+import { jointByIdOf } from '@/domain/analysis/context';
 import { applyOperation } from '@/domain/design/operations';
 import { demoDesigns } from '@/domain/fixtures';
 import { boxFrame } from './checksDesigns';
@@ -59,4 +60,18 @@ describe('the demo designs', () => {
       expect(analysis.cutList).toHaveLength(design.profiles.length);
     });
   }
+});
+
+describe('the analysis context', () => {
+  it('is plain data fields only: an accessor on it makes the engine keep every context in hash-table mode', () => {
+    // Engine behaviour measured here (DEVELOPERS.md, "Analysis speed"): an object literal with a
+    // getter is built in dictionary mode, so every ctx.x read in every check became a look-up.
+    const ctx = createAnalysisContext(boxFrame());
+    const accessors = Object.entries(Object.getOwnPropertyDescriptors(ctx))
+      .filter(([, d]) => d.get !== undefined || d.set !== undefined)
+      .map(([name]) => name);
+    expect(accessors).toEqual([]);
+    expect(jointByIdOf(ctx).size).toBe(ctx.design.joints.length);
+    expect(jointByIdOf(ctx)).toBe(jointByIdOf(ctx));
+  });
 });
