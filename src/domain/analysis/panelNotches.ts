@@ -12,9 +12,8 @@ export function panelCornerNotches(ctx: AnalysisContext, info: PanelInfo): Corne
 
 /**
  * Every panel's corner notches, by panel index (`ctx.panels[i]`), worked out together on first
- * use and kept in one memo entry: the context's tables are read once for all panels (the context
- * object keeps its properties in a dictionary, a hash look-up per read), and the results sit in a
- * list made at its full length, not a map by id that grows and rehashes.
+ * use and kept in one memo entry: the context's tables are read once for all panels, and the
+ * results sit in a list made at its full length, not a map by id that grows and rehashes.
  */
 export function allPanelCornerNotches(ctx: AnalysisContext): readonly CornerNotches[] {
   let all = ctx.memo.get('cornerNotches') as CornerNotches[] | undefined;

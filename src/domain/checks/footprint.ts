@@ -93,7 +93,7 @@ function hasFootOrCaster(accessories: readonly { kind: string }[]): boolean {
 }
 
 /** Plan points (x, z), mm, in two growing lists of numbers: no pair list per point. */
-interface PlanPoints {
+export interface PlanPoints {
   x: number[];
   z: number[];
 }
@@ -106,7 +106,7 @@ function floorContactXZ(ctx: AnalysisContext): { points: PlanPoints; kind: 'feet
   const { floor } = frameLevels(ctx);
   const grid = ctx.profileGrid;
   const feet: PlanPoints = { x: [], z: [] };
-  // Read from the context once: its properties sit in a dictionary (a hash look-up per read).
+  // Read from the context once for the loop.
   const profiles = ctx.profiles;
   for (let i = 0; i < profiles.length; i++) {
     const p = profiles[i];
@@ -137,7 +137,7 @@ function floorContactXZ(ctx: AnalysisContext): { points: PlanPoints; kind: 'feet
  * `convexHull` of plan points in two lists: the points are ordered by index (no copy of each
  * point), and only the hull's corners become pairs. The same corners in the same order.
  */
-function convexHullXZ(points: PlanPoints): P2[] {
+export function convexHullXZ(points: PlanPoints): P2[] {
   const { x, z } = points;
   const columns = x.length > 2 && plainNumbers(x) && plainNumbers(z) ? columnEnds(x, z) : null;
   if (columns && columns.x.length >= 3) return chain(columns.x, columns.z);

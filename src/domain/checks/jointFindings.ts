@@ -33,9 +33,8 @@ const SLOT_CONNECTOR_KINDS = new Set(['corner-bracket', 'gusset-plate', 'conceal
 
 /**
  * What the per-joint checks read from the context, taken from it once, and per-analysis answers
- * that depend only on the catalogue part, so each is worked out once. The context object keeps
- * its properties in a dictionary (a hash look-up on every read); this record keeps them in fixed
- * slots, which matters for reads made once per joint.
+ * that depend only on the catalogue part, so each is worked out once: reads made once per joint
+ * then come from locals and one small record rather than from the context each time.
  */
 interface JointCheckCache {
   joints: readonly Joint[];

@@ -42,7 +42,7 @@ export function panelFitFindings(ctx: AnalysisContext): Finding[] {
   const out: Finding[] = [];
   const notches: { info: PanelInfo; notch: CornerNotches }[] = [];
   const opening = openingScratch();
-  // Read from the context once (its properties sit in a dictionary: a hash look-up per read).
+  // Read from the context once for every panel.
   const notchesByPanel = allPanelCornerNotches(ctx);
   const clearance = ctx.design.settings.panelClearance;
   for (const info of ctx.panels) {
