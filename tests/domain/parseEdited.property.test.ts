@@ -54,7 +54,7 @@ function apply(document: Record<string, Json>, change: Edit): void {
   const item = list[at];
   // An earlier edit may have put a non-object in the list: only removal, repeats and swaps apply.
   if ((typeof item !== 'object' || item === null) && !['remove', 'repeat', 'swap'].includes(change.kind)) return;
-  const fields = Object.keys(item);
+  const fields = typeof item === 'object' && item !== null ? Object.keys(item) : [];
   switch (change.kind) {
     case 'set': {
       if (fields.length === 0) break;
