@@ -141,28 +141,15 @@ export function convexHullXZ(points: PlanPoints): P2[] {
   const { x, z } = points;
   const columns = x.length > 2 && plainNumbers(x) && plainNumbers(z) ? columnEnds(x, z) : null;
   if (columns && columns.x.length >= 3) return chain(columns.x, columns.z);
+  // Otherwise (−0, non-finite numbers, or too few columns) every point, in the hull's sort order.
   const order: number[] = [];
   for (let k = 0; k < x.length; k++) order.push(k);
   order.sort((a, b) => x[a] - x[b] || z[a] - z[b]);
   if (order.length <= 2) return order.map((k) => [x[k], z[k]] as P2);
-  const lower: number[] = [];
-  for (let k = 0; k < order.length; k++) {
-    const p = order[k];
-    while (lower.length >= 2 && crossAt(x, z, lower[lower.length - 2], lower[lower.length - 1], p) <= 0) lower.pop();
-    lower.push(p);
-  }
-  const upper: number[] = [];
-  for (let k = order.length - 1; k >= 0; k--) {
-    const p = order[k];
-    while (upper.length >= 2 && crossAt(x, z, upper[upper.length - 2], upper[upper.length - 1], p) <= 0) upper.pop();
-    upper.push(p);
-  }
-  upper.pop();
-  lower.pop();
-  const hull: P2[] = [];
-  for (const k of lower) hull.push([x[k], z[k]]);
-  for (const k of upper) hull.push([x[k], z[k]]);
-  return hull;
+  return chain(
+    order.map((k) => x[k]),
+    order.map((k) => z[k]),
+  );
 }
 
 /** Whether every number is finite and none is −0 (the fast hull below assumes both). */

@@ -1,14 +1,13 @@
 /**
  * Structure estimates as data: per load case, beam deflection and bending stress of loaded members,
  * the reactions through their joints against the joints' slip capacity, leg loads shared by statics
- * and checked for flexural buckling (EN 1999-1-1 §6.3.1) with axial + bending (§6.3.3), shelf sag,
- * racking and tip-over. Tip-over is always run: the empty frame and every load case, pushed at the
- * top edge unless the load case names a height. Findings are made from these results in
- * `structureFindings.ts`. Units: mm, N, MPa, N·mm.
+ * and checked for flexural buckling (EN 1999-1-1 §6.3.1) with axial + bending (§6.3.3) in
+ * `legChecks.ts`, shelf sag, racking and tip-over. Tip-over is always run: the empty frame and
+ * every load case, pushed at the top edge unless the load case names a height. Findings are made
+ * from these results in `structureFindings.ts`. Units: mm, N, MPa, N·mm.
  */
 import type {
   JointLoadResult,
-  LegResult,
   MemberResult,
   PanelSagResult,
   RackingResult,
@@ -22,23 +21,17 @@ import { jointCapacity } from '../catalogue/jointCapacity';
 import type { DesignSettings, Load, LoadCase } from '../design/schema';
 import { pointAlongProfile } from '../geometry/profileGeometry';
 import { dot, type Vec3 } from '../geometry/vectors';
-import { axialBendingUtilisation, columnCapacity } from '../structure/aluminiumColumns';
 import { beamResponse, type BeamCase } from '../structure/beams';
-import { EFFECTIVE_LENGTH_FACTORS, type EndCondition } from '../structure/columns';
-import { shareLegLoadsAt } from '../structure/legLoads';
 import { oneWayStripDeflection, simplySupportedPlateDeflection } from '../structure/plates';
 import { PUSH_TEST_MIN_HEIGHT_MM, STABILITY_PUSH_FORCE_N } from '../structure/stability';
 import { tipOverForce } from '../structure/tipOver';
+import { legChecks } from './legChecks';
 import { memberAlong, type AnalysisContext, type PanelInfo, type ProfileInfo } from '../analysis/context';
 import { footprintLeverArm, frameLevels } from './footprint';
 import { findLegs, frameBracing, panelSupports } from './frameShape';
 
 /** Standard gravity, m/s² (exact by definition, CGPM 1901). */
 export const GRAVITY = 9.80665;
-/** Legs stand on feet: pinned at the floor. Braced frames: pinned at the top too (K = 1.0). */
-export const BRACED_LEG_END_CONDITION: EndCondition = 'pinned-pinned';
-/** Unbraced frames: pinned at the floor, held against rotation but free to sway at the top (K = 2.0). */
-export const UNBRACED_LEG_END_CONDITION: EndCondition = 'pinned-fixed-sway';
 /** A point load this close to mid-span (share of span) may use the fixed-ends centre-load case. */
 const CENTRE_BAND = 0.1;
 
@@ -329,150 +322,6 @@ function subtract(a: readonly number[], b: readonly number[]): Vec3 {
 
 function clampAlong(info: ProfileInfo, t: number): number {
   return Math.min(Math.max(t, 0), info.profile.length);
-}
-
-/** Per leg section and length: the column capacity, rounded for the results, and the side-load bending (N·mm). */
-interface LegColumn {
-  cap: ReturnType<typeof columnCapacity>;
-  criticalLoad: number;
-  squashLoad: number;
-  chi: number;
-  bucklingLoad: number;
-  moment: number;
-  bendingMoment: number;
-  sectionModulus: number;
-}
-
-/** The leg column of a section and length from `columns`, worked out on first use. */
-function legColumn(
-  columns: Map<object, Map<number, LegColumn>>,
-  props: NonNullable<ProfileInfo['variant']>['sectionProperties'],
-  length: number,
-  K: number,
-  f0: number,
-  E: number,
-  racking: RackingResult,
-  legCount: number,
-): LegColumn {
-  let byLength = columns.get(props);
-  if (!byLength) columns.set(props, (byLength = new Map()));
-  let column = byLength.get(length);
-  if (column) return column;
-  const I = Math.min(props.ix, props.iy);
-  const cap = columnCapacity({ area: props.area, secondMoment: I, proofStrength: f0, elasticModulus: E, effectiveLength: K * length });
-  // Side loads on an unbraced frame: each leg takes an equal share as shear, bending it from its top joint.
-  const mx = racking.bracedX ? 0 : (racking.sideLoadX / legCount) * length;
-  const mz = racking.bracedZ ? 0 : (racking.sideLoadZ / legCount) * length;
-  const moment = Math.hypot(mx, mz);
-  column = {
-    cap,
-    criticalLoad: round(cap.criticalLoad),
-    squashLoad: round(cap.squashLoad),
-    chi: Math.round(cap.chi * 10000) / 10000,
-    bucklingLoad: round(cap.bucklingLoad),
-    moment,
-    bendingMoment: Math.round(moment),
-    sectionModulus: Math.min(props.sx, props.sy),
-  };
-  byLength.set(length, column);
-  return column;
-}
-
-function legChecks(ctx: AnalysisContext, legs: ProfileInfo[], loads: { force: number; x: number; z: number }[], racking: RackingResult, E: number, f0: number): LegResult[] {
-  if (legs.length === 0) return [];
-  // Plan positions in typed lists: no object per leg.
-  const xs = new Float64Array(legs.length);
-  const zs = new Float64Array(legs.length);
-  for (let i = 0; i < legs.length; i++) {
-    xs[i] = legs[i].startPoint[0];
-    zs[i] = legs[i].startPoint[2];
-  }
-  const shares = shareLegLoadsAt(xs, zs, loads);
-  const braced = racking.bracedX && racking.bracedZ;
-  const endCondition = braced ? BRACED_LEG_END_CONDITION : UNBRACED_LEG_END_CONDITION;
-  const K = EFFECTIVE_LENGTH_FACTORS[endCondition].recommended;
-  const sf = ctx.design.settings.safetyFactor;
-  const results: LegResult[] = [];
-  // Legs repeat a few sections and lengths: one column capacity, rounded figure and side-load
-  // bending per section and length (the results share them).
-  const columns = new Map<object, Map<number, LegColumn>>();
-  // Feet and casters repeat a few catalogue parts: the last rating looked up is kept.
-  let lastPartId: string | undefined;
-  let lastRating: number | null = null;
-  // Legs come in runs of one section and length: the last column is kept beside the maps.
-  let lastProps: object | undefined;
-  let lastLength = NaN;
-  let lastColumn: LegColumn | undefined;
-  for (let i = 0; i < legs.length; i++) {
-    const leg = legs[i];
-    const props = leg.variant?.sectionProperties;
-    if (!props) continue;
-    const length = leg.profile.length;
-    let column = props === lastProps && length === lastLength ? lastColumn : undefined;
-    if (!column) column = legColumn(columns, props, length, K, f0, E, racking, legs.length);
-    lastProps = props;
-    lastLength = length;
-    lastColumn = column;
-    const cap = column.cap;
-    const load = shares[i];
-    const combined = axialBendingUtilisation({ axialLoad: load, bucklingLoad: cap.bucklingLoad, moment: column.moment, sectionModulus: column.sectionModulus, proofStrength: f0, safetyFactor: sf });
-    const utilisation = load / (cap.bucklingLoad / sf);
-    const bottomEnd = leg.startPoint[1] <= leg.endPoint[1] ? leg.startAccessories : leg.endAccessories;
-    let foot: (typeof bottomEnd)[number] | undefined;
-    for (let k = 0; k < bottomEnd.length; k++) {
-      const a = bottomEnd[k];
-      if (a.kind === 'leveling-foot' || a.kind === 'caster') {
-        foot = a;
-        break;
-      }
-    }
-    let rating: number | null = null;
-    if (foot) {
-      if (foot.partId !== lastPartId) {
-        lastPartId = foot.partId;
-        lastRating = ctx.catalogue.accessories.get(foot.partId)?.demoLoadRating ?? null;
-      }
-      rating = lastRating;
-    }
-    const ok = combined <= 1 && (rating === null || load <= rating);
-    // One literal per shape, written whole (the support, when there is one, before `ok`, in the
-    // order the results have always had): no properties added to a result after it is made.
-    results.push(
-      foot
-        ? {
-            profileId: leg.profile.id,
-            length,
-            endCondition,
-            effectiveLengthFactor: K,
-            load: round(load),
-            criticalLoad: column.criticalLoad,
-            squashLoad: column.squashLoad,
-            chi: column.chi,
-            bucklingLoad: column.bucklingLoad,
-            utilisation: Math.round(utilisation * 10000) / 10000,
-            bendingMoment: column.bendingMoment,
-            combinedUtilisation: Math.round(combined * 10000) / 10000,
-            support: { accessoryId: foot.id, rating },
-            ok,
-          }
-        : {
-            profileId: leg.profile.id,
-            length,
-            endCondition,
-            effectiveLengthFactor: K,
-            load: round(load),
-            criticalLoad: column.criticalLoad,
-            squashLoad: column.squashLoad,
-            chi: column.chi,
-            bucklingLoad: column.bucklingLoad,
-            utilisation: Math.round(utilisation * 10000) / 10000,
-            bendingMoment: column.bendingMoment,
-            combinedUtilisation: Math.round(combined * 10000) / 10000,
-            ok,
-          },
-    );
-  }
-  return results;
 }
 
 /** Each member's end reactions against the connectors at that end (slip per T-nut, or screw shear). */

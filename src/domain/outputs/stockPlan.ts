@@ -121,7 +121,7 @@ function preparePacking(input: StockPlanInput): PackingProblem {
 /**
  * Cuts longest first, ties by id: the order every packing here starts from (a new list), as the
  * stable `[...cuts].sort(byLengthDescending)` gives it. When the cuts already come longest first
- * (as the stock plans pass them), only each run of one length is sorted by id (`sortRunById`).
+ * (as the stock plans pass them), only each run of one length is sorted, by id.
  */
 export function sortCutsForPacking(cuts: readonly StockCut[]): StockCut[] {
   const out = cuts.slice();
@@ -131,83 +131,13 @@ export function sortCutsForPacking(cuts: readonly StockCut[]): StockCut[] {
     while (to < out.length && out[to].length === length) to++;
     // Not longest first (or not numbers): the plain sort.
     if (!Number.isFinite(length) || (to < out.length && !(out[to].length < length))) return [...cuts].sort(byLengthDescending);
-    if (to - from > 1) sortRunById(out, from, to);
+    if (to - from > 1) {
+      const run = out.slice(from, to).sort(byLengthDescending);
+      for (let k = 0; k < run.length; k++) out[from + k] = run[k];
+    }
     from = to;
   }
   return out;
-}
-
-/** 2^k for k = 0…52, exactly. */
-const POWERS_OF_TWO = Array.from({ length: 53 }, (_, k) => 2 ** k);
-
-/**
- * Stable sort of `list[from]` up to `list[to]` by id (as `byLengthDescending` orders cuts of one
- * length), in place. Frames have thousands of cuts of a length, and comparing ids was most of the
- * stock plan's sort: each id's first characters and its place are packed into one number (a
- * character code + 1 per byte, 0 past the end, so a shorter id sorts first), the numbers are
- * sorted natively, and only ids with the same first characters are compared, by insertion sort,
- * in their given order. Falls back to the comparison sort for ids that are not strings of
- * character codes below 255.
- */
-function sortRunById(list: StockCut[], from: number, to: number): void {
-  const n = to - from;
-  let indexBits = 1;
-  while (POWERS_OF_TWO[indexBits] < n) indexBits++;
-  const chars = Math.floor((52 - indexBits) / 8);
-  const fallback = () => {
-    const sorted = list.slice(from, to).sort(byLengthDescending);
-    for (let k = 0; k < n; k++) list[from + k] = sorted[k];
-  };
-  if (chars < 2) return fallback();
-  const scale = POWERS_OF_TWO[indexBits];
-  const keys = new Float64Array(n);
-  for (let k = 0; k < n; k++) {
-    const id = list[from + k].id;
-    if (typeof id !== 'string') return fallback();
-    let prefix = 0;
-    for (let c = 0; c < chars; c++) {
-      const code = c < id.length ? id.charCodeAt(c) + 1 : 0;
-      if (code > 255) return fallback();
-      prefix = prefix * 256 + code;
-    }
-    keys[k] = prefix * scale + k;
-  }
-  keys.sort();
-  const given = list.slice(from, to);
-  let groupStart = 0;
-  let groupPrefix = -1;
-  for (let k = 0; k < n; k++) {
-    // Exact: the keys are whole numbers below 2^52 and the scale a power of two.
-    const key = keys[k];
-    const prefix = Math.floor(key / scale);
-    const place = key - prefix * scale;
-    list[from + k] = given[place];
-    if (prefix !== groupPrefix) {
-      if (k - groupStart > 1) insertionSortById(list, from + groupStart, from + k);
-      groupStart = k;
-      groupPrefix = prefix;
-    }
-  }
-  if (n - groupStart > 1) insertionSortById(list, from + groupStart, to);
-}
-
-/** Stable sort of `list[from]` up to `list[to]` by id: insertion sort for a few, else the built-in sort. */
-function insertionSortById(list: StockCut[], from: number, to: number): void {
-  if (to - from > 16) {
-    const sorted = list.slice(from, to).sort(byLengthDescending);
-    for (let k = from; k < to; k++) list[k] = sorted[k - from];
-    return;
-  }
-  for (let i = from + 1; i < to; i++) {
-    const cut = list[i];
-    const id = cut.id;
-    let j = i - 1;
-    while (j >= from && list[j].id > id) {
-      list[j + 1] = list[j];
-      j--;
-    }
-    list[j + 1] = cut;
-  }
 }
 
 function byLengthDescending(a: StockCut, b: StockCut): number {
